@@ -1,0 +1,44 @@
+/**
+ * The part of the augmented Dickey-Fuller test shared by the unit-root test and the
+ * Engle-Granger residual test: resolve the lag option, search if asked, and fit the chosen
+ * regression on all the observations it can use (the reference library re-estimates the
+ * chosen lag on its full sample too, so statistics and nobs compare exactly).
+ */
+import { MooringInputError } from '../errors';
+import type { Deterministic } from '../result';
+import { adfRegression, type AdfRegression } from './adf-regression';
+import { chooseAdfLags, LAG_RULES, type LagChoice, type LagRule } from './adf-lag-search';
+import { resolveMaxLag } from './max-lag';
+
+/** A fixed number of lagged changes, or a rule that chooses it. */
+export type LagOption = number | LagRule;
+
+export interface AdfCoreOptions {
+  deterministic: Deterministic;
+  lags?: LagOption;
+  maxLags?: number;
+  /** Deterministic count used for the maximum-lag cap (the Engle-Granger residual test caps at T/2 - 1). */
+  capDeterministic?: Deterministic;
+}
+
+export interface AdfCore {
+  regression: AdfRegression;
+  lagRule: 'fixed' | LagRule;
+  maxLags: number;
+  choice: LagChoice | null;
+}
+
+export function adfCore(x: ArrayLike<number>, options: AdfCoreOptions): AdfCore {
+  const lags = options.lags ?? 'aic';
+  const cap = options.capDeterministic ?? options.deterministic;
+  if (typeof lags === 'number') {
+    const fixed = resolveMaxLag(x.length, cap, lags, 'number of lags');
+    return { regression: adfRegression(x, fixed, options.deterministic), lagRule: 'fixed', maxLags: fixed, choice: null };
+  }
+  if (!LAG_RULES.includes(lags)) {
+    throw new MooringInputError(`Unknown lag rule '${String(lags)}': use a whole number or one of ${LAG_RULES.join(', ')}.`);
+  }
+  const maxLags = resolveMaxLag(x.length, cap, options.maxLags);
+  const choice = chooseAdfLags(x, options.deterministic, maxLags, lags);
+  return { regression: adfRegression(x, choice.lags, options.deterministic), lagRule: lags, maxLags, choice };
+}

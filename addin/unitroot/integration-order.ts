@@ -1,0 +1,108 @@
+/**
+ * Order of integration d in {0, 1, 2} (or "above 2") by testing from the highest order down
+ * (Pantula 1989): ADF on the second differences, then the first differences, then the levels,
+ * stopping at the first unit root that is not rejected. KPSS confirms: at the chosen order the
+ * differenced series should look stationary to KPSS, and one difference fewer should not.
+ *
+ * Deterministic terms: the levels take the requested terms (default a constant); differences of
+ * a trending series have a constant, so differences use a constant unless "none" was asked.
+ * Series with fewer than 20 usable observations are refused (common practice: cointegration work
+ * needs at least about 20 observations).
+ */
+import { MooringInputError } from '../errors';
+import { DETERMINISTIC_WORDS, type Deterministic, type TestResult } from '../result';
+import { adfTest } from './adf';
+import { kpssTest } from './kpss';
+
+export const MIN_OBSERVATIONS = 20;
+
+export interface IntegrationOrderOptions {
+  alpha?: number;
+  deterministic?: Deterministic;
+}
+
+export interface OrderStep {
+  differences: number;
+  adf: TestResult;
+  kpss: TestResult;
+  adfRejects: boolean;
+  kpssRejects: boolean;
+}
+
+export interface IntegrationOrderResult {
+  name: string;
+  order: 0 | 1 | 2 | 'above 2';
+  /** True when KPSS tells the same story as ADF at the chosen order. */
+  agree: boolean;
+  deterministic: Deterministic;
+  alpha: number;
+  steps: OrderStep[];
+  verdict: string;
+  warnings: string[];
+}
+
+function difference(x: ArrayLike<number>, times: number): Float64Array {
+  let out = Float64Array.from(x as ArrayLike<number>);
+  for (let k = 0; k < times; k++) {
+    const next = new Float64Array(out.length - 1);
+    for (let i = 0; i < next.length; i++) next[i] = out[i + 1] - out[i];
+    out = next;
+  }
+  return out;
+}
+
+const ORDER_WORDS: Record<string, string> = {
+  '0': 'stationary in levels, I(0): it returns to its own mean',
+  '1': 'integrated of order 1, I(1): its level wanders but its changes are stationary',
+  '2': 'integrated of order 2, I(2): even its changes wander; only the changes of the changes are stationary',
+  'above 2': 'integrated of an order above 2: differencing twice still leaves a unit root',
+};
+
+export function integrationOrder(series: ArrayLike<number>, options: IntegrationOrderOptions = {}, name = 'the series'): IntegrationOrderResult {
+  const alpha = options.alpha ?? 0.05;
+  const deterministic = options.deterministic ?? 'const';
+  if (!DETERMINISTIC_WORDS.includes(deterministic)) {
+    throw new MooringInputError(`Unknown deterministic terms '${String(deterministic)}': use one of ${DETERMINISTIC_WORDS.join(', ')}.`);
+  }
+  if (!(alpha > 0 && alpha < 0.5)) throw new MooringInputError(`The significance level must lie between 0 and 0.5; got ${alpha}.`);
+  if (series.length - 2 < MIN_OBSERVATIONS) {
+    throw new MooringInputError(
+      `${name} has ${series.length} usable observations; deciding its order of integration needs at least ${MIN_OBSERVATIONS + 2} (common practice: about 20 after differencing twice).`,
+    );
+  }
+  const stepAt = (d: number): OrderStep => {
+    const x = difference(series, d);
+    const det: Deterministic = d === 0 ? deterministic : deterministic === 'none' ? 'none' : 'const';
+    const label = d === 0 ? name : d === 1 ? `changes in ${name}` : `second changes in ${name}`;
+    const adf = adfTest(x, { deterministic: det }, label);
+    const kpss = kpssTest(x, { deterministic: det === 'trend' ? 'trend' : 'const' }, label);
+    return { differences: d, adf, kpss, adfRejects: (adf.pValue ?? 1) < alpha, kpssRejects: (kpss.pValue ?? 0) < alpha };
+  };
+
+  const steps: OrderStep[] = [];
+  let order: IntegrationOrderResult['order'] = 0;
+  for (let d = 2; d >= 0; d--) {
+    const step = stepAt(d);
+    steps.push(step);
+    if (!step.adfRejects) {
+      order = d === 2 ? 'above 2' : ((d + 1) as 1 | 2);
+      break;
+    }
+  }
+  const numeric = order === 'above 2' ? 3 : order;
+  const atOrder = steps.find((s) => s.differences === numeric);
+  const below = steps.find((s) => s.differences === numeric - 1);
+  const kpssAtOrderFine = atOrder ? !atOrder.kpssRejects : true;
+  const kpssBelowRejects = below ? below.kpssRejects : true;
+  const agree = kpssAtOrderFine && kpssBelowRejects;
+
+  const warnings: string[] = [];
+  if (!agree) {
+    warnings.push(
+      `ADF and KPSS disagree for ${name}: ${!kpssAtOrderFine ? `KPSS rejects stationarity after ${numeric} difference(s)` : `KPSS does not reject stationarity with ${numeric - 1} difference(s)`}. Treat the order as uncertain; a longer sample or other deterministic terms may settle it.`,
+    );
+  }
+  if (series.length < 50) warnings.push(`Only ${series.length} observations: unit-root tests have little power this short.`);
+  const verdict = `At the ${Math.round(alpha * 1000) / 10}% level, ${name} is ${ORDER_WORDS[String(order)]}${agree ? ' (ADF and KPSS agree).' : ' (ADF decides; KPSS disagrees).'}`;
+  return { name, order, agree, deterministic, alpha, steps, verdict, warnings };
+}
