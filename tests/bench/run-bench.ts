@@ -1,0 +1,61 @@
+/**
+ * `npm run bench`: times the engine and prints one JSON object. Where Debian's
+ * python3-statsmodels is installed, the same series are timed with the reference library
+ * (tests/bench/reference_timing.py) and the ratio ours / theirs is printed beside each.
+ * Speed targets live here, never in the tests.
+ */
+import { execFileSync } from 'node:child_process';
+import { existsSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { cpus, tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { SeededRandom, randomWalk } from '../../addin/random';
+import { benchUnitRoot } from '../../addin/bench/unitroot-bench';
+import { benchCleaner } from '../../addin/bench/cleaner-bench';
+import type { Timing } from '../../addin/bench/timing';
+
+interface ReferenceTimes {
+  adfullerAicMs?: number;
+  cointAicMs?: number;
+  cointJohansenMs?: number;
+}
+
+function referenceTimes(spec: object): ReferenceTimes | string {
+  const python = '/usr/bin/python3';
+  const script = join(__dirname, '..', '..', 'tests', 'bench', 'reference_timing.py');
+  if (!existsSync(python) || !existsSync(script)) return 'python3 or the timing script is missing';
+  try {
+    const dir = mkdtempSync(join(tmpdir(), 'mooring-bench-'));
+    const file = join(dir, 'spec.json');
+    writeFileSync(file, JSON.stringify(spec));
+    const out = execFileSync(python, [script, file], { encoding: 'utf8', stdio: ['ignore', 'pipe', 'ignore'] });
+    return JSON.parse(out) as ReferenceTimes;
+  } catch {
+    return 'python3-statsmodels is not installed (apt-get install -y python3-statsmodels to compare)';
+  }
+}
+
+function main(): void {
+  const unitRoot = benchUnitRoot();
+  const cleaner = benchCleaner();
+  const walk = Array.from(randomWalk(new SeededRandom(11), 10_000, { start: 100 }));
+  const reference = referenceTimes({ adf: [walk] });
+  const comparisons: Record<string, unknown> = {};
+  if (typeof reference === 'object' && reference.adfullerAicMs) {
+    const ours = unitRoot[0].medianMs;
+    comparisons.adfAic10000 = { oursMs: ours, referenceMs: round(reference.adfullerAicMs), ratio: round(ours / reference.adfullerAicMs), goal: 0.05 };
+  }
+  const all: Timing[] = [...unitRoot, ...cleaner];
+  const report = {
+    machine: { node: process.version, cpus: cpus().length },
+    benchmarks: all,
+    reference: typeof reference === 'string' ? { skipped: reference } : comparisons,
+    allWithinTarget: all.every((t) => t.withinTarget !== false),
+  };
+  process.stdout.write(`${JSON.stringify(report, null, 2)}\n`);
+}
+
+function round(v: number): number {
+  return Math.round(v * 10000) / 10000;
+}
+
+main();
