@@ -1,0 +1,118 @@
+/**
+ * VAR lag order by information criteria (Lutkepohl 2005, sec. 4.3). Every order p = 0..M is
+ * fitted with a constant on the same rows t = M + 1..T (n = T - M), so the criteria compare like
+ * with like. With Sigma = E'E / n and free = pK^2 + K coefficients:
+ *   AIC = ln|Sigma| + 2 free / n,   BIC = ln|Sigma| + ln(n) free / n,
+ *   HQ  = ln|Sigma| + 2 ln(ln n) free / n,
+ *   FPE = ((n + Kp + 1) / (n - Kp - 1))^K |Sigma|.
+ * The smallest value wins; a tie goes to the smaller p. These are the reference library's
+ * conventions, so the orders and values compare exactly.
+ */
+import { CholeskyDecomposition, Matrix } from 'ml-matrix';
+import { MooringInputError } from '../errors';
+import { checkedBlock, checkedLagCount } from './var-design';
+import { fitVar } from './fit-var';
+
+export interface VarLagRow {
+  lags: number;
+  aic: number;
+  bic: number;
+  hq: number;
+  fpe: number;
+  /** ln|E'E / n|. */
+  logDetSigma: number;
+}
+
+export interface VarLagChoice {
+  aic: number;
+  bic: number;
+  hq: number;
+  fpe: number;
+  /** Largest order tried. */
+  maxLags: number;
+  /** How maxLags was set: "given" or the default rule in words. */
+  maxLagsRule: string;
+  /** Common sample size of every order: T - maxLags. */
+  nobs: number;
+  /** One row per order p = 0..maxLags. */
+  table: VarLagRow[];
+}
+
+/** Largest order the search can fit: floor((T - K - 1) / (1 + K)), so the largest model keeps K residual degrees of freedom. */
+export function largestVarLags(rows: number, variables: number): number {
+  return Math.floor((rows - variables - 1) / (1 + variables));
+}
+
+/**
+ * Default largest order: round(12 (T/100)^(1/4)), capped at largestVarLags. A ceiling that grows
+ * slowly with the sample (common practice, after Schwert 1989, from memory; also the reference library's default).
+ */
+export function defaultVarMaxLags(rows: number, variables: number): number {
+  return Math.min(Math.round(12 * (rows / 100) ** 0.25), largestVarLags(rows, variables));
+}
+
+/** ln det of a symmetric positive definite matrix, from its Cholesky factor. */
+function logDeterminant(sigma: number[][]): number {
+  const chol = new CholeskyDecomposition(new Matrix(sigma));
+  if (!chol.isPositiveDefinite()) {
+    throw new MooringInputError(
+      'The residuals of the VAR are exactly collinear, so the lag criteria cannot be computed: one series may be a copy or an exact combination of the others.',
+    );
+  }
+  const L = chol.lowerTriangularMatrix;
+  let s = 0;
+  for (let i = 0; i < sigma.length; i++) s += 2 * Math.log(L.get(i, i));
+  return s;
+}
+
+function argminFirst(values: readonly number[]): number {
+  let best = 0;
+  for (let i = 1; i < values.length; i++) if (values[i] < values[best]) best = i;
+  return best;
+}
+
+/** Chooses the VAR order of the block (one array per series) by AIC, BIC, HQ and FPE. */
+export function chooseVarLags(block: readonly ArrayLike<number>[], options: { maxLags?: number; names?: readonly string[] } = {}): VarLagChoice {
+  const series = checkedBlock(block, options.names);
+  const K = series.length;
+  const T = series[0].length;
+  const largest = largestVarLags(T, K);
+  if (largest < 1) {
+    throw new MooringInputError(
+      `Choosing a VAR order for ${K} series needs at least ${2 * K + 2} rows (one lag); the series have ${T}. Use a longer history.`,
+    );
+  }
+  let maxLags: number;
+  let maxLagsRule: string;
+  if (options.maxLags === undefined) {
+    maxLags = defaultVarMaxLags(T, K);
+    maxLagsRule = `default: round(12 (T/100)^(1/4)) = ${Math.round(12 * (T / 100) ** 0.25)}, capped at ${largest} for ${T} rows and ${K} series`;
+  } else {
+    maxLags = checkedLagCount(options.maxLags, 'The largest VAR order (maxLags)');
+    if (maxLags > largest) {
+      throw new MooringInputError(
+        `A largest VAR order of ${maxLags} is too many for ${T} rows and ${K} series: the largest allowed is ${largest} (floor((T - K - 1) / (1 + K))).`,
+      );
+    }
+    maxLagsRule = 'given';
+  }
+
+  const n = T - maxLags;
+  const table: VarLagRow[] = [];
+  for (let p = 0; p <= maxLags; p++) {
+    const fit = fitVar(series, p, { sampleStart: maxLags, names: options.names });
+    const logDetSigma = logDeterminant(fit.residualCovarianceMl);
+    const free = p * K * K + K;
+    const coefficientsPerEquation = K * p + 1;
+    table.push({
+      lags: p,
+      aic: logDetSigma + (2 * free) / n,
+      bic: logDetSigma + (Math.log(n) * free) / n,
+      hq: logDetSigma + (2 * Math.log(Math.log(n)) * free) / n,
+      fpe: ((n + coefficientsPerEquation) / (n - coefficientsPerEquation)) ** K * Math.exp(logDetSigma),
+      logDetSigma,
+    });
+  }
+  const pick = (key: 'aic' | 'bic' | 'hq' | 'fpe'): number => table[argminFirst(table.map((r) => r[key]))].lags;
+  return { aic: pick('aic'), bic: pick('bic'), hq: pick('hq'), fpe: pick('fpe'), maxLags, maxLagsRule, nobs: n, table };
+}
