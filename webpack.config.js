@@ -1,0 +1,204 @@
+// Mooring build: two named configurations.
+//
+//   cli    addin/cli/main.ts            -> dist/cli/mooring.js   (Node, executable, dependencies bundled)
+//   addin  functions/ and taskpane/     -> dist/                 (the Excel add-in, served as static files)
+//
+//   npm run build                       both, production
+//   npm run build:cli                   cli only (--config-name cli)
+//   npm start                           webpack serve --config-name addin on https://localhost:3000
+//
+// The manifest (manifest/manifest.xml) names the add-in files by their built names
+// (taskpane.html, functions.js, functions.json, assets/icon-*.png) under
+// https://localhost:3000/; keep those names stable. Type errors are reported by
+// `npm run typecheck` (tsc --noEmit), not by the bundler: ts-loader only transpiles.
+
+'use strict';
+
+const path = require('node:path');
+const fs = require('node:fs');
+const webpack = require('webpack');
+const HtmlWebpackPlugin = require('html-webpack-plugin');
+const CopyWebpackPlugin = require('copy-webpack-plugin');
+const CustomFunctionsMetadataPlugin = require('custom-functions-metadata-plugin');
+const { FunctionsMetadataPostProcessPlugin } = require('./scripts/webpack/functions-metadata.cjs');
+
+const ROOT = __dirname;
+const DIST = path.join(ROOT, 'dist');
+const DEV_SERVER_PORT = 3000;
+
+/**
+ * Files whose JSDoc `@customfunction` tags make functions.json. Each is also part of
+ * the functions bundle, and the metadata plugin appends the CustomFunctions.associate
+ * calls for its functions to that same file (see functions/functions.ts).
+ */
+const FUNCTION_SOURCES = [path.join(ROOT, 'functions', 'functions.ts')];
+
+/** Built file names the manifest points at. */
+const ADDIN_FILES = {
+  pane: 'taskpane.html',
+  functionsPage: 'functions.html',
+  functionsScript: 'functions.js',
+  functionsMetadata: 'functions.json',
+};
+
+const typeScriptRule = {
+  test: /\.ts$/,
+  exclude: /node_modules/,
+  use: {
+    loader: 'ts-loader',
+    options: {
+      configFile: path.join(ROOT, 'tsconfig.json'),
+      transpileOnly: true,
+      compilerOptions: { noEmit: false, sourceMap: true },
+    },
+  },
+};
+
+const resolve = {
+  extensions: ['.ts', '.js', '.json'],
+  // Allow `import './x.js'` to find x.ts as well as the extensionless form.
+  extensionAlias: { '.js': ['.ts', '.js'] },
+};
+
+/** Sets the executable bit on an emitted file (the CLI, run through its #! line). */
+class ExecutableBitPlugin {
+  constructor(filename) {
+    this.filename = filename;
+  }
+
+  apply(compiler) {
+    compiler.hooks.afterEmit.tapPromise('ExecutableBitPlugin', async (compilation) => {
+      const file = path.join(compilation.outputOptions.path, this.filename);
+      if (fs.existsSync(file)) await fs.promises.chmod(file, 0o755);
+    });
+  }
+}
+
+function cliConfig(mode) {
+  return {
+    name: 'cli',
+    mode,
+    target: 'node20',
+    context: ROOT,
+    entry: { mooring: './addin/cli/main.ts' },
+    output: {
+      path: path.join(DIST, 'cli'),
+      filename: 'mooring.js',
+      clean: true,
+    },
+    resolve,
+    module: { rules: [typeScriptRule] },
+    // A command line gains nothing from minifying; readable stack traces matter more.
+    optimization: { minimize: false },
+    devtool: 'source-map',
+    node: { __dirname: false, __filename: false },
+    performance: { hints: false },
+    plugins: [
+      new webpack.BannerPlugin({ banner: '#!/usr/bin/env node', raw: true, entryOnly: true }),
+      new ExecutableBitPlugin('mooring.js'),
+    ],
+  };
+}
+
+async function devServerOptions() {
+  // Only `webpack serve` gets here; a build never needs certificates.
+  const devCerts = require('office-addin-dev-certs');
+  let httpsOptions;
+  try {
+    httpsOptions = await devCerts.getHttpsServerOptions();
+  } catch (error) {
+    // Installing the CA into the system store needs sudo on Linux; the certificate files
+    // are generated before that step, so serve with them and say how to trust them.
+    const dir = path.join(require('node:os').homedir(), '.office-addin-dev-certs');
+    const files = { ca: 'ca.crt', cert: 'localhost.crt', key: 'localhost.key' };
+    if (!Object.values(files).every((f) => fs.existsSync(path.join(dir, f)))) throw error;
+    httpsOptions = Object.fromEntries(Object.entries(files).map(([k, f]) => [k, fs.readFileSync(path.join(dir, f))]));
+    console.warn(
+      `The development CA could not be installed (${String(error.message).split('\n')[0]}).\n` +
+        `Import ${path.join(dir, 'ca.crt')} into your browser's trusted authorities to load https://localhost:${DEV_SERVER_PORT}.`,
+    );
+  }
+  return {
+    port: DEV_SERVER_PORT,
+    host: 'localhost',
+    server: { type: 'https', options: httpsOptions },
+    // Excel (including Excel on the web) fetches functions.json and the scripts from its own origin.
+    headers: { 'Access-Control-Allow-Origin': '*' },
+    static: false,
+    client: { overlay: { errors: true, warnings: false } },
+  };
+}
+
+async function addinConfig(mode, serving) {
+  const htmlPage = (filename, template, chunks) =>
+    new HtmlWebpackPlugin({
+      filename,
+      template,
+      chunks,
+      chunksSortMode: 'manual',
+      scriptLoading: 'defer',
+      inject: 'head',
+    });
+
+  return {
+    name: 'addin',
+    mode,
+    target: ['web', 'es2022'],
+    context: ROOT,
+    entry: {
+      functions: FUNCTION_SOURCES,
+      taskpane: './taskpane/taskpane.ts',
+    },
+    output: {
+      path: DIST,
+      filename: '[name].js',
+      publicPath: '',
+      // dist/cli belongs to the cli configuration, which may be building at the same time.
+      clean: { keep: /^cli(\/|\\|$)/ },
+    },
+    resolve,
+    module: {
+      rules: [
+        typeScriptRule,
+        {
+          // Runs after the metadata plugin's own loader has appended the associate calls.
+          test: /\.ts$/,
+          include: FUNCTION_SOURCES,
+          use: {
+            loader: path.join(ROOT, 'scripts', 'webpack', 'guard-associations-loader.cjs'),
+            options: { metadataInput: FUNCTION_SOURCES },
+          },
+        },
+      ],
+    },
+    // No eval-based source maps: the pages' content security policy forbids eval.
+    devtool: 'source-map',
+    performance: { hints: false },
+    plugins: [
+      new CustomFunctionsMetadataPlugin({ input: FUNCTION_SOURCES, output: ADDIN_FILES.functionsMetadata }),
+      new FunctionsMetadataPostProcessPlugin({ filename: ADDIN_FILES.functionsMetadata }),
+      // With the shared runtime the pane page hosts the custom functions too, so it loads both bundles.
+      htmlPage(ADDIN_FILES.pane, './taskpane/taskpane.html', ['functions', 'taskpane']),
+      htmlPage(ADDIN_FILES.functionsPage, './functions/functions.html', ['functions']),
+      new CopyWebpackPlugin({
+        patterns: [
+          { from: 'manifest/manifest.xml', to: 'manifest.xml' },
+          { from: 'assets/icon-*.png', to: 'assets/[name][ext]' },
+          { from: 'taskpane/taskpane.css', to: 'taskpane.css' },
+          { from: 'docs/*.md', to: 'docs/[name][ext]', noErrorOnMissing: true },
+        ],
+      }),
+    ],
+    ...(serving ? { devServer: await devServerOptions() } : {}),
+  };
+}
+
+module.exports = async (env = {}, argv = {}) => {
+  const mode = argv.mode === 'development' ? 'development' : 'production';
+  const serving = Boolean(env.WEBPACK_SERVE);
+  return [cliConfig(mode), await addinConfig(mode, serving)];
+};
+
+module.exports.FUNCTION_SOURCES = FUNCTION_SOURCES;
+module.exports.ADDIN_FILES = ADDIN_FILES;
+module.exports.DEV_SERVER_PORT = DEV_SERVER_PORT;
