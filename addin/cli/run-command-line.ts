@@ -1,0 +1,132 @@
+/**
+ * The runner of the command line, over any command table: help, parsing, reading the CSV,
+ * running the command, printing the terminal report (with the cautions) or one JSON object,
+ * and mapping every failure to one line on standard error with an exit code: 2 for bad
+ * input, 1 for an internal error. Output goes through `io`, so tests run it in-process.
+ */
+import { readCsv, type CsvTable } from '../csv/read-csv';
+import { isMooringInputError, MooringInputError } from '../errors';
+import { closestWord, parseArguments } from './arguments';
+import { COMMON_OPTIONS, type Command, type CommonOptions } from './command';
+import { commandHelp, overallHelp } from './help';
+import { CAUTIONS, renderCautions } from './render/cautions';
+
+/** Where the runner reads and writes. */
+export interface CliIo {
+  stdout(s: string): void;
+  stderr(s: string): void;
+  /** The text of a file; throws (as fs does) when it cannot be read. */
+  readFile(path: string): string;
+}
+
+/** Exit codes. */
+export const EXIT_OK = 0;
+export const EXIT_INTERNAL = 1;
+export const EXIT_BAD_INPUT = 2;
+
+const HELP_WORDS = new Set(['--help', '-h', 'help']);
+
+/** Runs one command line against the table; returns the exit code. Never throws. */
+export function runCommandLine(argv: readonly string[], io: CliIo, commands: readonly Command[]): number {
+  try {
+    return dispatch(argv, io, commands);
+  } catch (e) {
+    if (isMooringInputError(e)) {
+      io.stderr(`mooring: ${oneLine(e.message)}\n`);
+      return EXIT_BAD_INPUT;
+    }
+    const message = e instanceof Error ? `${e.name}: ${e.message}` : String(e);
+    io.stderr(`mooring: internal error (${oneLine(message)}); please report it with the command that caused it\n`);
+    return EXIT_INTERNAL;
+  }
+}
+
+function dispatch(argv: readonly string[], io: CliIo, commands: readonly Command[]): number {
+  const names = commands.map((c) => c.name);
+  if (argv.length === 0) throw new MooringInputError(`no command given; the commands are ${names.join(', ')} (mooring --help describes them).`);
+  const [first, ...rest] = argv;
+  if (HELP_WORDS.has(first.toLowerCase())) {
+    if (rest.length === 0) {
+      io.stdout(overallHelp(commands));
+      return EXIT_OK;
+    }
+    io.stdout(commandHelp(findCommand(rest[0], commands)));
+    return EXIT_OK;
+  }
+  const command = findCommand(first, commands);
+  const end = rest.indexOf('--');
+  if ((end < 0 ? rest : rest.slice(0, end)).some((w) => w === '--help' || w === '-h')) {
+    io.stdout(commandHelp(command));
+    return EXIT_OK;
+  }
+  const args = parseArguments(rest, [...COMMON_OPTIONS, ...command.options], command.name);
+  if (args.positionals.length === 0) {
+    throw new MooringInputError(`${command.name} needs a CSV file: ${command.usage}.`);
+  }
+  if (args.positionals.length > 1) {
+    throw new MooringInputError(
+      `${command.name} takes one CSV file but got ${args.positionals.length} (${args.positionals.join(', ')}); put quotes around a name with spaces.`);
+  }
+  const file = args.positionals[0];
+  const common: CommonOptions = {
+    series: args.values.get('series'),
+    log: args.switches.has('log'),
+    skipGaps: args.switches.has('skip-gaps'),
+    json: args.switches.has('json'),
+  };
+  const table = readTable(file, io);
+  const output = command.run({ command: command.name, file, table, args, common });
+  if (common.json) {
+    const object = { command: command.name, file, ...output.json, cautions: CAUTIONS.slice() };
+    io.stdout(`${JSON.stringify(object, jsonValue, 2)}\n`);
+  } else {
+    io.stdout(`${output.terminal}\n\n${renderCautions()}\n`);
+  }
+  return EXIT_OK;
+}
+
+function findCommand(word: string, commands: readonly Command[]): Command {
+  const command = commands.find((c) => c.name === word.toLowerCase());
+  if (command) return command;
+  const near = closestWord(word.toLowerCase(), commands.map((c) => c.name));
+  const hint = near ? ` (did you mean ${near}?)` : '';
+  throw new MooringInputError(`unknown command '${word}'${hint}; the commands are ${commands.map((c) => c.name).join(', ')}.`);
+}
+
+function readTable(file: string, io: CliIo): CsvTable {
+  let text: string;
+  try {
+    text = io.readFile(file);
+  } catch (e) {
+    throw new MooringInputError(`cannot read '${file}': ${readFailure(e)}.`);
+  }
+  try {
+    return readCsv(text);
+  } catch (e) {
+    if (isMooringInputError(e)) throw new MooringInputError(`${file}: ${e.message}`, e.where);
+    throw e;
+  }
+}
+
+function readFailure(e: unknown): string {
+  const code = (e as { code?: unknown } | null)?.code;
+  switch (code) {
+    case 'ENOENT': return 'no such file; check the name and the folder';
+    case 'EISDIR': return 'it is a folder, not a file';
+    case 'EACCES':
+    case 'EPERM': return 'permission denied';
+    default: return e instanceof Error ? e.message : String(e);
+  }
+}
+
+/** JSON replacer: typed arrays as plain arrays, non-finite numbers as null. */
+function jsonValue(_key: string, value: unknown): unknown {
+  if (ArrayBuffer.isView(value) && !(value instanceof DataView)) return Array.from(value as unknown as ArrayLike<number>);
+  if (typeof value === 'number' && !Number.isFinite(value)) return null;
+  return value;
+}
+
+/** A message on one line: line breaks and runs of spaces become single spaces. */
+export function oneLine(message: string): string {
+  return message.replace(/\s*[\r\n]+\s*/g, ' ').trim();
+}
