@@ -1,0 +1,95 @@
+/**
+ * The cautions the Johansen rank test attaches to its result: deterministic terms that do
+ * not fit the data's drift, short samples, eigenvalues at or near 1, and the provenance of
+ * the restricted cases' p-values.
+ */
+import { studentTwoSidedP } from '../distributions';
+import type { JohansenCase } from './deterministic-case';
+
+/** Level of the simple drift check. */
+const DRIFT_LEVEL = 0.05;
+
+/**
+ * Whether each series drifts: a two-sided t-test of the mean of its changes x_t - x_{t-1}
+ * (t = mean / (sd / sqrt(N)), N changes, Student's t with N - 1 df) at 5%. A simple check:
+ * it ignores autocorrelation in the changes, which is enough for a warning.
+ */
+export function driftingSeries(block: readonly ArrayLike<number>[]): boolean[] {
+  return block.map((x) => {
+    const N = x.length - 1;
+    let mean = 0;
+    for (let t = 1; t <= N; t++) mean += x[t] - x[t - 1];
+    mean /= N;
+    let ss = 0;
+    for (let t = 1; t <= N; t++) ss += (x[t] - x[t - 1] - mean) ** 2;
+    const sd = Math.sqrt(ss / (N - 1));
+    if (!(sd > 0)) return mean !== 0;
+    return studentTwoSidedP(mean / (sd / Math.sqrt(N)), N - 1) < DRIFT_LEVEL;
+  });
+}
+
+/** Joins names as "A", "A and B", "A, B and C". */
+export function listNames(names: readonly string[]): string {
+  if (names.length <= 1) return names.join('');
+  return `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`;
+}
+
+/**
+ * Warnings when the case's assumption about drift does not match the data: the
+ * 'constant' case's critical values assume the data drift (a linear trend in the levels;
+ * Johansen 1995, Theorem 6.2), so driftless data over-reject there; 'none' and
+ * 'restricted-constant' assume no drift at all.
+ */
+export function driftWarnings(caseName: JohansenCase, block: readonly ArrayLike<number>[], names: readonly string[]): string[] {
+  const drifts = driftingSeries(block);
+  const drifting = names.filter((_, i) => drifts[i]);
+  if (caseName === 'constant' && drifting.length === 0) {
+    return [
+      "None of the series drifts (the mean change is insignificant at 5% for every series, by a simple t-test). The 'constant' case's critical values assume drifting data; on driftless data this case rejects too often and can report relations that are not there. Consider the 'restricted-constant' case.",
+    ];
+  }
+  if ((caseName === 'none' || caseName === 'restricted-constant') && drifting.length > 0) {
+    const verb = drifting.length === 1 ? 'drifts' : 'drift';
+    return [
+      `${listNames(drifting)} ${verb} (mean change significant at 5%, by a simple t-test), but the '${caseName}' case assumes no drift in the data. Consider the 'constant' case (or 'restricted-trend' if the relations themselves trend).`,
+    ];
+  }
+  return [];
+}
+
+/**
+ * Warnings for short samples: under 50 observations, or fewer than 10 observations per
+ * coefficient of each equation (mK lagged changes, the levels block, the unrestricted
+ * deterministic terms). The tables are asymptotic, and the trace test then rejects too
+ * often (Reinsel & Ahn 1992; Cheung & Lai 1993).
+ */
+export function sampleWarnings(nobs: number, coefficientsPerEquation: number, corrected: boolean): string[] {
+  const out: string[] = [];
+  const hint = corrected ? '' : ' The small-sample correction (Reinsel & Ahn 1992) makes the statistics more conservative.';
+  if (nobs < 50) {
+    out.push(`Only ${nobs} observations: the critical values are asymptotic and the test tends to find too many relations in short samples.${hint}`);
+  } else if (nobs < 10 * coefficientsPerEquation) {
+    out.push(`${nobs} observations for ${coefficientsPerEquation} coefficients per equation (fewer than 10 per coefficient): the asymptotic critical values may be unreliable; consider fewer lags or series.${hint}`);
+  }
+  return out;
+}
+
+/** Largest eigenvalue before a warning: squared canonical correlations this high are rare in prices. */
+const NEAR_ONE = 0.95;
+
+/** A warning when the largest eigenvalue is at or near 1 (near-exact combinations, or too many lags). */
+export function eigenvalueWarnings(eigenvalues: readonly number[]): string[] {
+  const top = eigenvalues[0];
+  if (!(top > NEAR_ONE)) return [];
+  return [
+    `The largest eigenvalue is ${top.toFixed(4)}, close to 1: the statistics are then very large and fragile. This usually means one series is nearly a copy or an exact mix of the others, or the lags are too many for the rows.`,
+  ];
+}
+
+/** The note that the restricted cases' critical values and p-values rest on Mooring's simulation. */
+export function simulatedTableWarning(caseName: JohansenCase): string[] {
+  if (caseName !== 'restricted-constant' && caseName !== 'restricted-trend') return [];
+  return [
+    `Critical values and p-values for the '${caseName}' case come from Mooring's own simulation of the limiting distribution alone; no published table was at hand to check them against.`,
+  ];
+}

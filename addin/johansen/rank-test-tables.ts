@@ -1,0 +1,45 @@
+/**
+ * Where the Johansen rank test takes its critical values and p-values from, case by case.
+ *
+ * Critical values: the published MacKinnon-Haug-Michelis (1999) quantiles for the cases
+ * they cover ('none', 'constant', 'trend'; n - r up to 12); Mooring's seeded simulation of
+ * the limiting distributions (addin/tables/johansen-simulated.json) for the two restricted
+ * cases, which that table does not cover. p-values: the simulation, for all five cases.
+ */
+import { publishedJohansenCritical } from '../tables/johansen-published';
+import type { JohansenCase, JohansenStatisticKind } from './deterministic-case';
+import { johansenCriticalValues, johansenPValue } from './johansen-pvalue';
+
+/** Which table a critical value came from. */
+export type CriticalSource = 'published' | 'simulated';
+
+/** The cases covered by the published table. */
+export function hasPublishedTable(caseName: JohansenCase): caseName is 'none' | 'constant' | 'trend' {
+  return caseName === 'none' || caseName === 'constant' || caseName === 'trend';
+}
+
+/**
+ * The 10%, 5% and 1% upper-tail critical values for H0: rank <= r with nMinusR = n - r,
+ * and where they came from (published where a published value exists, else simulated).
+ */
+export function rankCriticalValues(kind: JohansenStatisticKind, caseName: JohansenCase, nMinusR: number): { critical: Record<string, number>; source: CriticalSource } {
+  if (hasPublishedTable(caseName)) {
+    const cv = publishedJohansenCritical(kind, caseName, nMinusR);
+    return { critical: { '10%': cv['10%'], '5%': cv['5%'], '1%': cv['1%'] }, source: 'published' };
+  }
+  const cv = johansenCriticalValues(kind, caseName, nMinusR);
+  return { critical: { '10%': cv['10%'], '5%': cv['5%'], '1%': cv['1%'] }, source: 'simulated' };
+}
+
+/**
+ * The asymptotic p-value of a rank statistic (upper tail) from the simulated table, with a
+ * note in words when the statistic lies beyond the table's ends so the value is a bound.
+ */
+export function rankPValue(statistic: number, kind: JohansenStatisticKind, caseName: JohansenCase, nMinusR: number): { pValue: number; note?: string } {
+  const { pValue, beyondTable } = johansenPValue(statistic, kind, caseName, nMinusR);
+  if (beyondTable === null) return { pValue };
+  const note = beyondTable === 'below'
+    ? `beyond the table: the p-value is below ${pValue}`
+    : `beyond the table: the p-value is above ${pValue}`;
+  return { pValue, note };
+}
