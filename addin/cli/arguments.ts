@@ -68,8 +68,12 @@ export function parseArguments(words: readonly string[], specs: readonly OptionS
   return parsed;
 }
 
-/** The candidate closest to a mistyped word (at most two edits away, or a prefix), or null. */
+/**
+ * The candidate closest to a mistyped word, or null when none is close: a candidate the word
+ * begins, or one within a third of the word's length in edits (at least one edit).
+ */
 export function closestWord(word: string, candidates: readonly string[]): string | null {
+  const allowed = Math.max(1, Math.floor(word.length / 3));
   let best: string | null = null;
   let bestDistance = Infinity;
   for (const c of candidates) {
@@ -79,18 +83,21 @@ export function closestWord(word: string, candidates: readonly string[]): string
       bestDistance = d;
     }
   }
-  return bestDistance <= 2 ? best : null;
+  return bestDistance <= allowed ? best : null;
 }
 
-/** Levenshtein distance: the fewest insertions, deletions and substitutions turning a into b. */
+/**
+ * Edit distance with adjacent transpositions (optimal string alignment): the fewest
+ * insertions, deletions, substitutions and swaps of neighbours turning a into b.
+ */
 function editDistance(a: string, b: string): number {
-  let previous = Array.from({ length: b.length + 1 }, (_, j) => j);
+  const d: number[][] = Array.from({ length: a.length + 1 }, (_, i) => Array.from({ length: b.length + 1 }, (_, j) => (i === 0 ? j : j === 0 ? i : 0)));
   for (let i = 1; i <= a.length; i++) {
-    const current = [i];
     for (let j = 1; j <= b.length; j++) {
-      current[j] = Math.min(previous[j] + 1, current[j - 1] + 1, previous[j - 1] + (a[i - 1] === b[j - 1] ? 0 : 1));
+      const cost = a[i - 1] === b[j - 1] ? 0 : 1;
+      d[i][j] = Math.min(d[i - 1][j] + 1, d[i][j - 1] + 1, d[i - 1][j - 1] + cost);
+      if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1]) d[i][j] = Math.min(d[i][j], d[i - 2][j - 2] + 1);
     }
-    previous = current;
   }
-  return previous[b.length];
+  return d[a.length][b.length];
 }

@@ -12,7 +12,7 @@ function lineWithDate(line: number, date: string | null): string {
 /** "Data", "Sample" and "Skipped" lines for one series. */
 export function renderSampleTerminal(sample: SampleInfo): string {
   const out = [
-    labelled('Data', `${sample.file}, column ${sample.column}${sample.logged ? ', natural logs' : ''}`),
+    labelled('Data', `${sample.file === '-' ? 'standard input' : sample.file}, column ${sample.column}${sample.logged ? ', natural logs' : ''}`),
     labelled('Sample', `${sample.observations} values, ${lineWithDate(sample.firstLine, sample.firstDate)} to ${lineWithDate(sample.lastLine, sample.lastDate)}`),
   ];
   const n = sample.skipped.length;
