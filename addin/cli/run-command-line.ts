@@ -19,9 +19,11 @@ export interface CliIo {
   readFile(path: string): string;
 }
 
-/** Exit codes. */
+/** Exit code: done. */
 export const EXIT_OK = 0;
+/** Exit code: an internal error (a defect of ours, reported on one line). */
 export const EXIT_INTERNAL = 1;
+/** Exit code: bad input (a MooringInputError, an unknown option, a missing file). */
 export const EXIT_BAD_INPUT = 2;
 
 const HELP_WORDS = new Set(['--help', '-h', 'help']);
@@ -43,7 +45,7 @@ export function runCommandLine(argv: readonly string[], io: CliIo, commands: rea
 
 function dispatch(argv: readonly string[], io: CliIo, commands: readonly Command[]): number {
   const names = commands.map((c) => c.name);
-  if (argv.length === 0) throw new MooringInputError(`no command given; the commands are ${names.join(', ')} (mooring --help describes them).`);
+  if (argv.length === 0) throw new MooringInputError(`No command given; the commands are ${names.join(', ')} (mooring --help describes them).`);
   const [first, ...rest] = argv;
   if (HELP_WORDS.has(first.toLowerCase())) {
     if (rest.length === 0) {
@@ -90,7 +92,7 @@ function findCommand(word: string, commands: readonly Command[]): Command {
   if (command) return command;
   const near = closestWord(word.toLowerCase(), commands.map((c) => c.name));
   const hint = near ? ` (did you mean ${near}?)` : '';
-  throw new MooringInputError(`unknown command '${word}'${hint}; the commands are ${commands.map((c) => c.name).join(', ')}.`);
+  throw new MooringInputError(`Unknown command '${word}'${hint}; the commands are ${commands.map((c) => c.name).join(', ')}.`);
 }
 
 function readTable(file: string, io: CliIo): CsvTable {
@@ -98,7 +100,7 @@ function readTable(file: string, io: CliIo): CsvTable {
   try {
     text = io.readFile(file);
   } catch (e) {
-    throw new MooringInputError(`cannot read '${file}': ${readFailure(e)}.`);
+    throw new MooringInputError(`Cannot read '${file}': ${readFailure(e)}.`);
   }
   try {
     return readCsv(text);

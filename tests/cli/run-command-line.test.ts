@@ -102,8 +102,8 @@ describe('runner: help', () => {
 
 describe('runner: bad input is one line on stderr, exit 2, no stack', () => {
   const cases: [string, string[], RegExp][] = [
-    ['no command', [], /^mooring: no command given; the commands are mean, crash/],
-    ['unknown command', ['maen', 'p.csv'], /^mooring: unknown command 'maen' \(did you mean mean\?\)/],
+    ['no command', [], /^mooring: No command given; the commands are mean, crash/],
+    ['unknown command', ['maen', 'p.csv'], /^mooring: Unknown command 'maen' \(did you mean mean\?\)/],
     ['unknown option', ['mean', 'p.csv', '--seris', 'Walk'], /^mooring: Unknown option --seris for mean \(did you mean --series\?\); its options are --series, --log, --skip-gaps, --json, --style\.$/],
     ['wrong option word', ['mean', 'p.csv', '--series', 'Walk', '--style', 'loud'], /^mooring: --style must be one of plain, fancy, not 'loud'\.$/],
     ['missing value', ['mean', 'p.csv', '--series'], /^mooring: --series needs a value: --series NAME\.$/],
@@ -111,10 +111,10 @@ describe('runner: bad input is one line on stderr, exit 2, no stack', () => {
     ['repeated option', ['mean', 'p.csv', '--json', '--json'], /^mooring: --json is given more than once/],
     ['missing file argument', ['mean', '--series', 'Walk'], /^mooring: mean needs a CSV file: mooring mean <file\.csv> --series NAME\.$/],
     ['two files', ['mean', 'a.csv', 'b.csv'], /^mooring: mean takes one CSV file but got 2 \(a\.csv, b\.csv\)/],
-    ['file not found', ['mean', 'nowhere.csv', '--series', 'Walk'], /^mooring: cannot read 'nowhere\.csv': no such file; check the name and the folder\.$/],
+    ['file not found', ['mean', 'nowhere.csv', '--series', 'Walk'], /^mooring: Cannot read 'nowhere\.csv': no such file; check the name and the folder\.$/],
     ['unknown series', ['mean', 'p.csv', '--series', 'Crude'], /^mooring: No column is named 'Crude'; the series are: Walk, Calm, Drift\.$/],
     ['no series chosen', ['mean', 'p.csv'], /^mooring: mean needs --series NAME to choose a column; the series are: Walk, Calm, Drift\.$/],
-    ['help for an unknown command', ['help', 'nope'], /^mooring: unknown command 'nope'/],
+    ['help for an unknown command', ['help', 'nope'], /^mooring: Unknown command 'nope'/],
   ];
   for (const [what, argv, pattern] of cases) {
     it(what, () => {
