@@ -54,9 +54,12 @@ export function reducedRankRegression(design: JohansenDesign): ReducedRankFit {
 
   const qr = new HouseholderQr(shortRun, n);
   if (!qr.isFullRank()) {
-    const name = design.shortRunNames[qr.firstDependentColumn];
+    const j = qr.firstDependentColumn;
+    const name = design.shortRunNames[j];
     throw new MooringInputError(
-      `The test cannot separate ${name} from the lagged changes and terms before it: one series copies another (or a multiple or shifted copy of it), or a series moves by the same amount every row. Remove the series responsible.`,
+      j < design.shortRun.length - design.unrestrictedCount
+        ? `The test cannot separate ${name} from the lagged changes before it: one series copies or mixes others (for example C = 2A + B + constant). Remove the series responsible.`
+        : `The test cannot separate ${name} from the lagged changes: some series (or mix of series) moves by the same amount every row. Remove the series responsible.`,
     );
   }
   const levelTails = levels.map((c) => qr.qtY(c).subarray(k));
