@@ -50,15 +50,11 @@ describe('cleanSeries: blanks at the ends', () => {
     const cells: unknown[] = new Array(1_048_576).fill('');
     const x = prices(2_500);
     for (let i = 0; i < x.length; i++) cells[i] = x[i];
-    cleanSeries(cells); // warm-up
-    const t0 = performance.now();
     const s = cleanSeries(cells, { name: 'Crude' });
-    const ms = performance.now() - t0;
     expect(s.values.length).toBe(2_500);
     expect(s.trailingBlanks).toBe(1_048_576 - 2_500);
     expect(s.values[2_499]).toBe(x[2_499]);
-    // loose guard against a quadratic or allocating scan; the 20 ms target is benchmarked separately
-    expect(ms).toBeLessThan(250);
+    // speed (the 20 ms target) is measured by `npm run bench`, not here
   });
 
   it('treats null, undefined, empty and all-space strings at the end as blanks', () => {
