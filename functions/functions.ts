@@ -16,6 +16,9 @@
 // `@helpurl https://localhost:3000/docs/functions.md#<anchor>`. Only a new file
 // holding `@customfunction` tags needs adding to FUNCTION_SOURCES.
 
+// Types for CustomFunctions.Error, .Invocation and friends (tsconfig lists only node and office-js).
+/// <reference types="custom-functions-runtime" />
+
 import { addinVersion } from './version';
 
 /**
