@@ -5,6 +5,7 @@
 //
 //   npm run build                       both, production
 //   npm run build:cli                   cli only (--config-name cli)
+//   npm test                            typecheck, this build, then vitest (tests read dist/)
 //   npm start                           webpack serve --config-name addin on https://localhost:3000
 //
 // The manifest (manifest/manifest.xml) names the add-in files by their built names
