@@ -1,0 +1,151 @@
+/**
+ * Dynamic OLS (Saikkonen 1991; Stock & Watson 1993): the long-run coefficient of y on x from
+ *   y_t = c + beta x_t + sum_{j=-k..k} d_j Δx_{t-j} + e_t,
+ * whose leads and lags of Δx soak up the correlation between the equilibrium error and the
+ * changes in x, so that beta's t-ratio is asymptotically normal once its standard error uses
+ * the long-run variance of e instead of its variance (Hamilton 1994, sec. 19.3):
+ *   se_HAC(beta) = se_OLS(beta) * lambda / s,
+ * lambda^2 the Bartlett (Newey-West) long-run variance of e with the Newey-West (1994)
+ * automatic bandwidth, s^2 = SSR / (n - k). p-values are two-sided standard normal.
+ *
+ * Leads and lags k: 'aic' (default) minimises AIC over k = 0..kmax on the common sample kmax
+ * allows, from one QR factorisation (the columns are ordered so each k nests the one
+ * before: [x, 1, Δx_t, Δx_{t-1}, Δx_{t+1}, ..., Δx_{t-k}, Δx_{t+k}]), then refits the choice
+ * on every row it can use, as the ADF lag search does. kmax defaults to floor(T^(1/3))
+ * (a common rule of thumb: it grows with T slowly enough for the asymptotics of Saikkonen
+ * 1991), capped so the regression keeps at least 10 residual degrees of freedom.
+ */
+import { normalCdf } from '../distributions';
+import { MooringInputError } from '../errors';
+import { HouseholderQr } from '../linalg/householder-qr';
+import { gaussianLogLikelihood, leastSquares } from '../regression/least-squares';
+import { bartlettLongRunVariance, neweyWestBandwidth } from '../regression/long-run-variance';
+
+export interface DynamicOlsOptions {
+  /** Leads and lags of Δx on each side: a whole number or 'aic' (default). */
+  leadsLags?: number | 'aic';
+  /** Largest k the AIC search tries (default floor(T^(1/3)), capped). */
+  maxLeadsLags?: number;
+  /** Bartlett bandwidth of the long-run variance: a whole number or 'auto' (Newey-West 1994, default). */
+  bandwidth?: number | 'auto';
+}
+
+export interface DynamicOlsFit {
+  beta: number;
+  intercept: number;
+  /** HAC standard error of beta (long-run variance of the residual). */
+  standardError: number;
+  tValue: number;
+  /** Two-sided standard-normal p-value of beta = 0. */
+  pValue: number;
+  /** Ordinary (non-HAC) standard error of beta, for comparison only. */
+  olsStandardError: number;
+  leadsLags: number;
+  leadsLagsRule: 'fixed' | 'aic';
+  maxLeadsLags: number | null;
+  bandwidth: number;
+  /** Rows in the regression: T - 1 - 2k. */
+  nobs: number;
+  residuals: Float64Array;
+}
+
+/** Residual degrees of freedom the largest model must keep. */
+const MIN_DEGREES_OF_FREEDOM = 10;
+
+/** The largest k the data allow: T - 1 - 2k rows must exceed 3 + 2k columns by MIN_DEGREES_OF_FREEDOM. */
+export function largestLeadsLags(T: number): number {
+  return Math.floor((T - 4 - MIN_DEGREES_OF_FREEDOM) / 4);
+}
+
+/** Default kmax: floor(T^(1/3)), capped at largestLeadsLags(T). */
+export function defaultMaxLeadsLags(T: number): number {
+  return Math.min(Math.floor(Math.cbrt(T)), largestLeadsLags(T));
+}
+
+/** Design of the DOLS regression with k leads and lags over rows t = from..to (0-based). */
+function dynamicOlsDesign(y: ArrayLike<number>, x: ArrayLike<number>, k: number, from: number, to: number): { response: Float64Array; columns: Float64Array[]; names: string[] } {
+  const n = to - from + 1;
+  const response = new Float64Array(n);
+  const level = new Float64Array(n);
+  const ones = new Float64Array(n).fill(1);
+  const shifts = [0];
+  for (let j = 1; j <= k; j++) shifts.push(j, -j); // lag j, then lead j
+  const changes = shifts.map(() => new Float64Array(n));
+  for (let r = 0; r < n; r++) {
+    const t = from + r;
+    response[r] = y[t];
+    level[r] = x[t];
+    shifts.forEach((s, c) => {
+      changes[c][r] = x[t - s] - x[t - s - 1];
+    });
+  }
+  const names = ['x', 'constant', ...shifts.map((s) => (s === 0 ? 'change' : s > 0 ? `change lag ${s}` : `change lead ${-s}`))];
+  return { response, columns: [level, ones, ...changes], names };
+}
+
+/** AIC choice of k in 0..kmax on the common sample of kmax. */
+function chooseLeadsLags(y: ArrayLike<number>, x: ArrayLike<number>, kmax: number): number {
+  const T = y.length;
+  const { response, columns } = dynamicOlsDesign(y, x, kmax, kmax + 1, T - 1 - kmax);
+  const n = response.length;
+  const ssr = new HouseholderQr(columns, n).nestedSsr(response);
+  let best = 0;
+  let bestAic = Infinity;
+  for (let k = 0; k <= kmax; k++) {
+    const size = 3 + 2 * k;
+    const aic = -2 * gaussianLogLikelihood(ssr[size], n) + 2 * size;
+    if (aic < bestAic) {
+      bestAic = aic;
+      best = k;
+    }
+  }
+  return best;
+}
+
+export function dynamicOls(y: ArrayLike<number>, x: ArrayLike<number>, options: DynamicOlsOptions = {}): DynamicOlsFit {
+  const T = y.length;
+  const cap = largestLeadsLags(T);
+  if (cap < 0) throw new MooringInputError(`${T} observations are too few for dynamic OLS: it needs at least ${4 + MIN_DEGREES_OF_FREEDOM}.`);
+  const requested = options.leadsLags ?? 'aic';
+  let k: number;
+  let kmax: number | null = null;
+  if (typeof requested === 'number') {
+    if (!Number.isInteger(requested) || requested < 0) throw new MooringInputError(`The number of leads and lags must be a whole number of 0 or more; got ${requested}.`);
+    if (requested > cap) throw new MooringInputError(`${requested} leads and lags are too many for ${T} observations: the largest allowed is ${cap}.`);
+    k = requested;
+  } else if (requested === 'aic') {
+    kmax = options.maxLeadsLags ?? defaultMaxLeadsLags(T);
+    if (!Number.isInteger(kmax) || kmax < 0) throw new MooringInputError(`The largest number of leads and lags must be a whole number of 0 or more; got ${kmax}.`);
+    if (kmax > cap) throw new MooringInputError(`A largest number of leads and lags of ${kmax} is too large for ${T} observations: the largest allowed is ${cap}.`);
+    k = chooseLeadsLags(y, x, kmax);
+  } else {
+    throw new MooringInputError(`Unknown leads-and-lags rule '${String(requested)}': use a whole number or aic.`);
+  }
+
+  const design = dynamicOlsDesign(y, x, k, k + 1, T - 1 - k);
+  const fit = leastSquares(design.response, design.columns, { names: design.names });
+  const e = fit.residuals;
+  const bw = options.bandwidth ?? 'auto';
+  if (bw !== 'auto' && typeof bw !== 'number') throw new MooringInputError(`Unknown bandwidth '${String(bw)}': use a whole number or auto.`);
+  const bandwidth = bw === 'auto' ? neweyWestBandwidth(e) : bw;
+  const lambda2 = bartlettLongRunVariance(e, bandwidth);
+  const olsSe = fit.standardErrors[0];
+  // A negative long-run variance cannot arise with the Bartlett kernel (its weights keep it positive semi-definite).
+  const standardError = olsSe * Math.sqrt(lambda2 / fit.sigma2);
+  const beta = fit.coefficients[0];
+  const tValue = beta / standardError;
+  return {
+    beta,
+    intercept: fit.coefficients[1],
+    standardError,
+    tValue,
+    pValue: 2 * (1 - normalCdf(Math.abs(tValue))),
+    olsStandardError: olsSe,
+    leadsLags: k,
+    leadsLagsRule: typeof requested === 'number' ? 'fixed' : 'aic',
+    maxLeadsLags: kmax,
+    bandwidth,
+    nobs: fit.nobs,
+    residuals: e,
+  };
+}
