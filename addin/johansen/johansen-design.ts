@@ -64,7 +64,6 @@ export function johansenDesign(block: readonly ArrayLike<number>[], lags: number
   const m = block.length;
   const T = block[0].length;
   const n = T - lags - 1;
-  const first = lags + 1; // data row of the first change Δx_t in the sample
   const terms = TERMS[caseName];
 
   const deterministic = (term: 'constant' | 'trend'): Float64Array => {
@@ -73,22 +72,17 @@ export function johansenDesign(block: readonly ArrayLike<number>[], lags: number
     return col;
   };
 
-  const changes: Float64Array[] = [];
-  const levels: Float64Array[] = [];
-  const levelNames: string[] = [];
-  for (let s = 0; s < m; s++) {
-    const x = block[s];
-    const change = new Float64Array(n);
-    const level = new Float64Array(n);
-    for (let i = 0; i < n; i++) {
-      const t = first + i;
-      change[i] = x[t] - x[t - 1];
-      level[i] = x[t - 1];
-    }
-    changes.push(change);
-    levels.push(level);
-    levelNames.push(`the level of '${names[s]}'`);
-  }
+  // Each series column is a window onto one array per series (no copies): with
+  // d[u] = x[u+1] - x[u], row i (data row t = K + 1 + i) has Δx_t = d[K + i],
+  // Δx_{t-j} = d[K + i - j] and x_{t-1} = x[K + i].
+  const diffs = block.map((x) => {
+    const d = new Float64Array(T - 1);
+    for (let u = 0; u < T - 1; u++) d[u] = x[u + 1] - x[u];
+    return d;
+  });
+  const changes = diffs.map((d) => d.subarray(lags, lags + n));
+  const levels = block.map((x) => Float64Array.from(x as ArrayLike<number>).subarray(lags, lags + n));
+  const levelNames = names.map((name) => `the level of '${name}'`);
   if (terms.inRelation !== null) {
     levels.push(deterministic(terms.inRelation));
     levelNames.push(`the ${terms.inRelation} inside the relations`);
@@ -98,13 +92,7 @@ export function johansenDesign(block: readonly ArrayLike<number>[], lags: number
   const shortRunNames: string[] = [];
   for (let j = 1; j <= lags; j++) {
     for (let s = 0; s < m; s++) {
-      const x = block[s];
-      const col = new Float64Array(n);
-      for (let i = 0; i < n; i++) {
-        const t = first + i - j;
-        col[i] = x[t] - x[t - 1];
-      }
-      shortRun.push(col);
+      shortRun.push(diffs[s].subarray(lags - j, lags - j + n));
       shortRunNames.push(`the change of '${names[s]}' lagged ${j}`);
     }
   }
