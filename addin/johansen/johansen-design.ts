@@ -80,8 +80,8 @@ export function johansenDesign(block: readonly ArrayLike<number>[], lags: number
     for (let u = 0; u < T - 1; u++) d[u] = x[u + 1] - x[u];
     return d;
   });
-  const changes = diffs.map((d) => d.subarray(lags, lags + n));
-  const levels = block.map((x) => Float64Array.from(x as ArrayLike<number>).subarray(lags, lags + n));
+  const changes: Float64Array[] = diffs.map((d) => d.subarray(lags, lags + n));
+  const levels: Float64Array[] = block.map((x) => Float64Array.from(x as ArrayLike<number>).subarray(lags, lags + n));
   const levelNames = names.map((name) => `the level of '${name}'`);
   if (terms.inRelation !== null) {
     levels.push(deterministic(terms.inRelation));
