@@ -7,8 +7,9 @@ import { MooringInputError } from '../errors';
 import { requireJohansenCase, type JohansenCase } from './deterministic-case';
 import { termInRelation, unrestrictedTermCount } from './johansen-design';
 
-/** Fewest and most series in one system (the tables cover n - r up to 12). */
+/** Fewest series in one system. */
 export const MIN_SERIES = 2;
+/** Most series in one system (the tables cover n - r up to 12). */
 export const MAX_SERIES = 12;
 
 /** The options after checking, with defaults filled in. */

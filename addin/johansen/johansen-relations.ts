@@ -13,6 +13,7 @@ import type { ReducedRankFit } from './reduced-rank-regression';
 /** Relative size below which the first series' weight is treated as zero. */
 const NO_WEIGHT = 1e-10;
 
+/** The relations, their loadings and deterministic coefficients, as matrices with one column per relation. */
 export interface NormalisedRelations {
   /** beta[i][j]: weight of series i in relation j. */
   beta: number[][];

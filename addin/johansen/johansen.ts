@@ -22,6 +22,7 @@ import { reducedRankRegression } from './reduced-rank-regression';
 
 export type { JohansenCase } from './deterministic-case';
 
+/** Options of johansenTest; every field has a default. */
 export interface JohansenOptions {
   /** Deterministic case (default 'constant'); see deterministic-case.ts. */
   case?: JohansenCase;
@@ -33,6 +34,7 @@ export interface JohansenOptions {
   smallSampleCorrection?: boolean;
 }
 
+/** Everything the Johansen test reports: both statistic sequences, the rank choices, the relations and the verdict. */
 export interface JohansenResult {
   case: JohansenCase;
   lags: number;

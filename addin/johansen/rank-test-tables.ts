@@ -5,6 +5,9 @@
  * they cover ('none', 'constant', 'trend'; n - r up to 12); Mooring's seeded simulation of
  * the limiting distributions (addin/tables/johansen-simulated.json) for the two restricted
  * cases, which that table does not cover. p-values: the simulation, for all five cases.
+ * Because the two sources are separate estimates, a statistic right at a published critical
+ * value can have a simulated p-value a little either side of the level; the rank choice
+ * goes by the p-value.
  */
 import { publishedJohansenCritical } from '../tables/johansen-published';
 import type { JohansenCase, JohansenStatisticKind } from './deterministic-case';
