@@ -116,7 +116,7 @@ export function johansenTest(block: ArrayLike<number>[], options: JohansenOption
     }
     return {
       test: kind === 'trace' ? 'Johansen trace' : 'Johansen maximum eigenvalue',
-      title: `Johansen ${kind === 'trace' ? 'trace' : 'maximum-eigenvalue'} test of at most ${r} relation${r === 1 ? '' : 's'} among ${who}`,
+      title: `Johansen ${kind === 'trace' ? 'trace' : 'maximum-eigenvalue'} test of ${atMost(r)} among ${who}`,
       statisticName: kind === 'trace' ? 'trace' : 'lambda-max',
       statistic,
       pValue,
@@ -127,10 +127,10 @@ export function johansenTest(block: ArrayLike<number>[], options: JohansenOption
       lagRule: 'fixed',
       nobs: n,
       deterministic: DETERMINISTIC_OF_CASE[caseName],
-      nullHypothesis: r === 0 ? `no long-run relation among ${who}` : `at most ${r} long-run relation${r === 1 ? '' : 's'} among ${who}`,
+      nullHypothesis: `${atMost(r)} among ${who}`,
       alternative: kind === 'trace'
-        ? `more than ${r} long-run relation${r === 1 ? '' : 's'} among ${who}`
-        : `exactly ${r + 1} long-run relation${r === 0 ? '' : 's'} among ${who}`,
+        ? `${r === 0 ? 'at least 1 long-run relation' : `more than ${relations(r)}`} among ${who}`
+        : `exactly ${relations(r + 1)} among ${who}`,
       warnings: [...warnings],
       details,
     };
@@ -160,4 +160,14 @@ export function johansenTest(block: ArrayLike<number>[], options: JohansenOption
   };
   if (design.inRelation !== null) result.deterministicInRelation = relations.deterministic;
   return result;
+}
+
+/** "1 long-run relation", "2 long-run relations". */
+function relations(count: number): string {
+  return `${count} long-run relation${count === 1 ? '' : 's'}`;
+}
+
+/** The null hypothesis' count in words: "no long-run relation", "at most 2 long-run relations". */
+function atMost(r: number): string {
+  return r === 0 ? 'no long-run relation' : `at most ${relations(r)}`;
 }

@@ -25,6 +25,9 @@ describe('Johansen result shape and consistency', () => {
     expect(r.trace[0].nullHypothesis).toBe('no long-run relation among Crude, Diesel and Freight');
     expect(r.trace[1].nullHypothesis).toBe('at most 1 long-run relation among Crude, Diesel and Freight');
     expect(r.trace[1].alternative).toBe('more than 1 long-run relation among Crude, Diesel and Freight');
+    expect(r.trace[0].alternative).toBe('at least 1 long-run relation among Crude, Diesel and Freight');
+    expect(r.maxEigen[0].alternative).toBe('exactly 1 long-run relation among Crude, Diesel and Freight');
+    expect(r.trace[0].title).toBe('Johansen trace test of no long-run relation among Crude, Diesel and Freight');
     expect(r.maxEigen[1].alternative).toBe('exactly 2 long-run relations among Crude, Diesel and Freight');
     for (let i = 0; i < 2; i++) expect(r.trace[i].statistic).toBeGreaterThan(r.trace[i + 1].statistic);
     expect(r.trace[2].statistic).toBeCloseTo(r.maxEigen[2].statistic, 12);
