@@ -129,8 +129,8 @@ export function johansenTest(block: ArrayLike<number>[], options: JohansenOption
       deterministic: DETERMINISTIC_OF_CASE[caseName],
       nullHypothesis: `${atMost(r)} among ${who}`,
       alternative: kind === 'trace'
-        ? `${r === 0 ? 'at least 1 long-run relation' : `more than ${relations(r)}`} among ${who}`
-        : `exactly ${relations(r + 1)} among ${who}`,
+        ? `${r === 0 ? 'at least 1 long-run relation' : `more than ${relationCount(r)}`} among ${who}`
+        : `exactly ${relationCount(r + 1)} among ${who}`,
       warnings: [...warnings],
       details,
     };
@@ -163,11 +163,11 @@ export function johansenTest(block: ArrayLike<number>[], options: JohansenOption
 }
 
 /** "1 long-run relation", "2 long-run relations". */
-function relations(count: number): string {
+function relationCount(count: number): string {
   return `${count} long-run relation${count === 1 ? '' : 's'}`;
 }
 
 /** The null hypothesis' count in words: "no long-run relation", "at most 2 long-run relations". */
 function atMost(r: number): string {
-  return r === 0 ? 'no long-run relation' : `at most ${relations(r)}`;
+  return r === 0 ? 'no long-run relation' : `at most ${relationCount(r)}`;
 }
