@@ -100,7 +100,7 @@ export function chooseVarLags(block: readonly ArrayLike<number>[], options: { ma
   const n = T - maxLags;
   const table: VarLagRow[] = [];
   for (let p = 0; p <= maxLags; p++) {
-    const fit = fitVar(series, p, { sampleStart: maxLags, names: options.names });
+    const fit = fitVar(series, p, { sampleStart: maxLags, names: options.names, withoutCovariance: true });
     const logDetSigma = logDeterminant(fit.residualCovarianceMl);
     const free = p * K * K + K;
     const coefficientsPerEquation = K * p + 1;

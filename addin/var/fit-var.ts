@@ -22,6 +22,8 @@ export interface FitVarOptions {
   sampleStart?: number;
   /** Names of the series, for messages and coefficient labels. */
   names?: readonly string[];
+  /** Skip the coefficient covariances when only residuals are needed (the lag-order search). */
+  withoutCovariance?: boolean;
 }
 
 export interface VarFit {
@@ -39,7 +41,7 @@ export interface VarFit {
   regressorNames: string[];
   /** coefficients[r][e]: coefficient of regressor r in the equation of variable e. */
   coefficients: number[][];
-  /** The least-squares fit of each equation (covariance sigma_e^2 (Z'Z)^{-1}). */
+  /** The least-squares fit of each equation (covariance sigma_e^2 (Z'Z)^{-1}, empty when withoutCovariance). */
   equations: LeastSquaresFit[];
   /** n - Kp - d: residual degrees of freedom of every equation. */
   dfResid: number;
@@ -75,7 +77,7 @@ export function fitVar(block: readonly ArrayLike<number>[], lags: number, option
   }
 
   const design = varDesign(series, lags, trend, sampleStart, names);
-  const equations = design.responses.map((y) => leastSquares(y, design.columns, { names: design.columnNames }));
+  const equations = design.responses.map((y) => leastSquares(y, design.columns, { names: design.columnNames, withoutCovariance: options.withoutCovariance }));
   const coefficients = design.columns.map((_, r) => equations.map((eq) => eq.coefficients[r]));
   const dfResid = n - k;
   const cross = residualCrossProducts(equations);
