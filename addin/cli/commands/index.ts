@@ -4,9 +4,17 @@
  */
 import type { Command } from '../command';
 import { adfCommand } from './adf';
+import { ecmCommand } from './ecm';
+import { egCommand } from './eg';
+import { hedgeCommand } from './hedge';
 import { kpssCommand } from './kpss';
 import { orderCommand } from './order';
+import { poCommand } from './po';
 import { ppCommand } from './pp';
+import { spreadCommand } from './spread';
 
 /** Every command, in help order. */
-export const MOORING_COMMANDS: readonly Command[] = [adfCommand, kpssCommand, ppCommand, orderCommand];
+export const MOORING_COMMANDS: readonly Command[] = [
+  adfCommand, kpssCommand, ppCommand, orderCommand,
+  egCommand, poCommand, hedgeCommand, ecmCommand, spreadCommand,
+];

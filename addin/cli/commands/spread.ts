@@ -1,0 +1,114 @@
+/** `mooring spread`: the spread of a pair under a hedge ratio, its half-life and z-scores. */
+import { dynamicOlsHedgeRatio, olsHedgeRatio, reverseOlsHedgeRatio, totalLeastSquaresHedgeRatio } from '../../cointegration/hedge-ratio';
+import { MooringInputError } from '../../errors';
+import { halfLife } from '../../spread/half-life';
+import { spreadSeries } from '../../spread/spread-series';
+import { rollingZScore, zScore } from '../../spread/z-score';
+import type { Command } from '../command';
+import { choiceValue, wholeNumberValue } from '../option-values';
+import { formatStatistic, heading, labelled } from '../render/format';
+import { relationFromContext, relationJson, relationSampleTerminal, X_OPTION, Y_OPTION } from './relation-input';
+
+const HEDGE_WORDS = ['ols', 'reverse-ols', 'tls', 'dols'] as const;
+type HedgeWord = (typeof HEDGE_WORDS)[number];
+
+const HEDGE_LABEL: Record<HedgeWord | 'given', string> = {
+  ols: 'OLS of y on x',
+  'reverse-ols': 'OLS of x on y, turned round',
+  tls: 'total least squares',
+  dols: 'dynamic OLS',
+  given: 'as given',
+};
+
+/** A decimal number for --beta or --intercept; undefined when absent. */
+function decimalOption(option: string, raw: string | undefined): number | undefined {
+  if (raw === undefined) return undefined;
+  const t = raw.trim();
+  if (!/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(t)) throw new MooringInputError(`--${option} must be a number such as 1.25 or -0.4, not '${raw}'.`);
+  return Number(t);
+}
+
+/** The spread command. */
+export const spreadCommand: Command = {
+  name: 'spread',
+  summary: 'spread of a pair under a hedge ratio: values, half-life and z-scores',
+  description: [
+    'Builds spread = y - intercept - beta x, with beta and the intercept from the hedge estimator you choose (OLS of y on x by default) ' +
+      'or as given with --beta and --intercept. Reports how fast the spread returns to its mean (half-life, from a first-order autoregression) ' +
+      'and how far it stands from its mean in standard deviations, over the whole sample and, with --window, over a trailing window.',
+    'The JSON output carries every value of the spread and of its z-scores.',
+  ],
+  usage: 'mooring spread <file.csv> --y NAME --x NAME [options]',
+  options: [
+    Y_OPTION,
+    X_OPTION,
+    { name: 'hedge', value: HEDGE_WORDS.join('|'), help: 'how to estimate beta and the intercept (default ols)' },
+    { name: 'beta', value: 'NUMBER', help: 'use this hedge ratio instead of estimating one' },
+    { name: 'intercept', value: 'NUMBER', help: 'with --beta: the intercept to subtract (default 0)' },
+    { name: 'window', value: 'N', help: 'also give z-scores over a trailing window of N rows (at least 3)' },
+    { name: 'period', value: 'WORD', help: 'what one row is, for the verdict: day, week, ... (default: period)' },
+  ],
+  examples: ['mooring spread prices.csv --y Diesel --x Gasoil --log --window 60 --period day', 'mooring spread prices.csv --y Diesel --x Gasoil --beta 1.1 --intercept 0.4 --json'],
+  run(context) {
+    const hedgeWord = choiceValue('hedge', context.args.values.get('hedge'), HEDGE_WORDS);
+    const givenBeta = decimalOption('beta', context.args.values.get('beta'));
+    const givenIntercept = decimalOption('intercept', context.args.values.get('intercept'));
+    if (givenBeta !== undefined && hedgeWord !== undefined) throw new MooringInputError('Give either --beta or --hedge, not both: --beta fixes the hedge ratio, --hedge estimates it.');
+    if (givenIntercept !== undefined && givenBeta === undefined) throw new MooringInputError('--intercept goes with --beta; without --beta the hedge estimator gives the intercept.');
+    const window = wholeNumberValue('window', context.args.values.get('window'), 'rows');
+    const period = context.args.values.get('period')?.trim() || 'period';
+    const input = relationFromContext(context, true);
+    const y = input.y.series.values;
+    const x = input.xs[0].series.values;
+    const names = { y: input.names.y, x: input.names.xs[0] };
+
+    const method: HedgeWord | 'given' = givenBeta !== undefined ? 'given' : (hedgeWord ?? 'ols');
+    const line =
+      method === 'given' ? { beta: givenBeta as number, intercept: givenIntercept ?? 0 }
+      : method === 'ols' ? olsHedgeRatio(y, x)
+      : method === 'reverse-ols' ? reverseOlsHedgeRatio(y, x)
+      : method === 'tls' ? totalLeastSquaresHedgeRatio(y, x)
+      : dynamicOlsHedgeRatio(y, x).ratio;
+    const values = spreadSeries(y, x, line.beta, line.intercept, names);
+    const life = halfLife(values, period);
+    const z = zScore(values);
+    const rolling = window === undefined ? null : rollingZScore(values, window);
+
+    const last = values.length - 1;
+    const when = input.y.sample.lastDate ? ` (${input.y.sample.lastDate})` : '';
+    const out = [
+      heading(`Spread of ${names.y} against ${names.x}`),
+      '',
+      labelled('Spread', `${names.y} - ${formatStatistic(line.intercept)} - ${formatStatistic(line.beta)} ${names.x}`),
+      labelled('Hedge ratio', `${formatStatistic(line.beta)} (${HEDGE_LABEL[method]})`),
+      labelled('Observations', String(values.length)),
+      labelled('Mean', formatStatistic(z.mean)),
+      labelled('Standard deviation', formatStatistic(z.standardDeviation)),
+      labelled('Half-life', life.halfLife === null ? (life.note ?? 'none') : `${formatStatistic(life.halfLife)} ${period}s${life.note ? ` (${life.note})` : ''}`),
+      labelled('Verdict', life.verdict),
+      labelled('Latest value', `${formatStatistic(values[last])}${when}: z-score ${formatStatistic(z.values[last])} over the whole sample` +
+        (rolling ? `, ${formatStatistic(rolling[last])} over the last ${window} rows` : '')),
+      '',
+      relationSampleTerminal(input),
+    ];
+    return {
+      terminal: out.join('\n'),
+      json: {
+        ...relationJson(input),
+        hedge: method,
+        beta: line.beta,
+        intercept: line.intercept,
+        values,
+        halfLife: life.halfLife,
+        halfLifeNote: life.note ?? null,
+        lambda: life.lambda,
+        verdict: life.verdict,
+        mean: z.mean,
+        standardDeviation: z.standardDeviation,
+        zscore: z.values,
+        window: window ?? null,
+        rollingZscore: rolling,
+      },
+    };
+  },
+};
