@@ -17,7 +17,7 @@ describe('Granger F: lag choice, wording and refusals', () => {
       const r = grangerF(x, y, { lags: rule }, names);
       expect(r.lagRule).toBe(rule);
       expect(r.lags).toBe(Math.max(1, sel[rule]));
-      const fixed = grangerF(x, y, { lags: r.lags }, names);
+      const fixed = grangerF(x, y, { lags: r.lags as number }, names);
       expect(r.statistic).toBe(fixed.statistic);
     }
     // The pair was simulated as a VAR(2) (tests/reference/README.md): both criteria should find 2.
