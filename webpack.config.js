@@ -5,6 +5,7 @@
 //
 //   npm run build                       both, production
 //   npm run build:cli                   cli only (--config-name cli)
+//   npm run bench                       the benchmark runner (--env bench --config-name bench) -> dist/bench/
 //   npm test                            typecheck, this build, then vitest (tests read dist/)
 //   npm start                           webpack serve --config-name addin on https://localhost:3000
 //
@@ -98,6 +99,23 @@ function cliConfig(mode) {
       new webpack.BannerPlugin({ banner: '#!/usr/bin/env node', raw: true, entryOnly: true }),
       new ExecutableBitPlugin('mooring.js'),
     ],
+  };
+}
+
+/** The benchmark runner (npm run bench): Node, like the CLI, built only on request. */
+function benchConfig(mode) {
+  return {
+    name: 'bench',
+    mode,
+    target: 'node20',
+    context: ROOT,
+    entry: { 'run-bench': './tests/bench/run-bench.ts' },
+    output: { path: path.join(DIST, 'bench'), filename: '[name].js', clean: true },
+    resolve,
+    module: { rules: [typeScriptRule] },
+    optimization: { minimize: false },
+    node: { __dirname: false, __filename: false },
+    performance: { hints: false },
   };
 }
 
@@ -197,7 +215,10 @@ async function addinConfig(mode, serving) {
 module.exports = async (env = {}, argv = {}) => {
   const mode = argv.mode === 'development' ? 'development' : 'production';
   const serving = Boolean(env.WEBPACK_SERVE);
-  return [cliConfig(mode), await addinConfig(mode, serving)];
+  const configs = [cliConfig(mode), await addinConfig(mode, serving)];
+  // `webpack --env bench --config-name bench` builds the benchmark runner; plain builds skip it.
+  if (env.bench) configs.push(benchConfig(mode));
+  return configs;
 };
 
 module.exports.FUNCTION_SOURCES = FUNCTION_SOURCES;

@@ -21,7 +21,7 @@ interface ReferenceTimes {
 
 function referenceTimes(spec: object): ReferenceTimes | string {
   const python = '/usr/bin/python3';
-  const script = join(__dirname, '..', '..', 'tests', 'bench', 'reference_timing.py');
+  const script = join(process.cwd(), 'tests', 'bench', 'reference_timing.py');
   if (!existsSync(python) || !existsSync(script)) return 'python3 or the timing script is missing';
   try {
     const dir = mkdtempSync(join(tmpdir(), 'mooring-bench-'));
