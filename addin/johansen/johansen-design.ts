@@ -1,6 +1,7 @@
 /**
  * The three blocks of columns behind Johansen's reduced-rank regression, for one of the
- * five deterministic cases (Johansen 1995, ch. 6.2; Johansen 1988, 1991):
+ * five deterministic cases (Johansen 1988, 1991; Johansen 1995, ch. 5-6, chapters from
+ * memory):
  *
  *   changes     Δx_t                                     (m columns)
  *   levels      x_{t-1}, plus 1 or t when the case puts a constant or a trend inside

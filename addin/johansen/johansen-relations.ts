@@ -4,7 +4,7 @@
  * series has weight 1.
  *
  * Scaling: the eigenvectors v come with v' S11 v = 1. Relation j is w = v / v_1, and its
- * loadings are alpha_j = S01 w (w' S11 w)^{-1} (Johansen 1995, eq. 6.11, one column at a
+ * loadings are alpha_j = S01 w (w' S11 w)^{-1} (Johansen 1995, ch. 6, from memory; one column at a
  * time; the columns are S11-orthogonal, so this equals the joint estimate for any rank).
  * The product alpha_j w' does not depend on the scaling.
  */

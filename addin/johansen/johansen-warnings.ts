@@ -4,6 +4,7 @@
  * the restricted cases' p-values.
  */
 import { studentTwoSidedP } from '../distributions';
+import { leastSquares } from '../regression/least-squares';
 import type { JohansenCase } from './deterministic-case';
 
 /** Level of the simple drift check. */
@@ -35,10 +36,34 @@ export function listNames(names: readonly string[]): string {
 }
 
 /**
- * Warnings when the case's assumption about drift does not match the data: the
- * 'constant' case's critical values assume the data drift (a linear trend in the levels;
- * Johansen 1995, Theorem 6.2), so driftless data over-reject there; 'none' and
- * 'restricted-constant' assume no drift at all.
+ * Whether each series' changes trend (quadratic trends in the levels): the t-test of the
+ * slope b in the least-squares fit x_t - x_{t-1} = a + b t + e at 5% (Student's t, N - 2 df).
+ * Simple, like the drift check.
+ */
+export function trendingChanges(block: readonly ArrayLike<number>[]): boolean[] {
+  return block.map((x) => {
+    const N = x.length - 1;
+    const change = new Float64Array(N);
+    const ones = new Float64Array(N).fill(1);
+    const time = new Float64Array(N);
+    for (let t = 0; t < N; t++) {
+      change[t] = x[t + 1] - x[t];
+      time[t] = t + 1;
+    }
+    const fit = leastSquares(change, [ones, time]);
+    const tSlope = fit.tValues[1];
+    if (!Number.isFinite(tSlope)) return fit.coefficients[1] !== 0;
+    return studentTwoSidedP(tSlope, N - 2) < DRIFT_LEVEL;
+  });
+}
+
+/**
+ * Warnings when the case's assumption about drift does not match the data. The 'constant'
+ * case's critical values assume the data drift (a linear trend in the levels; Johansen
+ * 1995, ch. 6 and 11, chapters from memory), so driftless data over-reject there; likewise
+ * the 'trend' case's values assume trending changes (quadratic trends in the levels).
+ * 'none' and 'restricted-constant' assume no drift at all. The seeded Monte Carlo checks
+ * in tests/johansen measure the over-rejection.
  */
 export function driftWarnings(caseName: JohansenCase, block: readonly ArrayLike<number>[], names: readonly string[]): string[] {
   const drifts = driftingSeries(block);
@@ -46,6 +71,11 @@ export function driftWarnings(caseName: JohansenCase, block: readonly ArrayLike<
   if (caseName === 'constant' && drifting.length === 0) {
     return [
       "None of the series drifts (the mean change is insignificant at 5% for every series, by a simple t-test). The 'constant' case's critical values assume drifting data; on driftless data this case rejects too often and can report relations that are not there. Consider the 'restricted-constant' case.",
+    ];
+  }
+  if (caseName === 'trend' && !trendingChanges(block).some((b) => b)) {
+    return [
+      "None of the series' changes trend (the slope of the changes on time is insignificant at 5% for every series, by a simple t-test). The 'trend' case's critical values assume quadratic trends in the levels; on merely drifting data this case rejects too often and can report relations that are not there. Consider the 'restricted-trend' case.",
     ];
   }
   if ((caseName === 'none' || caseName === 'restricted-constant') && drifting.length > 0) {

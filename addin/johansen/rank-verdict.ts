@@ -1,7 +1,7 @@
 /**
  * The sequential choice of the cointegration rank and the plain-words verdict.
  *
- * Sequential rule (Johansen 1995, ch. 12.1): test rank <= 0, <= 1, ... in turn and stop at
+ * Sequential rule (Johansen 1995, ch. 12, from memory): test rank <= 0, <= 1, ... in turn and stop at
  * the first r whose null is not rejected at the chosen level; if every null is rejected the
  * rank is n (the series are then stationary themselves).
  */

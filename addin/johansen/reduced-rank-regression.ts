@@ -1,5 +1,5 @@
 /**
- * Johansen's reduced-rank regression (Johansen 1988, sec. 3; Johansen 1991, sec. 2;
+ * Johansen's reduced-rank regression (Johansen 1988; Johansen 1991;
  * Johansen 1995, ch. 6): partial the short-run block out of the changes and the levels,
  * form the product moments of what is left, and solve one symmetric eigenproblem.
  *

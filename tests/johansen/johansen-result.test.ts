@@ -49,7 +49,7 @@ describe('Johansen result shape and consistency', () => {
     expect(r.beta[0]).toEqual([1, 1, 1]);
   });
 
-  it('at full rank, alpha beta\' equals the unrestricted least-squares coefficient of the levels (Johansen 1995, eq. 6.11)', () => {
+  it('at full rank, alpha beta\' equals the unrestricted least-squares coefficient of the levels (Johansen 1995, ch. 6)', () => {
     // Each equation: Δy_i on the three lagged levels, the three lagged changes and a constant.
     const block = tiedTriple(7101, 0.3);
     const n = 298;
@@ -86,6 +86,13 @@ describe('Johansen warnings', () => {
     expect(driftless.warnings.some((w) => w.includes('rejects too often') && w.includes("'restricted-constant'"))).toBe(true);
     const drifting = johansenTest(tiedTriple(7102, 0.3), { case: 'constant' });
     expect(drifting.warnings.some((w) => w.includes('rejects too often'))).toBe(false);
+  });
+
+  it("'trend' on merely drifting data warns and suggests 'restricted-trend'; trending changes (quadratic levels) do not warn", () => {
+    const drifting = johansenTest(tiedTriple(7107, 0.3), { case: 'trend' });
+    expect(drifting.warnings.some((w) => w.includes('quadratic trends') && w.includes("'restricted-trend'"))).toBe(true);
+    const bent = tiedTriple(7107, 0.3).map((x) => x.map((v, t) => v + 0.002 * t * t));
+    expect(johansenTest(bent, { case: 'trend' }).warnings.some((w) => w.includes('quadratic trends'))).toBe(false);
   });
 
   it("'none' on drifting data warns that the case assumes no drift", () => {
