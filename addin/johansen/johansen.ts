@@ -81,7 +81,8 @@ export function johansenTest(block: ArrayLike<number>[], options: JohansenOption
   const fit = reducedRankRegression(design);
   const n = fit.nobs;
   const eigenvalues = fit.eigenvalues.slice(0, m);
-  // Reinsel & Ahn (1992): replace n by n - m p, with p = K + 1 the order of the VAR in levels.
+  // Reinsel & Ahn (1992): replace n by n - m p, with n = T - K - 1 the observations used and
+  // p = K + 1 the order of the VAR in levels (the form of the factor is recalled from memory).
   const factor = input.smallSampleCorrection ? (n - m * (lags + 1)) / n : 1;
   const logs = eigenvalues.map((l) => Math.log1p(-l));
 
