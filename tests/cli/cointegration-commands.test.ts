@@ -6,6 +6,7 @@ import { hedgeRatios } from '../../addin/cointegration/hedge-ratio';
 import { phillipsOuliaris } from '../../addin/cointegration/phillips-ouliaris';
 import { MOORING_COMMANDS } from '../../addin/cli/commands';
 import { autoregressive1, randomWalk, SeededRandom } from '../../addin/random';
+import { type Fixtures, loadFixture } from '../reference/fixtures';
 import { expectOneLineRefusal, runWith } from './cli-harness';
 
 /** A price CSV with a cointegrated pair (Diesel = 3 + 1.1 Gasoil + AR(1) spread), an unrelated walk and a copy of Gasoil in other units. */
@@ -25,9 +26,7 @@ function pairCsv(n: number): { text: string; diesel: number[]; gasoil: number[];
 
 const pair = pairCsv(400);
 const macro = readFileSync(new URL('../reference/data/macrodata.csv', import.meta.url), 'utf8');
-const fixture = JSON.parse(readFileSync(new URL('../reference/fixtures/coint.json', import.meta.url), 'utf8')) as {
-  cases: { y: string; x: string[]; deterministic: string; lags: unknown; statistic: number; pValue: number; beta: number[]; intercept: number | null }[];
-};
+const fixture = loadFixture<Fixtures['coint']>('coint');
 const files = { 'p.csv': pair.text, 'm.csv': macro };
 const run = (...argv: string[]) => runWith(MOORING_COMMANDS, argv, files);
 const json = (...argv: string[]) => {

@@ -1,7 +1,6 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { engleGranger } from '../../addin/cointegration/engle-granger';
-import type { Deterministic } from '../../addin/result';
+import { type Fixtures, fixtureSeries, loadFixture } from '../reference/fixtures';
 
 /**
  * Reference: statsmodels 0.13.5 (Debian python3-statsmodels) coint, fixtures made by
@@ -10,26 +9,7 @@ import type { Deterministic } from '../../addin/result';
  * every deterministic option and lag rule. Statistic to 1e-8 relative, p-value to 1e-6,
  * lags and nobs exactly, beta / intercept / trend to 1e-8 relative, critical values to 1e-10.
  */
-interface CointCase {
-  y: string;
-  x: string[];
-  deterministic: Deterministic;
-  lags: number | 'aic' | 'bic' | 'tstat';
-  maxLags: number | null;
-  statistic: number;
-  pValue: number;
-  critical: Record<string, number | null>;
-  usedLags: number;
-  nobs: number;
-  beta: number[];
-  intercept: number | null;
-  trendCoefficient: number | null;
-  residualSsr: number;
-}
-const fixture = JSON.parse(readFileSync(new URL('../reference/fixtures/coint.json', import.meta.url), 'utf8')) as {
-  series: Record<string, number[]>;
-  cases: CointCase[];
-};
+const fixture = loadFixture<Fixtures['coint']>('coint');
 
 function relative(a: number, b: number): number {
   return Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
@@ -45,8 +25,8 @@ describe('Engle-Granger against the reference library (statsmodels coint)', () =
     const label = `${c.y} on ${c.x.join('+')} ${c.deterministic} lags=${c.lags} max=${c.maxLags ?? 'default'}`;
     it(label, () => {
       const r = engleGranger(
-        fixture.series[c.y],
-        c.x.map((name) => fixture.series[name]),
+        fixtureSeries(fixture, c.y),
+        c.x.map((name) => fixtureSeries(fixture, name)),
         { deterministic: c.deterministic, lags: c.lags, maxLags: c.maxLags ?? undefined },
         { y: c.y, xs: c.x },
       );
@@ -68,7 +48,7 @@ describe('Engle-Granger against the reference library (statsmodels coint)', () =
         expect(r.test.critical).toEqual({});
         expect(r.test.warnings.some((w) => w.includes('No critical values are published'))).toBe(true);
       } else {
-        for (const level of ['1%', '5%', '10%']) expect(r.test.critical[level]).toBeCloseTo(c.critical[level] as number, 10);
+        for (const level of ['1%', '5%', '10%'] as const) expect(r.test.critical[level]).toBeCloseTo(c.critical[level] as number, 10);
       }
     });
   }
