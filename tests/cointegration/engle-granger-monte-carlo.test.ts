@@ -21,12 +21,13 @@ describe('Engle-Granger size: 2,000 seeded pairs of independent random walks, T 
     expect(r).toBeLessThan(0.065);
   });
 
-  it('with the product default (AIC lag search) rejects 5% +/- 2.5 points: AIC adds lags and the p-value is asymptotic, so the true size is about 5.9% (a 20,000-pair run of the same design gave 5.94%)', () => {
-    // The AIC size sits about 0.9 points above 5%, within the +/- 1.5 band in expectation but
-    // less than 1.5 standard errors from its edge at 2,000 draws, so this check allows 2.5 points.
+  it('with the product default (AIC lag search) rejects 5% +/- 1.5 points (this seed: 5.6%)', () => {
+    // The true AIC size is about 5.9% (a 20,000-pair run of the same design gave 5.94%): AIC adds
+    // lags and the p-value is asymptotic. It lies inside the band, but close to its edge, so a
+    // different seed could fail this check by chance; the seed is fixed, and the closing note says so.
     const r = rate('aic');
-    expect(r).toBeGreaterThan(0.025);
-    expect(r).toBeLessThan(0.075);
+    expect(r).toBeGreaterThanOrEqual(0.035);
+    expect(r).toBeLessThanOrEqual(0.065);
   });
 });
 
