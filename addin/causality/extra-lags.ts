@@ -10,6 +10,7 @@
 import { MooringInputError } from '../errors';
 import { integrationOrder, type IntegrationOrderResult } from '../unitroot/integration-order';
 import type { PairNames } from './causality-wording';
+import type { OrderEvidence } from './choose-causality-test';
 
 export interface ExtraLagsChoice {
   extraLags: number;
@@ -28,6 +29,19 @@ export function cautiousOrder(result: IntegrationOrderResult): number {
     );
   }
   return result.agree ? result.order : Math.min(result.order + 1, 2);
+}
+
+/** An order as evidence for chooseCausalityTest: the order when ADF and KPSS agree, else "uncertain". */
+export function orderEvidence(result: IntegrationOrderResult): OrderEvidence {
+  return result.agree ? result.order : 'uncertain';
+}
+
+/** An order given by the user, as a dmax contribution: "uncertain" counts as 2, the safe side. */
+export function cautiousGivenOrder(order: OrderEvidence): number {
+  if (order === 'above 2') {
+    throw new MooringInputError('A series integrated of an order above 2 has no valid lead-lag test here: check the data for errors or test its changes.');
+  }
+  return order === 'uncertain' ? 2 : order;
 }
 
 /** dmax from the integration orders of the pair [cause, effect]. */

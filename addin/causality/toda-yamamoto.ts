@@ -28,6 +28,8 @@ export interface TodaYamamotoOptions {
   maxLags?: number;
   /** Significance level of the unit-root tests that set dmax when extraLags is not given (default 0.05). */
   alpha?: number;
+  /** How a given extraLags was found, for the record (default "given"). */
+  extraLagsRule?: string;
 }
 
 /** Wald test that the cause's first p lags are zero in the effect's equation of a VAR(p + dmax) in levels. */
@@ -38,7 +40,7 @@ export function todaYamamoto(cause: ArrayLike<number>, effect: ArrayLike<number>
   if (options.extraLags === undefined) {
     extra = extraLagsFromOrders(pair, names, options.alpha ?? 0.05);
   } else {
-    extra = { extraLags: checkedLagCount(options.extraLags, 'The extra lags (dmax)'), rule: 'given', orders: null, warnings: [] };
+    extra = { extraLags: checkedLagCount(options.extraLags, 'The extra lags (dmax)'), rule: options.extraLagsRule ?? 'given', orders: null, warnings: [] };
   }
   const dmax = extra.extraLags;
   const resolved = resolveLags(pair, options.lags, options.maxLags);
