@@ -12,7 +12,7 @@ import { phillipsOuliaris } from '../cointegration/phillips-ouliaris';
 import { SeededRandom, autoregressive1, randomWalk } from '../random';
 import { timeIt, type Timing } from './timing';
 
-function benchPair(): { y: Float64Array; x: Float64Array } {
+export function benchPair(): { y: Float64Array; x: Float64Array } {
   const rng = new SeededRandom(2500);
   const x = randomWalk(rng, 2500, { start: 80 });
   const spread = autoregressive1(rng, 2500, 0.9);

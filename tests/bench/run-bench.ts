@@ -11,6 +11,7 @@ import { join } from 'node:path';
 import { SeededRandom, randomWalk } from '../../addin/random';
 import { benchUnitRoot } from '../../addin/bench/unitroot-bench';
 import { benchCleaner } from '../../addin/bench/cleaner-bench';
+import { benchEngleGranger, benchPair } from '../../addin/bench/cointegration-bench';
 import type { Timing } from '../../addin/bench/timing';
 
 interface ReferenceTimes {
@@ -37,14 +38,20 @@ function referenceTimes(spec: object): ReferenceTimes | string {
 function main(): void {
   const unitRoot = benchUnitRoot();
   const cleaner = benchCleaner();
+  const cointegration = benchEngleGranger();
   const walk = Array.from(randomWalk(new SeededRandom(11), 10_000, { start: 100 }));
-  const reference = referenceTimes({ adf: [walk] });
+  const pair = benchPair();
+  const reference = referenceTimes({ adf: [walk], coint: [[Array.from(pair.y), Array.from(pair.x)]] });
   const comparisons: Record<string, unknown> = {};
   if (typeof reference === 'object' && reference.adfullerAicMs) {
     const ours = unitRoot[0].medianMs;
     comparisons.adfAic10000 = { oursMs: ours, referenceMs: round(reference.adfullerAicMs), ratio: round(ours / reference.adfullerAicMs), goal: 0.05 };
   }
-  const all: Timing[] = [...unitRoot, ...cleaner];
+  if (typeof reference === 'object' && reference.cointAicMs) {
+    const ours = cointegration[0].medianMs;
+    comparisons.engleGrangerAic2500 = { oursMs: ours, referenceMs: round(reference.cointAicMs), ratio: round(ours / reference.cointAicMs), goal: 0.02 };
+  }
+  const all: Timing[] = [...unitRoot, ...cleaner, ...cointegration];
   const report = {
     machine: { node: process.version, cpus: cpus().length },
     benchmarks: all,
