@@ -102,6 +102,12 @@ export function errorCorrectionCausality(cause: ArrayLike<number>, effect: Array
   const tStatistic = full.tValues[1];
   const warnings: string[] = [];
   if (n < 30) warnings.push(`Only ${n} rows in the regression: the tests have little power this short.`);
+  if (equilibrium !== null) {
+    // Mooring's simulation (tests/causality/error-correction-monte-carlo.test.ts): 7.9% and 8.6% at T = 200 on two seeds.
+    warnings.push(
+      'The equilibrium error was estimated from the same data by a static regression; in samples of a few hundred rows this makes the short-run test reject a true null somewhat too often (8% to 9% instead of 5% in a simulation with 200 rows). Confirm with Toda-Yamamoto.',
+    );
+  }
   const longWarnings = [...warnings];
   if (equilibrium !== null && adjustment > 0) {
     longWarnings.push(
