@@ -19,6 +19,19 @@
 // Types for CustomFunctions.Error, .Invocation and friends (tsconfig lists only node and office-js).
 /// <reference types="custom-functions-runtime" />
 
+// Every function below takes its ranges as `any[][]` and its options as `any`, so blanks,
+// text and error values reach the shared cleaner and option parser untouched (see
+// cells/range-input.ts), and each body runs inside answer(), which maps every refusal to a
+// cell error once (cells/answer.ts). Optional arguments arrive as null when left out.
+
+import { answer } from './cells/answer';
+import { egCell, poCell } from './analyses/cointegration-cells';
+import { critCell } from './analyses/critical-value-cells';
+import { ecmCell } from './analyses/ecm-cells';
+import { johansenCell, rankCell } from './analyses/johansen-cells';
+import { grangerCell, varLagsCell } from './analyses/lead-lag-cells';
+import { halfLifeCell, hedgeCell, spreadCell, zScoreCell } from './analyses/spread-cells';
+import { adfCell, kpssCell, orderCell, ppCell } from './analyses/unit-root-cells';
 import { addinVersion } from './version';
 
 /**
@@ -29,4 +42,225 @@ import { addinVersion } from './version';
  */
 export function version(): string {
   return addinVersion();
+}
+
+/**
+ * Augmented Dickey-Fuller test: does the series wander with no pull back (a unit root)? A small p-value says it reverts.
+ * @customfunction ADF
+ * @helpurl https://localhost:3000/docs/functions.md#adf
+ * @param series Prices: one column or one row. Blank cells at the ends are skipped.
+ * @param [deterministic] Terms in the test regression: none, const or trend. Default const.
+ * @param [lags] Lagged changes: a whole number, or aic, bic or tstat to choose them. Default aic.
+ * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @returns The p-value, the statistic, a labelled table or a card.
+ */
+export function adf(series: any[][], deterministic?: any, lags?: any, show?: any): any[][] {
+  return answer(() => adfCell(series, deterministic, lags, show));
+}
+
+/**
+ * KPSS test: is the series stationary around a level or a trend? A small p-value says it wanders.
+ * @customfunction KPSS
+ * @helpurl https://localhost:3000/docs/functions.md#kpss
+ * @param series Prices: one column or one row. Blank cells at the ends are skipped.
+ * @param [deterministic] Stationary around: const (a level) or trend. Default const.
+ * @param [bandwidth] Kernel lags of the long-run variance: a whole number, or auto (Newey-West). Default auto.
+ * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @returns The p-value, the statistic, a labelled table or a card.
+ */
+export function kpss(series: any[][], deterministic?: any, bandwidth?: any, show?: any): any[][] {
+  return answer(() => kpssCell(series, deterministic, bandwidth, show));
+}
+
+/**
+ * Phillips-Perron test: a unit-root test that corrects for autocorrelation with a long-run variance instead of lags.
+ * @customfunction PPTEST
+ * @helpurl https://localhost:3000/docs/functions.md#pptest
+ * @param series Prices: one column or one row. Blank cells at the ends are skipped.
+ * @param [deterministic] Terms in the test regression: none, const or trend. Default const.
+ * @param [bandwidth] Kernel lags of the long-run variance: a whole number, or auto (Newey-West). Default auto.
+ * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @returns The p-value, the statistic, a labelled table or a card.
+ */
+export function pptest(series: any[][], deterministic?: any, bandwidth?: any, show?: any): any[][] {
+  return answer(() => ppCell(series, deterministic, bandwidth, show));
+}
+
+/**
+ * Order of integration: 0 if the series is stationary, 1 if its changes are, 2 if its changes of changes are.
+ * @customfunction ORDER
+ * @helpurl https://localhost:3000/docs/functions.md#order
+ * @param series Prices: one column or one row. Blank cells at the ends are skipped.
+ * @param [alpha] Significance level of each step, such as 0.05 or 5%. Default 0.05.
+ * @param [deterministic] Terms in the level tests: none, const or trend. Default const.
+ * @returns 0, 1 or 2, or the text "above 2".
+ */
+export function order(series: any[][], alpha?: any, deterministic?: any): any {
+  return answer(() => orderCell(series, alpha, deterministic));
+}
+
+/**
+ * Engle-Granger test: is y tied to x in the long run (cointegrated)? A small p-value says the gap between them reverts.
+ * @customfunction EGTEST
+ * @helpurl https://localhost:3000/docs/functions.md#egtest
+ * @param y Prices of the series on the left of the relation: one column or one row.
+ * @param x Prices of the other series: one or more columns (rows for a row y), on the same rows as y.
+ * @param [deterministic] Terms in the relation: none, const or trend. Default const.
+ * @param [lags] Lagged changes in the residual test: a whole number, or aic, bic or tstat. Default aic.
+ * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @returns The p-value, the statistic, a labelled table or a card.
+ */
+export function egtest(y: any[][], x: any[][], deterministic?: any, lags?: any, show?: any): any[][] {
+  return answer(() => egCell(y, x, deterministic, lags, show));
+}
+
+/**
+ * Phillips-Ouliaris test: cointegration of y with x, correcting the residual test with a long-run variance.
+ * @customfunction POTEST
+ * @helpurl https://localhost:3000/docs/functions.md#potest
+ * @param y Prices of the series on the left of the relation: one column or one row.
+ * @param x Prices of the other series: one or more columns (rows for a row y), on the same rows as y.
+ * @param [deterministic] Terms in the relation: none, const or trend. Default const.
+ * @param [bandwidth] Kernel lags of the long-run variance: a whole number, or auto (Newey-West). Default auto.
+ * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @returns The p-value, the statistic, a labelled table or a card.
+ */
+export function potest(y: any[][], x: any[][], deterministic?: any, bandwidth?: any, show?: any): any[][] {
+  return answer(() => poCell(y, x, deterministic, bandwidth, show));
+}
+
+/**
+ * Johansen test: do the series share any long-run relation? The headline is the p-value of the trace test of none.
+ * @customfunction JOHANSEN
+ * @helpurl https://localhost:3000/docs/functions.md#johansen
+ * @param block Prices of 2 to 12 series, one column each, on the same rows.
+ * @param [lags] Lagged changes in the model: a whole number. Default 1.
+ * @param [deterministic] none, restricted-constant, constant, restricted-trend or trend. Default constant.
+ * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @returns The p-value, the statistic, a labelled table or a card.
+ */
+export function johansen(block: any[][], lags?: any, deterministic?: any, show?: any): any[][] {
+  return answer(() => johansenCell(block, lags, deterministic, show));
+}
+
+/**
+ * Number of long-run relations among the series, by Johansen's trace test taken step by step.
+ * @customfunction RANK
+ * @helpurl https://localhost:3000/docs/functions.md#rank
+ * @param block Prices of 2 to 12 series, one column each, on the same rows.
+ * @param [lags] Lagged changes in the model: a whole number. Default 1.
+ * @param [deterministic] none, restricted-constant, constant, restricted-trend or trend. Default constant.
+ * @param [alpha] Significance level of each step, such as 0.05 or 5%. Default 0.05.
+ * @returns The number of long-run relations, from 0 to the number of series.
+ */
+export function rank(block: any[][], lags?: any, deterministic?: any, alpha?: any): number {
+  return answer(() => rankCell(block, lags, deterministic, alpha));
+}
+
+/**
+ * Hedge ratio: units of x that offset one unit of y in the long-run line y = intercept + beta x.
+ * @customfunction HEDGE
+ * @helpurl https://localhost:3000/docs/functions.md#hedge
+ * @param y Prices of the series you hold: one column or one row.
+ * @param x Prices of the hedge: one column (or row), on the same rows as y.
+ * @param [method] ols (y on x), reverse-ols (x on y, turned round), tls (orthogonal) or dols (dynamic OLS). Default ols.
+ * @returns The hedge ratio beta.
+ */
+export function hedge(y: any[][], x: any[][], method?: any): number {
+  return answer(() => hedgeCell(y, x, method));
+}
+
+/**
+ * Spread of a pair, row by row: y - beta x for a given beta, or the least-squares gap y - intercept - beta x.
+ * @customfunction SPREAD
+ * @helpurl https://localhost:3000/docs/functions.md#spread
+ * @param y Prices of the series you hold: one column or one row.
+ * @param x Prices of the hedge: one column (or row), on the same rows as y.
+ * @param [beta] Hedge ratio to use, with no intercept. Default: estimated with its intercept by least squares.
+ * @returns The spread, one value per row of y, spilled beside the prices.
+ */
+export function spread(y: any[][], x: any[][], beta?: any): any[][] {
+  return answer(() => spreadCell(y, x, beta));
+}
+
+/**
+ * Half-life: periods for a gap in the spread to halve. One argument: that spread. Two: the Engle-Granger spread of y on x.
+ * @customfunction HALFLIFE
+ * @helpurl https://localhost:3000/docs/functions.md#halflife
+ * @param y A spread, or the prices of the series on the left of the relation: one column or one row.
+ * @param [x] Prices of the other series, on the same rows as y. Leave out when y is already a spread.
+ * @returns The half-life in rows (days for daily prices).
+ */
+export function halflife(y: any[][], x?: any[][]): number {
+  return answer(() => halfLifeCell(y, x));
+}
+
+/**
+ * z-score of the spread, row by row: how many standard deviations it stands from its mean.
+ * @customfunction ZSCORE
+ * @helpurl https://localhost:3000/docs/functions.md#zscore
+ * @param y A spread, or the prices of the series on the left of the relation: one column or one row.
+ * @param [x] Prices of the other series, on the same rows as y. Leave out when y is already a spread.
+ * @param [window] Rows in a trailing window (3 or more). Default: the whole sample.
+ * @returns The z-scores, one per row of y, spilled beside the prices.
+ */
+export function zscore(y: any[][], x?: any[][], window?: any): any[][] {
+  return answer(() => zScoreCell(y, x, window));
+}
+
+/**
+ * Error-correction model: how fast y moves back toward its long-run relation with x. The headline is y's speed.
+ * @customfunction ECM
+ * @helpurl https://localhost:3000/docs/functions.md#ecm
+ * @param y Prices of the series on the left of the relation: one column or one row.
+ * @param x Prices of the other series: one column (or row), on the same rows as y.
+ * @param [lags] Lagged changes of both series: a whole number, or aic to choose. Default aic.
+ * @param [show] What to return: headline (y's speed), stat (its t-value), all (a labelled table) or card. Default headline.
+ * @returns The speed of adjustment, its t-value, a labelled table or a card.
+ */
+export function ecm(y: any[][], x: any[][], lags?: any, show?: any): any[][] {
+  return answer(() => ecmCell(y, x, lags, show));
+}
+
+/**
+ * Granger lead-lag test: does the past of one series help predict the other? A small p-value says it leads.
+ * @customfunction GRANGER
+ * @helpurl https://localhost:3000/docs/functions.md#granger
+ * @param cause The series that may lead: one column or one row.
+ * @param effect The series that may follow, on the same rows as cause.
+ * @param [lags] Lags of both series: a whole number of 1 or more, or aic or bic to choose. Default aic.
+ * @param [method] changes (test period-to-period changes) or levels (values as they stand). Default changes.
+ * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @returns The p-value, the statistic, a labelled table or a card.
+ */
+export function granger(cause: any[][], effect: any[][], lags?: any, method?: any, show?: any): any[][] {
+  return answer(() => grangerCell(cause, effect, lags, method, show));
+}
+
+/**
+ * Lag order of a vector autoregression of the series, chosen by an information criterion.
+ * @customfunction VARLAGS
+ * @helpurl https://localhost:3000/docs/functions.md#varlags
+ * @param block Series, one column each, on the same rows.
+ * @param [criterion] aic, bic, hq or fpe. Default aic.
+ * @param [maxlags] Largest order tried: a whole number of 1 or more. Default round(12 (T/100)^(1/4)), capped.
+ * @returns The number of lags.
+ */
+export function varlags(block: any[][], criterion?: any, maxlags?: any): number {
+  return answer(() => varLagsCell(block, criterion, maxlags));
+}
+
+/**
+ * Critical value from the published tables: reject when a statistic is beyond it.
+ * @customfunction CRIT
+ * @helpurl https://localhost:3000/docs/functions.md#crit
+ * @param test adf, pp, eg, po, po-alpha, kpss, johansen-trace or johansen-max.
+ * @param [observations] Sample size of the table (adf, pp, eg, po). Default: the asymptotic value.
+ * @param [variables] Series in the relation (eg, po), or series minus relations (johansen). Default 1, or 2 for eg and po.
+ * @param [deterministic] none, const or trend; for johansen one of the five cases. Default const (constant).
+ * @param [level] Significance level, such as 0.05 or 5%. Default 0.05.
+ * @returns The critical value.
+ */
+export function crit(test: any, observations?: any, variables?: any, deterministic?: any, level?: any): number {
+  return answer(() => critCell(test, observations, variables, deterministic, level));
 }

@@ -1,0 +1,92 @@
+/**
+ * MOOR.HEDGE, MOOR.SPREAD, MOOR.HALFLIFE and MOOR.ZSCORE: the long-run line of a pair and the
+ * spread it leaves, from ranges lined up by row. Spilled results follow the input's layout (a
+ * column for column input, a row for row input) and start with an empty cell for every blank
+ * the input began with, so each value sits beside the prices it came from.
+ */
+import { cointegratingRegression } from '../../addin/cointegration/cointegrating-regression';
+import { dynamicOlsHedgeRatio, olsHedgeRatio, reverseOlsHedgeRatio, totalLeastSquaresHedgeRatio, type HedgeRatio } from '../../addin/cointegration/hedge-ratio';
+import { halfLife } from '../../addin/spread/half-life';
+import { spreadSeries } from '../../addin/spread/spread-series';
+import { rollingZScore, zScore } from '../../addin/spread/z-score';
+import { NoValue } from '../cells/no-value';
+import { readPair, readRelation, readSeries, type Orientation } from '../cells/range-input';
+import { decimalValue, isOmitted, optionWord, wholeNumber } from '../options/option-values';
+import { HEDGE_WORDS, type HedgeWord } from '../options/option-words';
+import { cellNumber, spillValues } from '../render/cell-number';
+
+/** The spread and where its first value sits. */
+interface SpreadOf {
+  values: Float64Array;
+  orientation: Orientation;
+  leadingBlanks: number;
+}
+
+function hedgeRatio(method: HedgeWord, y: Float64Array, x: Float64Array): HedgeRatio {
+  switch (method) {
+    case 'ols':
+      return olsHedgeRatio(y, x);
+    case 'reverse-ols':
+      return reverseOlsHedgeRatio(y, x);
+    case 'tls':
+      return totalLeastSquaresHedgeRatio(y, x);
+    case 'dols':
+      return dynamicOlsHedgeRatio(y, x).ratio;
+  }
+}
+
+/** A single x for the pair functions: one column (or row) beside y. */
+function pairOf(y: unknown, x: unknown) {
+  return readPair(y, x, { y: 'y', x: 'x' }, 'a hedge ratio');
+}
+
+/** Units of x per unit of y in the line y = intercept + beta x. */
+export function hedgeCell(y: unknown, x: unknown, method: unknown): number {
+  const word = optionWord('method', method, HEDGE_WORDS, 'ols');
+  const pair = pairOf(y, x);
+  return cellNumber(hedgeRatio(word, pair.y.values, pair.x.values).beta, 'The hedge ratio');
+}
+
+/** The Engle-Granger spread (step-1 residual, with a constant) of y on the xs, or y itself when x is left out. */
+function spreadOf(y: unknown, x: unknown): SpreadOf {
+  if (isOmitted(x)) {
+    const single = readSeries(y, 'y');
+    return { values: single.series.values, orientation: single.orientation, leadingBlanks: single.series.leadingBlanks };
+  }
+  const input = readRelation(y, x);
+  const step1 = cointegratingRegression(input.y.values, input.xs.map((s) => s.values), 'const', { y: input.y.name, xs: input.xs.map((s) => s.name) });
+  if (step1.exactFit) {
+    throw new NoValue(
+      `${step1.names.y} is an exact combination of ${step1.names.xs.join(', ')} (R² = ${step1.rSquared.toFixed(7)}), so the spread is rounding noise: ` +
+        'check that one column is not a copy or a formula of another.');
+  }
+  return { values: step1.residuals, orientation: input.orientation, leadingBlanks: input.y.leadingBlanks };
+}
+
+function spill(values: (number | string)[], orientation: Orientation): (number | string)[][] {
+  return orientation === 'row' ? [values] : values.map((v) => [v]);
+}
+
+/** The spread y - beta x, beta as given (no intercept) or, when left out, y - intercept - beta x by least squares. */
+export function spreadCell(y: unknown, x: unknown, beta: unknown): (number | string)[][] {
+  const given = decimalValue('beta', beta, 'the hedge ratio: units of x per unit of y');
+  const pair = pairOf(y, x);
+  const fit = given === undefined ? olsHedgeRatio(pair.y.values, pair.x.values) : { beta: given, intercept: 0 };
+  const values = spreadSeries(pair.y.values, pair.x.values, fit.beta, fit.intercept, { y: 'y', x: 'x' });
+  return spill(spillValues(values, 'The spread', pair.y.leadingBlanks), pair.orientation);
+}
+
+/** Periods for a gap in the spread to halve (AR(1) of the spread); #N/A when the spread does not revert. */
+export function halfLifeCell(y: unknown, x: unknown): number {
+  const spread = spreadOf(y, x);
+  const answer = halfLife(spread.values);
+  return cellNumber(answer.halfLife, 'The half-life', answer.halfLife === null ? `No half-life: ${answer.note}.` : undefined);
+}
+
+/** z-scores of the spread (or of y), over the whole sample or a trailing window. */
+export function zScoreCell(y: unknown, x: unknown, window: unknown): (number | string)[][] {
+  const w = wholeNumber('window', window, undefined, 'rows in the trailing window', 3);
+  const spread = spreadOf(y, x);
+  const values = w === undefined ? zScore(spread.values).values : rollingZScore(spread.values, w);
+  return spill(spillValues(values, 'The z-score', spread.leadingBlanks), spread.orientation);
+}

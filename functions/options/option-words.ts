@@ -1,0 +1,38 @@
+/**
+ * The words each option accepts, shared by every function so one idea has one spelling. They
+ * are the command line's words (addin/cli): deterministic terms none|const|trend, lag rules
+ * aic|bic|tstat, bandwidth auto, the five Johansen cases, the hedge estimators.
+ */
+import { JOHANSEN_CASES, type JohansenCase } from '../../addin/johansen/deterministic-case';
+import { DETERMINISTIC_WORDS, type Deterministic } from '../../addin/result';
+
+export { DETERMINISTIC_WORDS, JOHANSEN_CASES };
+export type { Deterministic, JohansenCase };
+
+/** KPSS tests stationarity around a constant or a trend; it has no "none". */
+export const KPSS_DETERMINISTIC_WORDS: readonly ('const' | 'trend')[] = ['const', 'trend'];
+
+/** Rules that choose the lags of an augmented Dickey-Fuller regression. */
+export const ADF_LAG_RULES = ['aic', 'bic', 'tstat'] as const;
+
+/** Rules that choose the lags of a VAR-based test (lead-lag) or model (error correction uses aic only). */
+export const VAR_LAG_RULES = ['aic', 'bic'] as const;
+
+/** The bandwidth rule of the long-run variance (Newey-West automatic). */
+export const BANDWIDTH_RULES = ['auto'] as const;
+
+/** What a test cell shows: the headline number, the statistic, a labelled table, or a card. */
+export const SHOW_WORDS = ['headline', 'stat', 'all', 'card'] as const;
+export type Show = (typeof SHOW_WORDS)[number];
+
+/** Hedge-ratio estimators (the command line's --hedge words). */
+export const HEDGE_WORDS = ['ols', 'reverse-ols', 'tls', 'dols'] as const;
+export type HedgeWord = (typeof HEDGE_WORDS)[number];
+
+/** How the lead-lag test treats the data: Granger F on the values as they stand, or on their changes. */
+export const GRANGER_METHODS = ['changes', 'levels'] as const;
+export type GrangerMethod = (typeof GRANGER_METHODS)[number];
+
+/** Information criteria for the VAR lag order. */
+export const VAR_CRITERIA = ['aic', 'bic', 'hq', 'fpe'] as const;
+export type VarCriterion = (typeof VAR_CRITERIA)[number];
