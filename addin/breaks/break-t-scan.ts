@@ -85,7 +85,7 @@ export function scanBreakTValues(
     zy += zt[r] * yt[r];
   }
 
-  // Running sums over rows r >= c: plain (s0) and weighted by (r + 1)/n (s1).
+  // Running sums over rows r >= c: plain (f0, y0, z0) and weighted by (r + 1)/n (f1, y1, z1).
   const f0 = new Float64Array(kF);
   const f1 = new Float64Array(kF);
   let y0 = 0;
@@ -96,8 +96,7 @@ export function scanBreakTValues(
   const w = kinds.map(() => new Float64Array(kF)); // R^{-T} F'D
   const G = new Float64Array(q * q);
   const g = new Float64Array(q);
-  const L = new Float64Array(q * q);
-  const u = new Float64Array(q);
+  const scratch = { L: new Float64Array(q * q), u: new Float64Array(q), x: new Float64Array(q), e: new Float64Array(q) };
   const count = lastRow - firstRow + 1;
   const tValues = new Float64Array(count).fill(Number.POSITIVE_INFINITY);
 
@@ -116,13 +115,14 @@ export function scanBreakTValues(
 
     const shift = c / n; // ramp_c = (r + 1)/n - c/n on rows r >= c
     const m = n - c;
-    kinds.forEach((kind, d) => {
+    for (let d = 0; d < kinds.length; d++) {
+      const step = kinds[d] === 'step';
       const vd = v[d];
-      for (let j = 0; j < kF; j++) vd[j] = kind === 'step' ? f0[j] : f1[j] - shift * f0[j];
+      for (let j = 0; j < kF; j++) vd[j] = step ? f0[j] : f1[j] - shift * f0[j];
       forwardSolveTransposed(R, kF, vd, w[d]);
-      G[d + 1] = G[(d + 1) * q] = kind === 'step' ? z0 : z1 - shift * z0;
-      g[d + 1] = kind === 'step' ? y0 : y1 - shift * y0;
-    });
+      G[d + 1] = G[(d + 1) * q] = step ? z0 : z1 - shift * z0;
+      g[d + 1] = step ? y0 : y1 - shift * y0;
+    }
     G[0] = zz;
     g[0] = zy;
     for (let a = 0; a < kinds.length; a++) {
@@ -138,7 +138,7 @@ export function scanBreakTValues(
         G[(a + 1) * q + (b + 1)] = G[(b + 1) * q + (a + 1)] = dd - ww;
       }
     }
-    tValues[c - firstRow] = tRatioOfFirst(G, g, yy, q, dof, L, u);
+    tValues[c - firstRow] = tRatioOfFirst(G, g, yy, q, dof, scratch);
   }
 
   let best = 0;
@@ -163,7 +163,15 @@ function forwardSolveTransposed(R: Float64Array, k: number, vIn: Float64Array, o
  * right-hand side g: b = G^{-1} g, SSR = y'y - g'b, t = b_0 / sqrt(SSR/dof (G^{-1})_00).
  * +Infinity when G is singular to working precision or the fit is exact.
  */
-function tRatioOfFirst(G: Float64Array, g: Float64Array, yy: number, q: number, dof: number, L: Float64Array, u: Float64Array): number {
+function tRatioOfFirst(
+  G: Float64Array,
+  g: Float64Array,
+  yy: number,
+  q: number,
+  dof: number,
+  scratch: { L: Float64Array; u: Float64Array; x: Float64Array; e: Float64Array },
+): number {
+  const { L, u, x, e } = scratch;
   // Cholesky G = L L' on the matrix scaled to unit diagonal, so the pivot test is relative.
   for (let i = 0; i < q; i++) if (!(G[i * q + i] > 0)) return Number.POSITIVE_INFINITY;
   for (let j = 0; j < q; j++) {
@@ -189,15 +197,13 @@ function tRatioOfFirst(G: Float64Array, g: Float64Array, yy: number, q: number, 
   for (let i = 0; i < q; i++) explained += u[i] * u[i];
   const ssr = yy - explained;
   if (!(ssr > 1e-13 * yy)) return Number.POSITIVE_INFINITY;
-  // Scaled b = L'^{-1} u; scaled (G^{-1})_00 = ||L^{-1} e_0||^2. q <= 3, so the scratch is tiny.
-  const x = new Float64Array(q);
+  // Scaled b = L'^{-1} u; scaled (G^{-1})_00 = ||L^{-1} e_0||^2.
   for (let i = q - 1; i >= 0; i--) {
     let s = u[i];
     for (let m = i + 1; m < q; m++) s -= L[m * q + i] * x[m];
     x[i] = s / L[i * q + i];
   }
   let inv00 = 0;
-  const e = new Float64Array(q);
   for (let i = 0; i < q; i++) {
     let s = i === 0 ? 1 : 0;
     for (let m = 0; m < i; m++) s -= L[i * q + m] * e[m];
