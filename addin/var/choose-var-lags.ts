@@ -7,11 +7,16 @@
  *   FPE = ((n + Kp + 1) / (n - Kp - 1))^K |Sigma|.
  * The smallest value wins; a tie goes to the smaller p. These are the reference library's
  * conventions, so the orders and values compare exactly.
+ *
+ * Speed: the designs are nested (order p uses the first 1 + Kp columns of order M's design), so
+ * one Householder QR of the largest design gives every order's residual cross products:
+ * with z_k = Q'y_k, (E'E)_ab for the first m columns is the sum of z_a[i] z_b[i] over i >= m
+ * (the same identity as HouseholderQr.nestedSsr, per pair of equations).
  */
 import { CholeskyDecomposition, Matrix } from 'ml-matrix';
 import { MooringInputError } from '../errors';
-import { checkedBlock, checkedLagCount } from './var-design';
-import { fitVar } from './fit-var';
+import { HouseholderQr, assertFullRank } from '../linalg/householder-qr';
+import { checkedBlock, checkedLagCount, varDesign } from './var-design';
 
 export interface VarLagRow {
   lags: number;
@@ -65,6 +70,32 @@ function logDeterminant(sigma: number[][]): number {
   return s;
 }
 
+/** E'E of the VAR(p) on the last T - maxLags rows, for p = 0..maxLags, from one QR. */
+function nestedCrossProducts(series: readonly Float64Array[], maxLags: number, names: readonly string[]): number[][][] {
+  const K = series.length;
+  const design = varDesign(series, maxLags, 'const', maxLags, names);
+  const qr = new HouseholderQr(design.columns, design.nobs);
+  assertFullRank(qr, design.columnNames);
+  const z = design.responses.map((y) => qr.qtY(y));
+  const n = design.nobs;
+  const out: number[][][] = [];
+  for (let p = 0; p <= maxLags; p++) {
+    const m = 1 + K * p;
+    const e = Array.from({ length: K }, () => new Array<number>(K).fill(0));
+    for (let a = 0; a < K; a++) {
+      for (let b = a; b < K; b++) {
+        const za = z[a];
+        const zb = z[b];
+        let s = 0;
+        for (let i = m; i < n; i++) s += za[i] * zb[i];
+        e[a][b] = e[b][a] = s;
+      }
+    }
+    out.push(e);
+  }
+  return out;
+}
+
 function argminFirst(values: readonly number[]): number {
   let best = 0;
   for (let i = 1; i < values.length; i++) if (values[i] < values[best]) best = i;
@@ -98,10 +129,12 @@ export function chooseVarLags(block: readonly ArrayLike<number>[], options: { ma
   }
 
   const n = T - maxLags;
+  const names = series.map((_, k) => options.names?.[k] ?? `series ${k + 1}`);
+  const crossProducts = nestedCrossProducts(series, maxLags, names);
   const table: VarLagRow[] = [];
   for (let p = 0; p <= maxLags; p++) {
-    const fit = fitVar(series, p, { sampleStart: maxLags, names: options.names, withoutCovariance: true });
-    const logDetSigma = logDeterminant(fit.residualCovarianceMl);
+    const sigma = crossProducts[p].map((row) => row.map((v) => v / n));
+    const logDetSigma = logDeterminant(sigma);
     const free = p * K * K + K;
     const coefficientsPerEquation = K * p + 1;
     table.push({

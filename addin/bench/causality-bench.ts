@@ -1,0 +1,22 @@
+/**
+ * Benchmarks of the lead-lag tests on a 2,500-row pair (about ten years of daily prices):
+ * the Granger F test with 4 lags, Toda-Yamamoto with p = 4 and dmax = 1 given, Toda-Yamamoto
+ * with dmax found by the unit-root tests, and the VAR lag-order search at its default ceiling.
+ */
+import { grangerF } from '../causality/granger-f';
+import { todaYamamoto } from '../causality/toda-yamamoto';
+import { SeededRandom, randomWalk } from '../random';
+import { chooseVarLags } from '../var/choose-var-lags';
+import { timeIt, type Timing } from './timing';
+
+export function benchCausality(): Timing[] {
+  const rng = new SeededRandom(17);
+  const leader = randomWalk(rng, 2_500, { start: 100 });
+  const follower = leader.map((v, i) => (i === 0 ? v : 0.5 * leader[i - 1] + 0.5 * v) + rng.normal());
+  return [
+    timeIt('Granger F, 4 lags, n = 2,500', () => grangerF(leader, follower, { lags: 4 })),
+    timeIt('Toda-Yamamoto, p = 4, dmax = 1 given, n = 2,500', () => todaYamamoto(leader, follower, { lags: 4, extraLags: 1 })),
+    timeIt('Toda-Yamamoto, p = 4, dmax from ADF and KPSS, n = 2,500', () => todaYamamoto(leader, follower, { lags: 4 }), { runs: 10, warmup: 2 }),
+    timeIt('VAR lag order, 2 series, default ceiling (27), n = 2,500', () => chooseVarLags([leader, follower]), { runs: 10, warmup: 2 }),
+  ];
+}
