@@ -1,0 +1,117 @@
+/**
+ * The screen on several threads in Node (node:worker_threads): threads - 1 workers plus the
+ * main thread take chunks of pairs from one shared queue (chunk-queue.ts) and write into one
+ * shared result buffer; the answer is then finished exactly as on one thread, so it is the
+ * same to the last bit (each pair's numbers depend only on its series and the settings).
+ *
+ * The call is synchronous: the main thread works through chunks itself and then waits on the
+ * queue's finished count (Atomics.wait), so the command line keeps its synchronous commands.
+ * If a worker cannot start, the main thread simply takes its chunks; if one takes a chunk
+ * and falls silent for `patienceMs`, the main thread runs that chunk again.
+ */
+import { availableParallelism } from 'node:os';
+import { MessageChannel, Worker, receiveMessageOnPort, type MessagePort } from 'worker_threads';
+import { drainChunks, finishedChunks, screenJob } from './chunk-queue';
+import { finishScreen, type ScreenResult } from './screen-pairs';
+import { resolveScreenOptions, type ScreenOptions } from './screen-options';
+import { screenUniverse, unorderedPairCount, type NamedSeries } from './screen-universe';
+import { MooringInputError } from '../errors';
+
+/** How to spread the work. */
+export interface ThreadOptions {
+  /** Threads in all, the main one included (default: the machine's available parallelism, at most 16). */
+  threads?: number;
+  /** The built worker script (default: the bundle's screen-worker chunk beside this code). */
+  workerFile?: string | URL;
+  /** How long a taken chunk may stay unfinished before the main thread runs it itself (default 60 s). */
+  patienceMs?: number;
+  /** Whether the main thread takes chunks too while the workers run (default true; false leaves them all to the workers). */
+  mainThreadJoins?: boolean;
+}
+
+/** What the threads did. */
+export interface ThreadReport {
+  threads: number;
+  workersStarted: number;
+  /** Chunks the main thread ran. */
+  chunksOnMainThread: number;
+  chunks: number;
+  /** Why fewer threads helped than were asked for, if so. */
+  note?: string;
+}
+
+/** Fewest unordered pairs worth a worker: below this, starting a thread costs more than it saves. */
+export const PAIRS_PER_WORKER = 64;
+
+/** Collects the error messages waiting on the workers' ports; true when there was one. */
+function readErrors(ports: readonly MessagePort[], errors: string[]): boolean {
+  let found = false;
+  for (const port of ports) {
+    for (let m = receiveMessageOnPort(port); m !== undefined; m = receiveMessageOnPort(port)) {
+      const message = m.message as { error?: string };
+      if (message.error) {
+        errors.push(message.error);
+        found = true;
+      }
+    }
+  }
+  return found;
+}
+
+/** Screens every pair of the series on several threads; the result equals screenPairs' (see the file comment). */
+export function screenPairsInThreads(series: readonly NamedSeries[], options: ScreenOptions = {}, threading: ThreadOptions = {}): { result: ScreenResult; report: ThreadReport } {
+  const universe = screenUniverse(series);
+  const settings = resolveScreenOptions(options);
+  const requested = threading.threads ?? Math.min(availableParallelism(), 16);
+  if (!Number.isInteger(requested) || requested < 1 || requested > 64) {
+    throw new MooringInputError(`The number of threads must be a whole number from 1 to 64; got ${String(requested)}.`);
+  }
+  const total = unorderedPairCount(universe.names.length);
+  const threads = Math.max(1, Math.min(requested, Math.floor(total / PAIRS_PER_WORKER) + 1));
+  const job = screenJob(universe, settings, threads);
+  const errors: string[] = [];
+  const workers: Worker[] = [];
+  const ports: MessagePort[] = [];
+  for (let w = 0; w < threads - 1; w++) {
+    try {
+      const { port1, port2 } = new MessageChannel();
+      const worker = threading.workerFile === undefined
+        ? new Worker(/* webpackChunkName: "screen-worker" */ new URL('./screen-worker.ts', import.meta.url), { workerData: { job, port: port2 }, transferList: [port2] })
+        : new Worker(threading.workerFile, { workerData: { job, port: port2 }, transferList: [port2] });
+      worker.on('error', () => undefined); // a worker that fails to start leaves its chunks to the others
+      worker.unref();
+      workers.push(worker);
+      ports.push(port1);
+    } catch (e) {
+      errors.push(e instanceof Error ? e.message : String(e));
+    }
+  }
+  let chunksOnMainThread = threading.mainThreadJoins === false && workers.length > 0 ? 0 : drainChunks(job);
+  const states = new Int32Array(job.states);
+  const count = job.chunks.length;
+  const patience = threading.patienceMs ?? 60_000;
+  let done = finishedChunks(job);
+  let since = Date.now();
+  while (done < count) {
+    Atomics.wait(states, count, done, 50);
+    const failed = readErrors(ports, errors);
+    const now = finishedChunks(job);
+    if (now !== done && !failed) {
+      done = now;
+      since = Date.now();
+    } else if (failed || Date.now() - since > patience) {
+      if (!failed) errors.push(`a worker thread left a chunk unfinished for ${patience} ms`);
+      chunksOnMainThread += drainChunks(job, true);
+      done = finishedChunks(job);
+    }
+  }
+  readErrors(ports, errors);
+  for (const port of ports) port.close();
+  for (const worker of workers) void worker.terminate();
+  const result = finishScreen(universe, settings, new Float64Array(job.results));
+  const report: ThreadReport = { threads, workersStarted: workers.length, chunksOnMainThread, chunks: count };
+  if (threads < requested) report.note = `${requested} threads were asked for; ${total} pairs keep ${threads} busy.`;
+  if (errors.length > 0) report.note = `Some work moved to the main thread: ${errors.join('; ')}.`;
+  else if (workers.length > 0 && chunksOnMainThread === count) report.note = 'The main thread had run every chunk before the worker threads were ready.';
+  return { result, report };
+}

@@ -1,0 +1,225 @@
+/**
+ * The residual ADF of Engle-Granger step 2 (no deterministic terms; Engle & Granger 1987),
+ * for many residuals in a row, in buffers allocated once. Same rules as the single test
+ * (adfCore with 'none'), so a screened pair gets the same lag and the same tau:
+ *
+ * 1. Lag choice on the common sample of the search (T - 1 - pmax rows) from one Cholesky
+ *    factorisation of the design's cross products (the method of adf-lag-search.ts): the
+ *    lagged changes are shifted copies of one series, so their cross products follow from
+ *    the first row by adding the row entering and removing the row leaving.
+ * 2. The chosen lag p refitted on all T - 1 - p rows it can use. Its cross products are those
+ *    of step 1 plus the pmax - p earlier rows, and with the lagged level ordered last the
+ *    t-ratio of its coefficient is z_k / s, from the same factorisation (z = L^{-1} X'y,
+ *    s^2 = SSR / (n - k)). The single test refits by QR; the two agree to about 1e-13 in tau
+ *    (tests/screen measures it).
+ *
+ * The level and the changes are scaled to unit root-mean-square first, a change of units
+ * that leaves t-ratios and the lag choice unchanged and keeps the cross products well sized.
+ */
+import { gaussianLogLikelihood } from '../regression/least-squares';
+import { TSTAT_STOP, type LagRule } from '../unitroot/adf-lag-search';
+
+/** What the residual ADF reports for one residual. */
+export interface ResidualAdfAnswer {
+  tau: number;
+  /** Lagged changes used. */
+  lags: number;
+  /** Rows of the test regression, T - 1 - lags. */
+  nobs: number;
+}
+
+export class ResidualAdfWorkspace {
+  private level = new Float64Array(0);
+  private dx = new Float64Array(0);
+  private gram = new Float64Array(0); // (pmax+1)^2, row 0 = response with lags, then lag-lag
+  private levelCross = new Float64Array(0); // level with the response (0) and lag j (j)
+  private xtx = new Float64Array(0);
+  private xty = new Float64Array(0);
+  private factor = new Float64Array(0);
+  private z = new Float64Array(0);
+  private ssr = new Float64Array(0);
+  private lastT = new Float64Array(0);
+  private capacityRows = -1;
+  private capacityLags = -1;
+
+  private reserve(T: number, pmax: number): void {
+    if (T > this.capacityRows) {
+      this.capacityRows = T;
+      this.level = new Float64Array(T);
+      this.dx = new Float64Array(T);
+    }
+    if (pmax > this.capacityLags) {
+      this.capacityLags = pmax;
+      const size = pmax + 1;
+      this.gram = new Float64Array(size * size);
+      this.levelCross = new Float64Array(size);
+      this.xtx = new Float64Array(size * size);
+      this.xty = new Float64Array(size);
+      this.factor = new Float64Array(size * size);
+      this.z = new Float64Array(size);
+      this.ssr = new Float64Array(size + 1);
+      this.lastT = new Float64Array(size + 1);
+    }
+  }
+
+  /**
+   * ADF without deterministic terms on u[0..T-1], with `fixedLags` lags (>= 0) or lags chosen
+   * by `rule` from 0..pmax. Returns tau = NaN only when the design is singular at every lag
+   * (a residual that is constant or that repeats itself exactly).
+   */
+  test(u: ArrayLike<number>, T: number, pmax: number, rule: LagRule | 'fixed', fixedLags = 0): ResidualAdfAnswer {
+    const P = rule === 'fixed' ? fixedLags : pmax;
+    this.reserve(T, P);
+    const { level, dx } = this;
+    let sl = 0;
+    for (let t = 0; t < T; t++) {
+      level[t] = u[t];
+      sl += u[t] * u[t];
+    }
+    let sd = 0;
+    for (let t = 0; t < T - 1; t++) {
+      const d = u[t + 1] - u[t];
+      dx[t] = d;
+      sd += d * d;
+    }
+    const rmsLevel = Math.sqrt(sl / T);
+    const rmsChange = Math.sqrt(sd / (T - 1));
+    if (rmsLevel > 0) for (let t = 0; t < T; t++) level[t] /= rmsLevel;
+    if (rmsChange > 0) for (let t = 0; t < T - 1; t++) dx[t] /= rmsChange;
+    this.crossProducts(T, P);
+    const lags = rule === 'fixed' ? fixedLags : this.chooseLags(T, P, rule, rmsChange > 0 ? rmsChange : 1);
+    return { tau: this.tauAt(T, P, lags), lags, nobs: T - 1 - lags };
+  }
+
+  /** Cross products over rows t = P .. T-2 of the response dx[t], lags dx[t-i] (i = 1..P) and the level. */
+  private crossProducts(T: number, P: number): void {
+    const { level, dx, gram, levelCross } = this;
+    const size = P + 1;
+    const a = P;
+    const b = T - 2;
+    for (let j = 0; j <= P; j++) {
+      let s = 0;
+      for (let t = a; t <= b; t++) s += dx[t] * dx[t - j];
+      gram[j] = s;
+    }
+    for (let i = 1; i <= P; i++) {
+      for (let j = i; j <= P; j++) {
+        gram[i * size + j] = gram[(i - 1) * size + (j - 1)] + dx[a - i] * dx[a - j] - dx[b + 1 - i] * dx[b + 1 - j];
+      }
+    }
+    for (let j = 0; j <= P; j++) {
+      let s = 0;
+      for (let t = a; t <= b; t++) s += level[t] * dx[t - j];
+      levelCross[j] = s;
+    }
+  }
+
+  /** The AIC, BIC or t-rule choice among 0..P lags on the common sample (the order [level, lags 1..P] of adf-lag-search.ts). */
+  private chooseLags(T: number, P: number, rule: LagRule, responseScale: number): number {
+    const { level, gram, levelCross, xtx, xty } = this;
+    const size = P + 1;
+    const k = P + 1;
+    let ll = 0;
+    for (let t = P; t <= T - 2; t++) ll += level[t] * level[t];
+    xtx[0] = ll;
+    xty[0] = levelCross[0];
+    for (let j = 1; j <= P; j++) {
+      xtx[j] = levelCross[j];
+      xtx[j * k] = levelCross[j];
+      xty[j] = gram[j];
+      for (let i = 1; i <= j; i++) {
+        xtx[i * k + j] = gram[i * size + j];
+        xtx[j * k + i] = gram[i * size + j];
+      }
+    }
+    const n = T - 1 - P;
+    const usable = this.nestedFits(k, gram[0], n);
+    const usableLags = Math.max(0, Math.min(P, usable - 1));
+    if (rule === 'tstat') {
+      for (let p = usableLags; p >= 1; p--) if (this.lastT[1 + p] >= TSTAT_STOP) return p;
+      return 0;
+    }
+    const unit = responseScale * responseScale;
+    let best = 0;
+    let bestValue = Number.POSITIVE_INFINITY;
+    for (let p = 0; p <= usableLags; p++) {
+      const kk = 1 + p;
+      const llf = gaussianLogLikelihood(this.ssr[kk] * unit, n);
+      const value = rule === 'aic' ? -2 * llf + 2 * kk : -2 * llf + kk * Math.log(n);
+      if (value < bestValue) {
+        bestValue = value;
+        best = p;
+      }
+    }
+    return best;
+  }
+
+  /**
+   * Cholesky of xtx (k x k) column by column, with z = L^{-1} xty: ssr[j] and |t| of the last
+   * column for the first j columns (nested-cholesky.ts). Returns the columns usable before a
+   * pivot fails.
+   */
+  private nestedFits(k: number, yty: number, n: number): number {
+    const { xtx, xty, factor: L, z, ssr, lastT } = this;
+    ssr[0] = yty;
+    let explained = 0;
+    for (let j = 0; j < k; j++) {
+      let d = xtx[j * k + j];
+      for (let m = 0; m < j; m++) d -= L[j * k + m] * L[j * k + m];
+      if (!(d > 1e-13 * Math.max(xtx[j * k + j], 1e-300))) return j;
+      const ljj = Math.sqrt(d);
+      L[j * k + j] = ljj;
+      for (let i = j + 1; i < k; i++) {
+        let s = xtx[i * k + j];
+        for (let m = 0; m < j; m++) s -= L[i * k + m] * L[j * k + m];
+        L[i * k + j] = s / ljj;
+      }
+      let s = xty[j];
+      for (let m = 0; m < j; m++) s -= L[j * k + m] * z[m];
+      z[j] = s / ljj;
+      explained += z[j] * z[j];
+      const rss = Math.max(yty - explained, 0);
+      ssr[j + 1] = rss;
+      const dof = n - (j + 1);
+      lastT[j + 1] = dof > 0 && rss > 0 ? Math.abs(z[j]) / Math.sqrt(rss / dof) : Number.POSITIVE_INFINITY;
+    }
+    return k;
+  }
+
+  /** tau of the regression with p lags on rows p .. T-2, the lagged level ordered last (see the file comment). */
+  private tauAt(T: number, P: number, p: number): number {
+    const { level, dx, gram, levelCross, xtx, xty } = this;
+    const size = P + 1;
+    const k = p + 1;
+    // Rows P..T-2 from the search's cross products, then the rows p..P-1 it left out.
+    let yty = gram[0];
+    let ll = 0;
+    for (let t = P; t <= T - 2; t++) ll += level[t] * level[t];
+    for (let i = 1; i <= p; i++) {
+      xty[i - 1] = gram[i];
+      xtx[(i - 1) * k + p] = levelCross[i];
+      for (let j = i; j <= p; j++) xtx[(i - 1) * k + (j - 1)] = gram[i * size + j];
+    }
+    xty[p] = levelCross[0];
+    for (let t = p; t < P; t++) {
+      const r = dx[t];
+      const l = level[t];
+      yty += r * r;
+      ll += l * l;
+      xty[p] += l * r;
+      for (let i = 1; i <= p; i++) {
+        const di = dx[t - i];
+        xty[i - 1] += di * r;
+        xtx[(i - 1) * k + p] += di * l;
+        for (let j = i; j <= p; j++) xtx[(i - 1) * k + (j - 1)] += di * dx[t - j];
+      }
+    }
+    xtx[p * k + p] = ll;
+    for (let i = 0; i < k; i++) for (let j = i + 1; j < k; j++) xtx[j * k + i] = xtx[i * k + j];
+    const n = T - 1 - p;
+    const usable = this.nestedFits(k, yty, n);
+    if (usable < k || n - k <= 0) return Number.NaN;
+    const rss = this.ssr[k];
+    return rss > 0 ? this.z[k - 1] / Math.sqrt(rss / (n - k)) : Number.NaN;
+  }
+}

@@ -1,0 +1,94 @@
+/**
+ * From records to the ranked list: decode each tested directed pair, attach its
+ * Benjamini-Hochberg adjusted p-value, apply the half-life range, and order by evidence.
+ * Ranking only orders and filters: every number is the record's, unchanged.
+ *
+ * Order: smallest p-value first; then the more negative tau (a p-value can tie at its floor
+ * or at 0 for an exact fit); then the order of the series as given, so the order is stable.
+ */
+import { FIELD, PAIR_STATUS, RECORD_SIZE, fieldOrNull } from './pair-record';
+import type { ScreenSettings } from './screen-options';
+
+/** One directed pair in the screen's answer: y regressed on x. */
+export interface ScreenPair {
+  y: string;
+  x: string;
+  /** Engle-Granger tau of the residual ADF; null for an exact fit (tau is minus infinity). */
+  statistic: number | null;
+  /** MacKinnon (1994) p-value, as the single-pair test gives it. */
+  pValue: number;
+  /** Benjamini-Hochberg adjusted p-value over every directed pair tested. */
+  adjustedPValue: number;
+  /** True when the adjusted p-value is at or below the level. */
+  discovery: boolean;
+  /** Hedge ratio: units of x per unit of y. */
+  beta: number;
+  intercept: number;
+  /** Rows for half a gap in the spread to close; null when the spread does not revert. */
+  halfLife: number | null;
+  /** The spread's z-score on the last shared row. */
+  zscore: number | null;
+  /** Lagged changes in the residual ADF; null for an exact fit. */
+  lags: number | null;
+  /** Shared rows the pair was tested on. */
+  nobs: number;
+  /** Index (0-based) of the last shared row, where the z-score is read. */
+  lastRow: number;
+  rSquared: number;
+  /** Johansen trace rank at 5% (when asked for). */
+  johansenRank?: number | null;
+  note?: string;
+}
+
+/** The index of the series pair of directed record d: [y, x]. */
+export type DirectedIndex = (d: number) => [number, number];
+
+/** Every tested directed record as a ScreenPair, with its adjusted p-value. */
+export function decodePairs(
+  names: readonly string[], records: Float64Array, tested: readonly number[], adjusted: Float64Array, seriesOf: DirectedIndex, settings: ScreenSettings,
+): ScreenPair[] {
+  return tested.map((d, f) => {
+    const [yi, xi] = seriesOf(d);
+    const at = (field: number) => records[d * RECORD_SIZE + field];
+    const exact = at(FIELD.status) === PAIR_STATUS.exactFit;
+    const pair: ScreenPair = {
+      y: names[yi],
+      x: names[xi],
+      statistic: fieldOrNull(records, d, FIELD.tau),
+      pValue: at(FIELD.pValue),
+      adjustedPValue: adjusted[f],
+      discovery: adjusted[f] <= settings.alpha,
+      beta: at(FIELD.beta),
+      intercept: at(FIELD.intercept),
+      halfLife: fieldOrNull(records, d, FIELD.halfLife),
+      zscore: fieldOrNull(records, d, FIELD.zscore),
+      lags: fieldOrNull(records, d, FIELD.lags),
+      nobs: at(FIELD.nobs),
+      lastRow: at(FIELD.lastRow),
+      rSquared: at(FIELD.rSquared),
+    };
+    if (settings.johansen) pair.johansenRank = fieldOrNull(records, d, FIELD.johansenRank);
+    if (exact) pair.note = `${pair.y} is an exact multiple of ${pair.x} plus a constant on the shared rows: one column is probably copied or computed from the other`;
+    return pair;
+  });
+}
+
+/** True when the pair's half-life lies in the settings' range (a pair without one fails any bound). */
+export function withinHalfLifeRange(pair: ScreenPair, settings: ScreenSettings): boolean {
+  if (settings.minHalfLife === null && settings.maxHalfLife === null) return true;
+  if (pair.halfLife === null) return false;
+  if (settings.minHalfLife !== null && pair.halfLife < settings.minHalfLife) return false;
+  return settings.maxHalfLife === null || pair.halfLife <= settings.maxHalfLife;
+}
+
+/** Orders pairs by evidence (see the file comment); `position` gives each series' place in the input. */
+export function rankByEvidence(pairs: ScreenPair[], position: ReadonlyMap<string, number>): ScreenPair[] {
+  const tau = (p: ScreenPair) => (p.statistic === null ? Number.NEGATIVE_INFINITY : p.statistic);
+  return pairs.sort(
+    (a, b) =>
+      a.pValue - b.pValue ||
+      (tau(a) === tau(b) ? 0 : tau(a) < tau(b) ? -1 : 1) ||
+      (position.get(a.y) as number) - (position.get(b.y) as number) ||
+      (position.get(a.x) as number) - (position.get(b.x) as number),
+  );
+}

@@ -1,0 +1,83 @@
+import { describe, expect, it } from 'vitest';
+import { drainChunks, finishedChunks, screenJob } from '../../addin/screen/chunk-queue';
+import { RECORD_SIZE } from '../../addin/screen/pair-record';
+import { chunkRanges, screenChunk } from '../../addin/screen/screen-chunk';
+import { finishScreen, screenPairs } from '../../addin/screen/screen-pairs';
+import { resolveScreenOptions } from '../../addin/screen/screen-options';
+import { screenUniverse, unorderedPairAt, unorderedPairCount } from '../../addin/screen/screen-universe';
+import { generatedUniverse } from './generated-universe';
+
+/**
+ * The chunk function is what every thread runs, so splitting the pairs differently must give
+ * the same bits. Checked here in one thread; the worker pool itself is checked against the
+ * built bundle in screen-threads.test.ts.
+ */
+const { series } = generatedUniverse(31, { clusters: 2, perCluster: 3, walks: 4, T: 250 });
+const universe = screenUniverse(series);
+const settings = resolveScreenOptions({ johansen: true });
+const total = unorderedPairCount(series.length);
+const whole = screenChunk(universe, settings, 0, total);
+
+describe('the pure chunk function', () => {
+  it('numbers the unordered pairs (0,1), (0,2), ..., (1,2), ... for any N', () => {
+    for (const N of [2, 3, 7, 10]) {
+      const expected: [number, number][] = [];
+      for (let i = 0; i < N; i++) for (let j = i + 1; j < N; j++) expected.push([i, j]);
+      expect(expected.map((_, k) => unorderedPairAt(k, N))).toEqual(expected);
+    }
+  });
+
+  it.each([1, 2, 3, 7, 45])('gives bit-identical records when the %i-way split is run chunk by chunk', (pieces) => {
+    const parts = chunkRanges(total, pieces).map(([first, end]) => screenChunk(universe, settings, first, end));
+    const joined = new Float64Array(whole.length);
+    let at = 0;
+    for (const part of parts) {
+      joined.set(part, at);
+      at += part.length;
+    }
+    expect(at).toBe(whole.length);
+    expect(Buffer.from(joined.buffer).equals(Buffer.from(whole.buffer))).toBe(true);
+  });
+
+  it('runs a chunk the same whether it comes first or last (no state carried between pairs)', () => {
+    const lastFirst = screenChunk(universe, settings, total - 5, total);
+    expect(Array.from(lastFirst)).toEqual(Array.from(whole.subarray(2 * (total - 5) * RECORD_SIZE)));
+  });
+
+  it('splits the pairs into contiguous ranges that cover them once', () => {
+    const ranges = chunkRanges(100, 7);
+    expect(ranges[0][0]).toBe(0);
+    expect(ranges[ranges.length - 1][1]).toBe(100);
+    ranges.slice(1).forEach(([first], k) => expect(first).toBe(ranges[k][1]));
+    expect(chunkRanges(3, 10)).toHaveLength(3);
+  });
+
+  it('refuses a range outside the pairs', () => {
+    expect(() => screenChunk(universe, settings, 0, total + 1)).toThrow(RangeError);
+  });
+});
+
+describe('the shared chunk queue, drained on this thread', () => {
+  it('fills the shared buffer with the same records as one chunk, and its result equals screenPairs', () => {
+    const job = screenJob(universe, settings, 3);
+    expect(drainChunks(job)).toBe(job.chunks.length);
+    expect(finishedChunks(job)).toBe(job.chunks.length);
+    expect(Array.from(new Float64Array(job.results))).toEqual(Array.from(whole));
+    expect(finishScreen(universe, settings, new Float64Array(job.results))).toEqual(screenPairs(series, { johansen: true }));
+  });
+
+  it('a second drain finds nothing left; a retake reruns taken-but-unfinished chunks with the same numbers', () => {
+    const job = screenJob(universe, settings, 2);
+    drainChunks(job);
+    expect(drainChunks(job)).toBe(0);
+    // As if a thread had taken chunk 0 and died before finishing it: taken, not counted, records lost.
+    const states = new Int32Array(job.states);
+    Atomics.store(states, 0, 1);
+    Atomics.sub(states, job.chunks.length, 1);
+    new Float64Array(job.results).fill(0, 0, 2 * job.chunks[0][1] * RECORD_SIZE);
+    expect(drainChunks(job)).toBe(0);
+    expect(drainChunks(job, true)).toBe(1);
+    expect(Array.from(new Float64Array(job.results))).toEqual(Array.from(whole));
+    expect(finishedChunks(job)).toBe(job.chunks.length);
+  });
+});
