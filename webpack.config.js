@@ -86,6 +86,8 @@ function cliConfig(mode) {
     output: {
       path: path.join(DIST, 'cli'),
       filename: 'mooring.js',
+      // Worker threads load their own chunk by name (dist/cli/screen-worker.js for the pair screen).
+      chunkFilename: '[name].js',
       clean: true,
     },
     resolve,
