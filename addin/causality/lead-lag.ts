@@ -119,7 +119,9 @@ function directionText(d: LeadLagDirection, alpha: number): string {
 /** Plain verdict on both directions. */
 export function leadLagVerdict(ab: LeadLagDirection, ba: LeadLagDirection, method: CausalityMethod, alpha: number): string {
   const first = directionText(ab, alpha);
-  const sentence = `${first.charAt(0).toUpperCase()}${first.slice(1)}; ${directionText(ba, alpha)}.`;
+  // Capitalise our own opening words only; a series name keeps its spelling (ln(Gasoil)).
+  const opening = first.startsWith('no evidence') ? `N${first.slice(1)}` : first;
+  const sentence = `${opening}; ${directionText(ba, alpha)}.`;
   const feedback = ab.leads && ba.leads ? ' Each series helps predict the other (feedback), so neither is a clean leader.' : '';
   return `${sentence}${feedback} (${METHOD_LABEL[method].replace(/^the /, '')}, ${levelText(alpha)} level.)`;
 }

@@ -127,3 +127,15 @@ describe('leadLag: stationary pair and refusals', () => {
     expect(() => leadLag(x, y, {}, ['Same', 'Same'])).toThrow(/different names/);
   });
 });
+
+describe('leadLag verdict wording', () => {
+  it('keeps a lower-case series name as spelled at the start of the verdict', () => {
+    const demoLogs = generateDemo();
+    const g = demoLogs.columns.GateGasoil.map(Math.log);
+    const d = demoLogs.columns.DockDiesel.map(Math.log);
+    const r = leadLag(g, d, { orders: [1, 1], lags: 2 }, ['ln(GateGasoil)', 'ln(DockDiesel)']);
+    expect(r.verdict.startsWith('ln(GateGasoil) leads ln(DockDiesel)')).toBe(true);
+    const back = leadLag(d, g, { orders: [1, 1], lags: 2 }, ['ln(DockDiesel)', 'ln(GateGasoil)']);
+    expect(back.verdict.startsWith('No evidence that ln(DockDiesel) leads ln(GateGasoil)')).toBe(true);
+  });
+});

@@ -6,15 +6,22 @@ import type { Command } from '../command';
 import { adfCommand } from './adf';
 import { ecmCommand } from './ecm';
 import { egCommand } from './eg';
+import { grangerCommand } from './granger';
 import { hedgeCommand } from './hedge';
 import { kpssCommand } from './kpss';
 import { orderCommand } from './order';
 import { poCommand } from './po';
 import { ppCommand } from './pp';
+import { reportCommand } from './report';
+import { screenCommand } from './screen';
 import { spreadCommand } from './spread';
+import { varlagsCommand } from './varlags';
 
 /** Every command, in help order. */
 export const MOORING_COMMANDS: readonly Command[] = [
   adfCommand, kpssCommand, ppCommand, orderCommand,
   egCommand, poCommand, hedgeCommand, ecmCommand, spreadCommand,
+  reportCommand,
+  varlagsCommand, grangerCommand,
+  screenCommand,
 ];
