@@ -12,8 +12,6 @@ import { kpssCommand } from './kpss';
 import { orderCommand } from './order';
 import { poCommand } from './po';
 import { ppCommand } from './pp';
-import { reportCommand } from './report';
-import { screenCommand } from './screen';
 import { spreadCommand } from './spread';
 import { varlagsCommand } from './varlags';
 
@@ -21,7 +19,5 @@ import { varlagsCommand } from './varlags';
 export const MOORING_COMMANDS: readonly Command[] = [
   adfCommand, kpssCommand, ppCommand, orderCommand,
   egCommand, poCommand, hedgeCommand, ecmCommand, spreadCommand,
-  reportCommand,
   varlagsCommand, grangerCommand,
-  screenCommand,
 ];
