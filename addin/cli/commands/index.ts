@@ -12,6 +12,7 @@ import { kpssCommand } from './kpss';
 import { orderCommand } from './order';
 import { poCommand } from './po';
 import { ppCommand } from './pp';
+import { screenCommand } from './screen';
 import { spreadCommand } from './spread';
 import { varlagsCommand } from './varlags';
 
@@ -20,4 +21,5 @@ export const MOORING_COMMANDS: readonly Command[] = [
   adfCommand, kpssCommand, ppCommand, orderCommand,
   egCommand, poCommand, hedgeCommand, ecmCommand, spreadCommand,
   varlagsCommand, grangerCommand,
+  screenCommand,
 ];
