@@ -9,6 +9,7 @@ import { SeededRandom, randomWalk } from '../random';
 import { chooseVarLags } from '../var/choose-var-lags';
 import { timeIt, type Timing } from './timing';
 
+/** Timings of the lead-lag tests and the VAR order search (median and fastest of repeated runs). */
 export function benchCausality(): Timing[] {
   const rng = new SeededRandom(17);
   const leader = randomWalk(rng, 2_500, { start: 100 });

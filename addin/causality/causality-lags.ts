@@ -10,6 +10,7 @@ import { chooseVarLags } from '../var/choose-var-lags';
 /** A fixed number of lags, or the criterion that picks them. */
 export type LagChoice = number | 'aic' | 'bic';
 
+/** The lag count a test will use and how it was found. */
 export interface ResolvedLags {
   lags: number;
   /** "fixed", "aic" or "bic" (the TestResult's lagRule). */

@@ -9,6 +9,7 @@ export interface PairNames {
   effect: string;
 }
 
+/** Names used when the caller gives none. */
 export const DEFAULT_PAIR_NAMES: PairNames = { cause: 'X', effect: 'Y' };
 
 /** "GateGasoil's", "Brent futures'": the possessive of a series name. */

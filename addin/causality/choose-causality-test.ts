@@ -18,6 +18,7 @@ export type CausalityMethod = 'f-levels' | 'f-differences' | 'toda-yamamoto' | '
 /** An order of integration, or "uncertain" when the unit-root tests disagree or were not run. */
 export type OrderEvidence = 0 | 1 | 2 | 'above 2' | 'uncertain';
 
+/** What is known about the pair: both orders of integration and, if tested, cointegration. */
 export interface CausalitySituation {
   orderCause: OrderEvidence;
   orderEffect: OrderEvidence;
@@ -25,6 +26,7 @@ export interface CausalitySituation {
   cointegrated?: boolean;
 }
 
+/** The test to run, why it is valid, and the other valid tests. */
 export interface CausalityChoice {
   method: CausalityMethod;
   /** One sentence saying why this test is valid here. */

@@ -20,6 +20,7 @@ import { checkedBlock, differences, laggedColumn } from '../var/var-design';
 import { resolveLags, type LagChoice } from './causality-lags';
 import { DEFAULT_PAIR_NAMES, longRunHypotheses, possessive, shortRunHypotheses, type PairNames } from './causality-wording';
 
+/** Options of errorCorrectionCausality. */
 export interface ErrorCorrectionOptions {
   /** p lagged changes of each series. A number, or 'aic'/'bic': the VAR order in levels less one (at least 1). Default 'aic'. */
   lags?: LagChoice;
@@ -28,6 +29,7 @@ export interface ErrorCorrectionOptions {
   maxLags?: number;
 }
 
+/** Both error-correction tests, the long-run relation used and the adjustment coefficient. */
 export interface ErrorCorrectionCausality {
   shortRun: TestResult;
   longRun: TestResult;

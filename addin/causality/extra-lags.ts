@@ -5,13 +5,14 @@
  *
  * Where ADF and KPSS disagree the order is uncertain, and we take one order more (at most 2):
  * an extra lag too many costs the test a little power, one too few costs it its validity
- * (Toda & Yamamoto 1995, sec. 3: over-fitting the VAR leaves the Wald limit intact).
+ * (Toda & Yamamoto 1995, from memory: over-fitting the VAR leaves the Wald limit intact).
  */
 import { MooringInputError } from '../errors';
 import { integrationOrder, type IntegrationOrderResult } from '../unitroot/integration-order';
 import type { PairNames } from './causality-wording';
 import type { OrderEvidence } from './choose-causality-test';
 
+/** dmax and how it was set. */
 export interface ExtraLagsChoice {
   extraLags: number;
   /** "given", or how the orders set it. */

@@ -20,6 +20,7 @@ import { checkedBlock, laggedColumn } from '../var/var-design';
 import { resolveLags, liftedWarning, type LagChoice } from './causality-lags';
 import { DEFAULT_PAIR_NAMES, leadLagHypotheses, possessive, type DataForm, type PairNames } from './causality-wording';
 
+/** Options of grangerF. */
 export interface GrangerFOptions {
   /** Lags of both series: a number, or 'aic'/'bic' to choose from a VAR of the pair (default 'aic'). */
   lags?: LagChoice;

@@ -14,8 +14,10 @@ import { errorCorrectionCausality } from './error-correction-causality';
 import { grangerF } from './granger-f';
 import { todaYamamoto } from './toda-yamamoto';
 
+/** The method words grangerTest accepts. */
 export const CAUSALITY_METHODS: readonly CausalityMethod[] = ['f-levels', 'f-differences', 'toda-yamamoto', 'error-correction'];
 
+/** Options of grangerTest; each applies to the methods its comment names. */
 export interface GrangerTestOptions {
   /** Which test; default 'f-levels', Granger's test on the values as given. */
   method?: CausalityMethod;
@@ -32,6 +34,7 @@ export interface GrangerTestOptions {
   extraLagsRule?: string;
 }
 
+/** One direction's answer: which test, its result and, for the error-correction form, the long-run result. */
 export interface CausalityDirection {
   cause: string;
   effect: string;

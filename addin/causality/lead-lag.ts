@@ -16,6 +16,7 @@ import { directionLeads, grangerTest, type CausalityDirection } from './granger-
 /** 'auto' picks the valid test; 'f', 'ty' and 'ecm' ask for the F test, Toda-Yamamoto or the error-correction form. */
 export type LeadLagMethod = 'auto' | 'f' | 'ty' | 'ecm';
 
+/** Options of leadLag. */
 export interface LeadLagOptions {
   /** Level for the verdict and the unit-root tests (default 0.05). */
   alpha?: number;
@@ -33,11 +34,13 @@ export interface LeadLagOptions {
   withCompanions?: boolean;
 }
 
+/** One direction of leadLag, with its reading at the chosen level. */
 export interface LeadLagDirection extends CausalityDirection {
   /** True when this direction shows a lead at the chosen level. */
   leads: boolean;
 }
 
+/** Both directions, the test used and why, the verdict and the cautions. */
 export interface LeadLagResult {
   names: [string, string];
   alpha: number;

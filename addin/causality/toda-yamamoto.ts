@@ -19,6 +19,7 @@ import { resolveLags, liftedWarning, type LagChoice } from './causality-lags';
 import { DEFAULT_PAIR_NAMES, leadLagHypotheses, possessive, type PairNames } from './causality-wording';
 import { extraLagsFromOrders, type ExtraLagsChoice } from './extra-lags';
 
+/** Options of todaYamamoto. */
 export interface TodaYamamotoOptions {
   /** p: lags tested (a number, or 'aic'/'bic' chosen on the VAR in levels; default 'aic'). */
   lags?: LagChoice;

@@ -1,5 +1,5 @@
 /**
- * VAR lag order by information criteria (Lutkepohl 2005, sec. 4.3). Every order p = 0..M is
+ * VAR lag order by information criteria (Lutkepohl 2005). Every order p = 0..M is
  * fitted with a constant on the same rows t = M + 1..T (n = T - M), so the criteria compare like
  * with like. With Sigma = E'E / n and free = pK^2 + K coefficients:
  *   AIC = ln|Sigma| + 2 free / n,   BIC = ln|Sigma| + ln(n) free / n,
@@ -18,6 +18,7 @@ import { MooringInputError } from '../errors';
 import { HouseholderQr, assertFullRank } from '../linalg/householder-qr';
 import { checkedBlock, checkedLagCount, varDesign } from './var-design';
 
+/** The four criteria (and ln|Sigma|) of one VAR order. */
 export interface VarLagRow {
   lags: number;
   aic: number;
@@ -28,6 +29,7 @@ export interface VarLagRow {
   logDetSigma: number;
 }
 
+/** The order each criterion chooses, the search settings and the full table. */
 export interface VarLagChoice {
   aic: number;
   bic: number;

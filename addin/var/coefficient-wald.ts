@@ -1,7 +1,7 @@
 /**
  * Wald statistic that a set of coefficients in one regression equation are all zero:
  * W = b' V^{-1} b, with b the estimates and V their estimated covariance block; chi-square with
- * as many degrees of freedom as coefficients under the null (Lutkepohl 2005, sec. 3.6.1).
+ * as many degrees of freedom as coefficients under the null (Lutkepohl 2005, from memory).
  *
  * In a VAR fitted by equation-by-equation least squares the covariance of equation e's
  * coefficients is sigma_e^2 (Z'Z)^{-1} with sigma_e^2 = e_e'e_e / (n - Kp - d). That is exactly
@@ -12,6 +12,7 @@ import { Matrix, solve } from 'ml-matrix';
 import { MooringInputError } from '../errors';
 import type { LeastSquaresFit } from '../regression/least-squares';
 
+/** A Wald statistic, its degrees of freedom and the coefficients it tested. */
 export interface CoefficientWald {
   statistic: number;
   df: number;

@@ -2,16 +2,17 @@
  * A vector autoregression fitted by least squares, one equation at a time:
  * y_t = c (+ d t) + A_1 y_{t-1} + ... + A_p y_{t-p} + u_t.
  * Because every equation has the same regressors, equation-by-equation OLS is the full
- * (Gaussian) estimator (Lutkepohl 2005, sec. 3.2).
+ * (Gaussian) estimator (Zellner 1962 and Lutkepohl 2005, from memory).
  *
  * Residual covariance two ways: Sigma_u = E'E / (n - Kp - d), the unbiased form the reference
- * library uses for coefficient standard errors and Wald tests (Lutkepohl 2005, eq. 3.2.19), and
+ * library uses for coefficient standard errors and Wald tests, and
  * Sigma_ml = E'E / n, the maximum-likelihood form the lag-order criteria use.
  */
 import { MooringInputError } from '../errors';
 import { leastSquares, type LeastSquaresFit } from '../regression/least-squares';
 import { VAR_TRENDS, checkedBlock, checkedLagCount, varDesign, varLagRow, varTrendCount, type VarTrend } from './var-design';
 
+/** Options of fitVar. */
 export interface FitVarOptions {
   /** Deterministic terms; default a constant. */
   trend?: VarTrend;
@@ -26,6 +27,7 @@ export interface FitVarOptions {
   withoutCovariance?: boolean;
 }
 
+/** A fitted VAR: coefficients, each equation's fit and the residual covariances. */
 export interface VarFit {
   names: string[];
   /** Number of variables K. */

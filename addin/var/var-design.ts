@@ -11,6 +11,7 @@ import { MooringInputError } from '../errors';
 /** Deterministic terms of a VAR: a constant, or a constant and a linear trend. */
 export type VarTrend = 'const' | 'const-trend';
 
+/** The accepted trend words, for checks and messages. */
 export const VAR_TRENDS: readonly VarTrend[] = ['const', 'const-trend'];
 
 /** Number of deterministic columns for a trend choice. */
@@ -75,6 +76,7 @@ export function differences(x: ArrayLike<number>): Float64Array {
   return out;
 }
 
+/** Responses and regressor columns of a VAR on one sample. */
 export interface VarDesign {
   /** Responses, one per variable: y_k[t] for t = sampleStart .. T - 1. */
   responses: Float64Array[];
