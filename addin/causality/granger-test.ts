@@ -3,6 +3,10 @@
  * the F test on the values or on the changes (Granger 1969), Toda-Yamamoto (1995) or the
  * error-correction form (Granger 1988). Each returns TestResults that state their null in words;
  * the error-correction form returns two (short run and long run).
+ *
+ * With lags 'aic' or 'bic' the VAR order is chosen on the data each test models: the values for
+ * the F test on values and Toda-Yamamoto, the changes for the F test on changes, and the values
+ * less one lag (a VAR(P) in levels has P - 1 lagged changes) for the error-correction form.
  */
 import { MooringInputError } from '../errors';
 import { rejects, type TestResult } from '../result';
