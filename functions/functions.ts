@@ -188,7 +188,7 @@ export function spread(y: any[][], x: any[][], beta?: any): any[][] {
  * @customfunction HALFLIFE
  * @helpurl https://localhost:3000/docs/functions.md#halflife
  * @param y A spread, or the prices of the series on the left of the relation: one column or one row.
- * @param [x] Prices of the other series, on the same rows as y. Leave out when y is already a spread.
+ * @param [x] Prices of the other series, on the same rows as y. Default: none, when y is already a spread.
  * @returns The half-life in rows (days for daily prices).
  */
 export function halflife(y: any[][], x?: any[][]): number {
@@ -196,11 +196,11 @@ export function halflife(y: any[][], x?: any[][]): number {
 }
 
 /**
- * z-score of the spread, row by row: how many standard deviations it stands from its mean.
+ * Z-score of the spread, row by row: how many standard deviations it stands from its mean.
  * @customfunction ZSCORE
  * @helpurl https://localhost:3000/docs/functions.md#zscore
  * @param y A spread, or the prices of the series on the left of the relation: one column or one row.
- * @param [x] Prices of the other series, on the same rows as y. Leave out when y is already a spread.
+ * @param [x] Prices of the other series, on the same rows as y. Default: none, when y is already a spread.
  * @param [window] Rows in a trailing window (3 or more). Default: the whole sample.
  * @returns The z-scores, one per row of y, spilled beside the prices.
  */
