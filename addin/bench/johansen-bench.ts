@@ -9,7 +9,7 @@ import { SeededRandom, autoregressive1, randomWalk } from '../random';
 import { timeIt, type Timing } from './timing';
 
 /** Six prices over 2,500 rows: four independent walks and two series tied to them. */
-function benchBlock(): Float64Array[] {
+export function benchBlock(): Float64Array[] {
   const rng = new SeededRandom(2500);
   const walks = [0, 1, 2, 3].map(() => randomWalk(rng, 2500, { start: 100, drift: 0.02 }));
   const tied = (a: Float64Array, b: Float64Array, k: number) => {

@@ -12,6 +12,9 @@ import { SeededRandom, randomWalk } from '../../addin/random';
 import { benchUnitRoot } from '../../addin/bench/unitroot-bench';
 import { benchCleaner } from '../../addin/bench/cleaner-bench';
 import { benchEngleGranger, benchPair } from '../../addin/bench/cointegration-bench';
+import { benchBlock, benchJohansen } from '../../addin/bench/johansen-bench';
+import { benchCausality } from '../../addin/bench/causality-bench';
+import { benchBreaks } from '../../addin/bench/breaks-bench';
 import type { Timing } from '../../addin/bench/timing';
 
 interface ReferenceTimes {
@@ -39,9 +42,16 @@ function main(): void {
   const unitRoot = benchUnitRoot();
   const cleaner = benchCleaner();
   const cointegration = benchEngleGranger();
+  const johansen = benchJohansen();
+  const causality = benchCausality();
+  const breaks = benchBreaks();
   const walk = Array.from(randomWalk(new SeededRandom(11), 10_000, { start: 100 }));
   const pair = benchPair();
-  const reference = referenceTimes({ adf: [walk], coint: [[Array.from(pair.y), Array.from(pair.x)]] });
+  const reference = referenceTimes({
+    adf: [walk],
+    coint: [[Array.from(pair.y), Array.from(pair.x)]],
+    johansen: [benchBlock().map((s) => Array.from(s))],
+  });
   const comparisons: Record<string, unknown> = {};
   if (typeof reference === 'object' && reference.adfullerAicMs) {
     const ours = unitRoot[0].medianMs;
@@ -51,7 +61,11 @@ function main(): void {
     const ours = cointegration[0].medianMs;
     comparisons.engleGrangerAic2500 = { oursMs: ours, referenceMs: round(reference.cointAicMs), ratio: round(ours / reference.cointAicMs), goal: 0.02 };
   }
-  const all: Timing[] = [...unitRoot, ...cleaner, ...cointegration];
+  if (typeof reference === 'object' && reference.cointJohansenMs) {
+    const ours = johansen[0].medianMs;
+    comparisons.johansen6x2500 = { oursMs: ours, referenceMs: round(reference.cointJohansenMs), ratio: round(ours / reference.cointJohansenMs) };
+  }
+  const all: Timing[] = [...unitRoot, ...cleaner, ...cointegration, ...johansen, ...causality, ...breaks];
   const report = {
     machine: { node: process.version, cpus: cpus().length },
     benchmarks: all,
