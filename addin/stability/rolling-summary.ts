@@ -1,0 +1,38 @@
+/**
+ * The sentences under a rolling or expanding analysis: how many windows pass at 5%, where
+ * the latest window stands, how far the hedge ratio moved, and why the share of passing
+ * windows is a description rather than a test (overlapping windows share most of their rows,
+ * so their p-values are far from independent).
+ */
+import { formatCoefficient, formatPValue } from '../cointegration/wording';
+import { groupedNumber } from '../screen/chance-sentence';
+import type { RollingRelation } from './rolling-relation';
+
+/** Level the summary reads the p-values at. */
+const SUMMARY_LEVEL = 0.05;
+
+/** The summary sentences of a finished analysis. */
+export function rollingSummary(r: RollingRelation, names: { y: string; x: string }, flatWindows: number): string[] {
+  const kind = r.expanding ? 'expanding windows' : `rolling windows of ${groupedNumber(r.window)} rows`;
+  const total = r.endRow.length;
+  const tested = r.pValue.filter((p): p is number => p !== null);
+  const passing = tested.filter((p) => p <= SUMMARY_LEVEL).length;
+  const out = [
+    `In ${groupedNumber(passing)} of ${groupedNumber(tested.length)} ${kind} (${Math.round((100 * passing) / Math.max(tested.length, 1))}%), ` +
+      `the Engle-Granger p-value of ${names.y} on ${names.x} is at or below 5%.`,
+  ];
+  const lastP = r.pValue[total - 1];
+  const lastBeta = r.beta[total - 1];
+  if (lastP !== null && lastBeta !== null) {
+    out.push(`In the latest window (${groupedNumber(r.nobs[total - 1])} rows) it is ${formatPValue(lastP)}, with a hedge ratio of ${formatCoefficient(lastBeta)}.`);
+  }
+  const betas = r.beta.filter((b): b is number => b !== null);
+  if (betas.length > 1) {
+    out.push(`The hedge ratio ranged from ${formatCoefficient(Math.min(...betas))} to ${formatCoefficient(Math.max(...betas))} across the windows.`);
+  }
+  if (flatWindows > 0) out.push(`In ${groupedNumber(flatWindows)} window${flatWindows === 1 ? '' : 's'} ${names.x} or ${names.y} does not move, so there is no hedge ratio there.`);
+  if (total > 1) {
+    out.push('Neighbouring windows share most of their rows, so their p-values are not independent tests: the share that pass describes the history, it does not test it.');
+  }
+  return out;
+}
