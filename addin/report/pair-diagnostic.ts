@@ -1,0 +1,111 @@
+/**
+ * The full diagnosis of one pair, in the order each step needs the one before:
+ * Engle-Granger both ways and the Johansen rank (the evidence), the lead-lag tests (whose
+ * test depends on that evidence), then the normalisation (the follower written on its
+ * leader), Phillips-Ouliaris, the long-run relation, the spread and its adjustment.
+ *
+ * A step the data cannot support (a copied column leaves no gap for an error-correction
+ * model) is recorded as unavailable with the engine's reason instead of sinking the report;
+ * anything other than a MooringInputError is a defect and is let through.
+ */
+import { isMooringInputError } from '../errors';
+import { chooseVarLags } from '../var/choose-var-lags';
+import type { JohansenCase } from '../johansen/johansen';
+import type { Deterministic } from '../result';
+import { johansenSection } from './johansen-choice';
+import { leadLagSection, type OrderFacts } from './lead-lag-section';
+import { spreadSeries } from '../spread/spread-series';
+import { longRunRelation } from './long-run-relation';
+import { adjustmentSection, spreadSection } from './pair-adjustment';
+import { engleGrangerPair, pairCointegration, phillipsOuliarisSummary } from './pair-cointegration';
+import type { PairReport, UnavailablePart } from './pair-types';
+import { cointegrationVerdict, pairVerdicts } from './pair-verdicts';
+import { pairWarnings } from './pair-warnings';
+
+/** Everything a pair's diagnosis needs from the report around it. */
+export interface PairContext {
+  alpha: number;
+  deterministic: Deterministic;
+  lagRule: 'aic' | 'bic';
+  johansenCase: JohansenCase | 'auto';
+  period: string;
+  rollingWindow: number;
+  logged: boolean;
+  rowLabels: readonly string[];
+  dates: readonly string[] | null;
+  /** Each series' order of integration and whether ADF and KPSS agree, by name. */
+  orders: Record<string, OrderFacts>;
+}
+
+/** Runs one step, recording a refusal as an unavailable part; returns null then. */
+function attempt<T>(part: string, unavailable: UnavailablePart[], step: () => T): T | null {
+  try {
+    return step();
+  } catch (e) {
+    if (!isMooringInputError(e)) throw e;
+    unavailable.push({ part, reason: e.message });
+    return null;
+  }
+}
+
+/** The diagnosis of the pair (a, b). */
+export function diagnosePair(a: Float64Array, b: Float64Array, names: { a: string; b: string }, context: PairContext): PairReport {
+  const unavailable: UnavailablePart[] = [];
+  const { alpha, deterministic, lagRule } = context;
+  const eg = engleGrangerPair(a, b, names, { alpha, deterministic, lagRule });
+  const levelsOrder = attempt('VAR order', unavailable, () => chooseVarLags([a, b])) ?? undefined;
+  const johansen = attempt('Johansen test', unavailable, () =>
+    johansenSection([a, b], [names.a, names.b], { alpha, lagRule, johansenCase: context.johansenCase, varOrder: levelsOrder }));
+  const factsA = context.orders[names.a];
+  const factsB = context.orders[names.b];
+  const bothIntegrated = factsA.order === 1 && factsB.order === 1;
+  const cointegrated = bothIntegrated && eg.evidence !== 'none';
+  const leadLag = attempt('lead-lag test', unavailable, () => {
+    const equilibriumError = spreadSeries(a, b, eg.aOnB.beta, eg.aOnB.intercept ?? 0, { y: names.a, x: names.b });
+    return leadLagSection(a, b, names, { a: factsA, b: factsB, cointegrated, equilibriumError }, { alpha, lagRule, levelsOrder });
+  });
+
+  // The follower is written on its leader; without one leader the pair keeps its given order.
+  const bFollows = cointegrated && leadLag?.leader === names.a;
+  const [y, x] = bFollows ? [b, a] : [a, b];
+  const yx = bFollows ? { y: names.b, x: names.a } : { y: names.a, x: names.b };
+  const normalisationReason = bFollows
+    ? `${names.a} leads, so the relation is written for ${names.b}, the follower, on its leader.`
+    : cointegrated && leadLag?.leader === names.b
+      ? `${names.b} leads, so the relation is written for ${names.a}, the follower, on its leader.`
+      : `No single leader, so the relation is written for ${names.a}, the first of the pair, on ${names.b}.`;
+
+  const phillipsOuliaris = attempt('Phillips-Ouliaris test', unavailable, () => phillipsOuliarisSummary(y, x, yx, { alpha, deterministic }));
+  const relation = attempt('long-run relation', unavailable, () =>
+    longRunRelation(y, x, yx, { logged: context.logged, rowLabels: context.rowLabels, normalisationReason }));
+  const line = bFollows ? eg.bOnA : eg.aOnB;
+  const spread = attempt('spread', unavailable, () =>
+    spreadSection(y, x, { beta: line.beta, intercept: line.intercept ?? 0 }, yx, {
+      rowLabels: context.rowLabels,
+      dates: context.dates,
+      rollingWindow: context.rollingWindow,
+      period: context.period,
+      logged: context.logged,
+    }));
+  const adjustment = spread === null
+    ? null
+    : attempt('error-correction model', unavailable, () => adjustmentSection(y, x, spread.values, yx, { alpha, deterministic, period: context.period }));
+
+  const orderNumbers = { [names.a]: factsA.order, [names.b]: factsB.order };
+  const verdict = cointegrationVerdict({ engleGranger: eg, evidence: eg.evidence, bothIntegrated }, yx.y, yx.x, orderNumbers);
+  const partial: Omit<PairReport, 'verdicts' | 'warnings'> = {
+    a: names.a,
+    b: names.b,
+    cointegration: pairCointegration({ engleGranger: eg, phillipsOuliaris, johansen, bothIntegrated }, verdict),
+    leadLag,
+    relation,
+    adjustment,
+    spread: spread?.report ?? null,
+    unavailable,
+  };
+  return {
+    ...partial,
+    verdicts: pairVerdicts(partial),
+    warnings: pairWarnings(partial, { orders: orderNumbers, observations: a.length, period: context.period }),
+  };
+}

@@ -1,0 +1,188 @@
+/**
+ * The shape of one pair in the pairwise diagnostic: cointegration evidence, the long-run
+ * relation, how fast the spread closes, where it stands now, and which series leads. Plain
+ * data only (see report-types.ts). A part the data cannot support (a copied column leaves no
+ * spread to model) is null, and `unavailable` says why in the engine's own words.
+ */
+import type { CausalityMethod } from '../causality/choose-causality-test';
+import type { JohansenSummary } from './report-types';
+import type { TestSummary } from './test-summary';
+
+/** How strong the residual-based evidence of a long-run relation is. */
+export type CointegrationEvidence = 'both-directions' | 'one-direction' | 'none';
+
+/** Engle-Granger in one normalisation, with its step-1 line. */
+export interface EngleGrangerSummary extends TestSummary {
+  dependent: string;
+  regressor: string;
+  beta: number;
+  intercept: number | null;
+}
+
+/** Cointegration tests of the pair. */
+export interface PairCointegration {
+  /** Both series I(1): the condition the tests assume. */
+  bothIntegrated: boolean;
+  engleGranger: { aOnB: EngleGrangerSummary; bOnA: EngleGrangerSummary; agree: boolean };
+  /** Phillips-Ouliaris Z-t of the relation's dependent on its regressor. */
+  phillipsOuliaris: TestSummary | null;
+  johansen: JohansenSummary | null;
+  evidence: CointegrationEvidence;
+  /** The report's decision: both I(1) and Engle-Granger rejects in at least one direction. */
+  cointegrated: boolean;
+  verdict: string;
+}
+
+/** A hedge ratio estimate: y = intercept + beta x. */
+export interface LineEstimate {
+  beta: number;
+  intercept: number;
+}
+
+/** The long-run relation of the pair, dependent on regressor. */
+export interface LongRunRelation {
+  dependent: string;
+  regressor: string;
+  /** One sentence: why this series is the dependent one. */
+  normalisationReason: string;
+  ols: LineEstimate;
+  /** Dynamic OLS; its standard error uses Andrews' plug-in bandwidth (Bartlett lags), which allows for a persistent spread. */
+  dynamicOls: LineEstimate & { standardError: number; leadsLags: number; bandwidth: number; observations: number };
+  /** The relation in words: "DockDiesel = 0.4123 + 1.148 GateGasoil" (logs marked). */
+  text: string;
+  /** The dynamic-OLS beta on each half of the sample; null when the halves are too short. */
+  halves: {
+    first: { beta: number; standardError: number; from: string; to: string };
+    second: { beta: number; standardError: number; from: string; to: string };
+    /** |difference| divided by the standard error of the difference. */
+    differenceInStandardErrors: number;
+    stable: boolean;
+  } | null;
+  halvesNote: string | null;
+}
+
+/** One side of the error-correction model. */
+export interface AdjustmentSide {
+  series: string;
+  /** Coefficient on yesterday's gap in this series' change equation. */
+  speed: number;
+  standardError: number;
+  pValue: number;
+  /** Whether this series moves back toward the relation, significantly at the report's level. */
+  corrects: boolean;
+}
+
+/** How the gap closes: error-correction model and the spread's own AR(1). */
+export interface AdjustmentReport {
+  ecm: {
+    lags: number;
+    observations: number;
+    dependent: AdjustmentSide;
+    regressor: AdjustmentSide;
+    /** Speed of the gap with both sides adjusting. */
+    combinedSpeed: number;
+    halfLife: number | null;
+    halfLifeNote: string | null;
+  };
+  spreadAr1: {
+    /** AR(1) coefficient of the spread. */
+    phi: number;
+    speed: number;
+    halfLife: number | null;
+    halfLifeNote: string | null;
+  };
+  verdict: string;
+}
+
+/** The spread (the Engle-Granger residual of dependent on regressor) and where it stands now. */
+export interface SpreadReport {
+  /** What the spread is, in words. */
+  definition: string;
+  mean: number;
+  standardDeviation: number;
+  /** mean + 2 standard deviations and mean - 2 standard deviations: the chart's bands. */
+  bandUpper: number;
+  bandLower: number;
+  latest: number;
+  latestRow: string;
+  latestDate: string | null;
+  /** z-score of the latest value over the whole sample. */
+  latestZ: number;
+  /** z-score of the latest value over the trailing window. */
+  latestRollingZ: number | null;
+  rollingWindow: number;
+  /** Every value, for the chart with bands at mean +/- 2 standard deviations. */
+  values: number[];
+  /** Trailing-window z-score of every row (null before the window fills). */
+  rollingZ: (number | null)[];
+  verdict: string;
+}
+
+/** One direction of the lead-lag question, "does cause lead effect?". */
+export interface LeadLagDirectionSummary {
+  cause: string;
+  effect: string;
+  /** The headline test (for the error-correction form, its short-run test). */
+  test: TestSummary;
+  /** The error-correction form's long-run test; null for the other tests. */
+  longRun: TestSummary | null;
+  /** Whether this direction shows a lead at the report's level (for the error-correction form: either test at half the level). */
+  leads: boolean;
+  /** The level each test's `rejects` is judged at: the report's, or half of it for the error-correction form's two tests. */
+  level: number;
+}
+
+/** Lead-lag evidence between the two series, both directions, from the causality module's decision function. */
+export interface LeadLagReport {
+  /** The valid test for these data: 'f-levels', 'f-differences', 'error-correction' or 'toda-yamamoto'. */
+  method: CausalityMethod;
+  /** One sentence: why this test is the valid one here. */
+  why: string;
+  /** Does a lead b? */
+  aLeadsB: LeadLagDirectionSummary;
+  /** Does b lead a? */
+  bLeadsA: LeadLagDirectionSummary;
+  /** The leader, when exactly one direction shows a lead; null otherwise. */
+  leader: string | null;
+  pattern: 'one-way' | 'both-ways' | 'neither';
+  verdict: string;
+  /** The lead-lag cautions (it is evidence, not cause and effect) and the tests' own warnings. */
+  cautions: string[];
+}
+
+/** A part of the pair's diagnosis the data could not support. */
+export interface UnavailablePart {
+  part: string;
+  reason: string;
+}
+
+/** What a pair warning is about, so a surface can group or mark it. */
+export type PairWarningKind =
+  | 'inputs-not-integrated'
+  | 'directions-disagree'
+  | 'residual-tests-disagree'
+  | 'johansen-disagrees'
+  | 'near-unit-root'
+  | 'relation-moved'
+  | 'part-unavailable';
+
+/** One warning of a pair. */
+export interface PairWarning {
+  kind: PairWarningKind;
+  text: string;
+}
+
+/** The full diagnosis of one pair. */
+export interface PairReport {
+  a: string;
+  b: string;
+  cointegration: PairCointegration;
+  leadLag: LeadLagReport | null;
+  relation: LongRunRelation | null;
+  adjustment: AdjustmentReport | null;
+  spread: SpreadReport | null;
+  unavailable: UnavailablePart[];
+  /** Plain-language verdicts at the report's level, in reading order. */
+  verdicts: string[];
+  warnings: PairWarning[];
+}

@@ -1,0 +1,56 @@
+/**
+ * Each series' part of the diagnostic: its order of integration by the ADF-down, KPSS-check
+ * decision (integrationOrder), the tests behind it, and its values for the chart, rebased to
+ * 100 at the first row so series in different units share one axis.
+ */
+import type { Deterministic } from '../result';
+import { integrationOrder, type IntegrationOrderResult } from '../unitroot/integration-order';
+import type { SeriesReport } from './report-types';
+import { summariseTest } from './test-summary';
+
+/** Order words for the report: 0, 1, 2, and 3 standing for "above 2". */
+export function orderNumber(order: IntegrationOrderResult['order']): number {
+  return order === 'above 2' ? 3 : order;
+}
+
+/** "I(0)", "I(1)", "I(2)", "above I(2)". */
+export function orderText(order: number): string {
+  return order > 2 ? 'above I(2)' : `I(${order})`;
+}
+
+/**
+ * The chart line of a series: 100 x value / first value; for logs 100 x exp(value - first),
+ * the same thing in prices. A series with a value at or below zero cannot be rebased and is
+ * standardised instead (value minus mean, over the standard deviation).
+ */
+export function chartLine(values: Float64Array, logged: boolean): SeriesReport['chart'] {
+  const first = values[0];
+  if (logged) return { kind: 'rebased', values: Array.from(values, (v) => 100 * Math.exp(v - first)) };
+  if (values.every((v) => v > 0)) return { kind: 'rebased', values: Array.from(values, (v) => (100 * v) / first) };
+  let mean = 0;
+  for (const v of values) mean += v;
+  mean /= values.length;
+  let ss = 0;
+  for (const v of values) ss += (v - mean) ** 2;
+  const sd = Math.sqrt(ss / (values.length - 1));
+  return { kind: 'standardised', values: Array.from(values, (v) => (v - mean) / sd) };
+}
+
+/** The series section of one series. */
+export function seriesSection(name: string, values: Float64Array, options: { alpha: number; deterministic: Deterministic; logged: boolean }): SeriesReport {
+  const result = integrationOrder(values, { alpha: options.alpha, deterministic: options.deterministic }, name);
+  const order = orderNumber(result.order);
+  return {
+    name,
+    order,
+    orderText: orderText(order),
+    agree: result.agree,
+    verdict: result.verdict,
+    steps: result.steps
+      .slice()
+      .sort((u, v) => u.differences - v.differences)
+      .map((s) => ({ differences: s.differences, adf: summariseTest(s.adf, options.alpha), kpss: summariseTest(s.kpss, options.alpha) })),
+    warnings: result.warnings.slice(),
+    chart: chartLine(values, options.logged),
+  };
+}
