@@ -32,3 +32,21 @@ export function chiSquareUpperP(x: number, df: number): number {
   if (x <= 0) return 1;
   return 1 - jStat.chisquare.cdf(x, df);
 }
+
+/** Upper-tail critical values of F(df1, df2) at the 10%, 5% and 1% levels. */
+export function fCriticalValues(df1: number, df2: number): { '10%': number; '5%': number; '1%': number } {
+  return {
+    '10%': jStat.centralF.inv(0.9, df1, df2),
+    '5%': jStat.centralF.inv(0.95, df1, df2),
+    '1%': jStat.centralF.inv(0.99, df1, df2),
+  };
+}
+
+/** Upper-tail critical values of chi-square(df) at the 10%, 5% and 1% levels. */
+export function chiSquareCriticalValues(df: number): { '10%': number; '5%': number; '1%': number } {
+  return {
+    '10%': jStat.chisquare.inv(0.9, df),
+    '5%': jStat.chisquare.inv(0.95, df),
+    '1%': jStat.chisquare.inv(0.99, df),
+  };
+}

@@ -12,7 +12,7 @@
  * cause over the whole sample (the first step of Engle & Granger 1987).
  */
 import { MooringInputError } from '../errors';
-import { chiSquareUpperP, fUpperP, studentTwoSidedP } from '../distributions';
+import { chiSquareUpperP, fCriticalValues, fUpperP, studentTwoSidedP } from '../distributions';
 import { leastSquares } from '../regression/least-squares';
 import type { TestResult } from '../result';
 import { coefficientWald } from '../var/coefficient-wald';
@@ -128,6 +128,7 @@ export function errorCorrectionCausality(cause: ArrayLike<number>, effect: Array
     pValue: fUpperP(fStatistic, p, df),
     rejectTail: 'upper',
     ...common,
+    critical: fCriticalValues(p, df),
     ...shortRunHypotheses(names),
     warnings,
     details: [

@@ -13,7 +13,7 @@
  * applies (Sims, Stock & Watson 1990). leadLag chooses a valid form for the data.
  */
 import { MooringInputError } from '../errors';
-import { chiSquareUpperP, fUpperP } from '../distributions';
+import { chiSquareUpperP, fCriticalValues, fUpperP } from '../distributions';
 import { leastSquares } from '../regression/least-squares';
 import type { TestResult } from '../result';
 import { checkedBlock, laggedColumn } from '../var/var-design';
@@ -81,7 +81,7 @@ export function grangerF(cause: ArrayLike<number>, effect: ArrayLike<number>, op
     statisticName: 'F',
     statistic: fStatistic,
     pValue: fUpperP(fStatistic, P, dfDenom),
-    critical: {},
+    critical: fCriticalValues(P, dfDenom),
     rejectTail: 'upper',
     lags: P,
     lagRule: resolved.rule,

@@ -10,7 +10,7 @@
  * sigma_e^2 = SSR_e / (n - K(p + dmax) - 1).
  */
 import { MooringInputError } from '../errors';
-import { chiSquareUpperP } from '../distributions';
+import { chiSquareCriticalValues, chiSquareUpperP } from '../distributions';
 import type { TestResult } from '../result';
 import { coefficientWald } from '../var/coefficient-wald';
 import { coefficientRow, fitVar } from '../var/fit-var';
@@ -69,7 +69,7 @@ export function todaYamamoto(cause: ArrayLike<number>, effect: ArrayLike<number>
     statisticName: 'Wald chi-square',
     statistic: wald.statistic,
     pValue: chiSquareUpperP(wald.statistic, p),
-    critical: {},
+    critical: chiSquareCriticalValues(p),
     rejectTail: 'upper',
     lags: p,
     lagRule: resolved.rule,

@@ -17,3 +17,13 @@ describe('distributions from jstat', () => {
     expect(chiSquareUpperP(3.841458821, 1)).toBeCloseTo(0.05, 8);
   });
 });
+
+describe('critical values from jstat quantiles', () => {
+  // Textbook values (e.g. any F and chi-square table; Abramowitz & Stegun 1964, Tables 26.8 and 26.9).
+  it('F(3, 20) at 5% is 3.0984 and chi-square(2) at 5% is 5.9915', async () => {
+    const { fCriticalValues, chiSquareCriticalValues } = await import('../../addin/distributions');
+    expect(fCriticalValues(3, 20)['5%']).toBeCloseTo(3.0984, 4);
+    expect(chiSquareCriticalValues(2)['5%']).toBeCloseTo(5.9915, 4);
+    expect(chiSquareCriticalValues(1)['1%']).toBeCloseTo(6.6349, 4);
+  });
+});
