@@ -4,6 +4,7 @@
  */
 import type { Command } from '../command';
 import { adfCommand } from './adf';
+import { breaksCommand } from './breaks';
 import { ecmCommand } from './ecm';
 import { egCommand } from './eg';
 import { grangerCommand } from './granger';
@@ -12,6 +13,7 @@ import { kpssCommand } from './kpss';
 import { orderCommand } from './order';
 import { poCommand } from './po';
 import { ppCommand } from './pp';
+import { rollingCommand } from './rolling';
 import { screenCommand } from './screen';
 import { spreadCommand } from './spread';
 import { varlagsCommand } from './varlags';
@@ -21,5 +23,5 @@ export const MOORING_COMMANDS: readonly Command[] = [
   adfCommand, kpssCommand, ppCommand, orderCommand,
   egCommand, poCommand, hedgeCommand, ecmCommand, spreadCommand,
   varlagsCommand, grangerCommand,
-  screenCommand,
+  screenCommand, rollingCommand, breaksCommand,
 ];

@@ -1,0 +1,97 @@
+/**
+ * `mooring rolling`: does the relation of --y and --x hold through time? The Engle-Granger
+ * p-value, the hedge ratio and the spread's half-life over rolling windows of --window rows
+ * (or, with --expanding, windows that all start on the first row), every --step rows back
+ * from the last. JSON gives one array per statistic with each window's end row and date.
+ */
+import { csvRowLabel } from '../../csv/csv-series';
+import { MooringInputError } from '../../errors';
+import { rollingRelation, type RollingRelation } from '../../stability/rolling-relation';
+import type { Command } from '../command';
+import { wholeNumberValue } from '../option-values';
+import { bullet, formatPValue, formatStatistic, heading, labelled } from '../render/format';
+import { relationFromContext, relationJson, relationSampleTerminal, X_OPTION, Y_OPTION } from './relation-input';
+
+/** Windows shown in the terminal table (evenly spaced, the latest always among them). */
+const SHOWN_WINDOWS = 12;
+
+function windowTable(r: RollingRelation, endLabel: (k: number) => string): string[] {
+  const total = r.endRow.length;
+  const count = Math.min(SHOWN_WINDOWS, total);
+  const picks = count === 1 ? [0] : [...new Set(Array.from({ length: count }, (_, i) => Math.round(((total - 1) * i) / (count - 1))))];
+  const width = Math.max(10, ...picks.map((k) => endLabel(k).length));
+  const head = `  ${'window ends'.padEnd(width)}${'rows'.padStart(7)}${'p-value'.padStart(10)}${'beta'.padStart(11)}${'half-life'.padStart(11)}`;
+  return [
+    head,
+    ...picks.map((k) =>
+      `  ${endLabel(k).padEnd(width)}${String(r.nobs[k]).padStart(7)}${formatPValue(r.pValue[k]).padStart(10)}` +
+        `${formatStatistic(r.beta[k]).padStart(11)}${(r.halfLife[k] === null ? 'none' : formatStatistic(r.halfLife[k])).padStart(11)}`),
+  ];
+}
+
+/** The rolling command. */
+export const rollingCommand: Command = {
+  name: 'rolling',
+  summary: 'Engle-Granger p-value, hedge ratio and half-life of a pair through time',
+  description: [
+    'Runs the Engle-Granger test of --y on --x, and finds the hedge ratio and the half-life of the spread, in each window of --window rows ' +
+      '(rolling), or from the first row to each end with --expanding. Windows end on the last row and every --step rows before it.',
+    'A relation that passed over the whole sample may have passed only in part of it: a run of large p-values at the end means it no longer holds.',
+  ],
+  usage: 'mooring rolling <file.csv> --y NAME --x NAME --window N [--step S] [--expanding] [options]',
+  options: [
+    Y_OPTION,
+    X_OPTION,
+    { name: 'window', value: 'N', help: 'rows in each window (rolling), or in the first window (expanding); at least 20' },
+    { name: 'step', value: 'S', help: 'rows between window ends (default 1)' },
+    { name: 'expanding', help: 'windows that start on the first row and grow' },
+  ],
+  examples: ['mooring rolling prices.csv --y Diesel --x Gasoil --log --window 250 --step 5', 'mooring rolling prices.csv --y Diesel --x Gasoil --window 500 --expanding --json'],
+  run(context) {
+    const window = wholeNumberValue('window', context.args.values.get('window'), 'rows');
+    if (window === undefined) throw new MooringInputError('rolling needs --window N: the rows in each window (250 is about a year of trading days).');
+    const step = wholeNumberValue('step', context.args.values.get('step'), 'rows') ?? 1;
+    const expanding = context.args.switches.has('expanding');
+    const input = relationFromContext(context, true);
+    const names = { y: input.names.y, x: input.names.xs[0] };
+    const r = rollingRelation(input.y.series.values, input.xs[0].series.values, { window, step, expanding }, names);
+    const rows = input.y.series.rows;
+    const table = context.table;
+    const dates = table.dateIndex >= 0 ? table.columns[table.dateIndex] : null;
+    const dateOf = (i: number) => dates?.[rows[i]]?.trim() || null;
+    const label = csvRowLabel(table);
+    const out = [
+      heading(`${expanding ? 'Expanding' : 'Rolling'} relation of ${names.y} on ${names.x}`),
+      '',
+      labelled('Windows', `${r.endRow.length} ${expanding ? `from the first row, at least ${window} rows` : `of ${window} rows`}, ends every ${step} row${step === 1 ? '' : 's'} back from the last`),
+      '',
+      ...r.summary.map((s) => bullet(s)),
+      '',
+      ...windowTable(r, (k) => label(rows[r.endRow[k]])),
+      '',
+      relationSampleTerminal(input),
+    ];
+    return {
+      terminal: out.join('\n'),
+      json: {
+        ...relationJson(input),
+        window,
+        step,
+        expanding,
+        endRow: r.endRow,
+        endLine: r.endRow.map((i) => table.lines[rows[i]]),
+        endDate: r.endRow.map(dateOf),
+        startDate: r.startRow.map(dateOf),
+        nobs: r.nobs,
+        pValue: r.pValue,
+        statistic: r.statistic,
+        lags: r.lags,
+        beta: r.beta,
+        intercept: r.intercept,
+        rSquared: r.rSquared,
+        halfLife: r.halfLife,
+        summary: r.summary,
+      },
+    };
+  },
+};
