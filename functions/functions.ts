@@ -229,7 +229,7 @@ export function ecm(y: any[][], x: any[][], lags?: any, show?: any): any[][] {
  * @param cause The series that may lead: one column or one row.
  * @param effect The series that may follow, on the same rows as cause.
  * @param [lags] Lags of both series: a whole number of 1 or more, or aic or bic to choose. Default aic.
- * @param [method] changes (test period-to-period changes) or levels (values as they stand). Default changes.
+ * @param [method] auto (the test valid for the data), f (F test), ty (Toda-Yamamoto) or ecm (error correction). Default auto.
  * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
  * @returns The p-value, the statistic, a labelled table or a card.
  */

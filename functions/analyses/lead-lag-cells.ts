@@ -1,30 +1,42 @@
 /**
  * MOOR.GRANGER and MOOR.VARLAGS: the lead-lag test of a pair and the lag order of a VAR.
  *
- * GRANGER's method: the F test compares regressions that are valid only on stationary data
- * (Sims, Stock & Watson 1990, as the engine notes), and prices usually wander, so the default
- * tests the period-to-period changes; "levels" tests the values as they stand, for series that
- * are already stationary (returns, spreads).
+ * GRANGER runs the engine's leadLag, which picks a test that is valid for the data (method
+ * auto, the default): the F test on the values for stationary series, on the changes for
+ * wandering ones, Toda-Yamamoto when the orders differ or are uncertain. f, ty and ecm ask for
+ * the F test, Toda-Yamamoto or the error-correction form, as on the command line. The headline
+ * is the p-value of the cause -> effect direction; the table adds why that test was used, the
+ * reverse direction and the cautions.
  */
-import { grangerF } from '../../addin/causality/granger-f';
+import { leadLag, type LeadLagDirection } from '../../addin/causality/lead-lag';
+import type { ResultDetail } from '../../addin/result';
 import { chooseVarLags } from '../../addin/var/choose-var-lags';
-import { differences } from '../../addin/var/var-design';
 import { readBlock, readPair } from '../cells/range-input';
 import { countOrWord, optionWord, wholeNumber } from '../options/option-values';
-import { GRANGER_METHODS, VAR_CRITERIA, VAR_LAG_RULES } from '../options/option-words';
+import { LEAD_LAG_METHODS, VAR_CRITERIA, VAR_LAG_RULES } from '../options/option-words';
 import { showAnswer, testAnswer } from '../render/show-answer';
+
+function directionDetails(d: LeadLagDirection, tag: string, what: string): ResultDetail[] {
+  const out: ResultDetail[] = [{ key: `${tag}PValue`, label: `p-value, ${what}`, value: d.test.pValue }];
+  if (d.longRun !== null) out.push({ key: `${tag}LongRunPValue`, label: `p-value of the long-run part, ${what}`, value: d.longRun.pValue });
+  out.push({ key: `${tag}Leads`, label: `Lead found at 5%, ${what}`, value: d.leads });
+  return out;
+}
 
 export function grangerCell(cause: unknown, effect: unknown, lags: unknown, method: unknown, show: unknown) {
   const lagChoice = countOrWord('lags', lags, VAR_LAG_RULES, 'aic', 'lags', 1);
-  const form = optionWord('method', method, GRANGER_METHODS, 'changes');
+  const which = optionWord('method', method, LEAD_LAG_METHODS, 'auto');
   const pair = readPair(effect, cause, { y: 'effect', x: 'cause' }, 'the lead-lag test');
-  const x = pair.x.values;
-  const y = pair.y.values;
-  const names = { cause: 'cause', effect: 'effect' };
-  const result = form === 'changes'
-    ? grangerF(differences(x), differences(y), { lags: lagChoice, form: 'changes' }, names)
-    : grangerF(x, y, { lags: lagChoice, form: 'values' }, names);
-  return showAnswer(testAnswer(result), show);
+  const result = leadLag(pair.x.values, pair.y.values, { lags: lagChoice, method: which }, ['cause', 'effect']);
+  const main = result.aLeadsB;
+  const details: ResultDetail[] = [
+    { key: 'testUsed', label: 'Why this test', value: result.why },
+    { key: 'orders', label: 'Orders of integration (cause, effect)', value: `${result.orders.a}, ${result.orders.b} (${result.orders.source})` },
+    ...directionDetails(main, 'forward', 'cause leads effect'),
+    ...directionDetails(result.bLeadsA, 'reverse', 'effect leads cause'),
+    ...result.cautions.slice(1).map((c, i) => ({ key: `leadCaution${i + 1}`, label: 'Caution on this test', value: c })),
+  ];
+  return showAnswer(testAnswer(main.test, { verdict: result.verdict, details }), show);
 }
 
 /** The VAR lag order a criterion chooses for the block. */

@@ -29,9 +29,8 @@ export type Show = (typeof SHOW_WORDS)[number];
 export const HEDGE_WORDS = ['ols', 'reverse-ols', 'tls', 'dols'] as const;
 export type HedgeWord = (typeof HEDGE_WORDS)[number];
 
-/** How the lead-lag test treats the data: Granger F on the values as they stand, or on their changes. */
-export const GRANGER_METHODS = ['changes', 'levels'] as const;
-export type GrangerMethod = (typeof GRANGER_METHODS)[number];
+/** Which lead-lag test: auto (the one valid for the data), f, ty (Toda-Yamamoto) or ecm (error correction). */
+export const LEAD_LAG_METHODS = ['auto', 'f', 'ty', 'ecm'] as const;
 
 /** Information criteria for the VAR lag order. */
 export const VAR_CRITERIA = ['aic', 'bic', 'hq', 'fpe'] as const;
