@@ -97,20 +97,51 @@ export class ResidualAdfWorkspace {
     const size = P + 1;
     const a = P;
     const b = T - 2;
-    for (let j = 0; j <= P; j++) {
-      let s = 0;
-      for (let t = a; t <= b; t++) s += dx[t] * dx[t - j];
-      gram[j] = s;
+    // Row 0 (the response with lag j) and the level with lag j, four lags per pass over the
+    // rows: each dx[t - j] is loaded once for both products. Every sum still runs over t in
+    // order, so the numbers are those of one loop per lag.
+    let j = 0;
+    for (; j + 3 <= P; j += 4) {
+      let r0 = 0, r1 = 0, r2 = 0, r3 = 0, l0 = 0, l1 = 0, l2 = 0, l3 = 0;
+      for (let t = a; t <= b; t++) {
+        const d = dx[t];
+        const l = level[t];
+        const d0 = dx[t - j];
+        const d1 = dx[t - j - 1];
+        const d2 = dx[t - j - 2];
+        const d3 = dx[t - j - 3];
+        r0 += d * d0;
+        r1 += d * d1;
+        r2 += d * d2;
+        r3 += d * d3;
+        l0 += l * d0;
+        l1 += l * d1;
+        l2 += l * d2;
+        l3 += l * d3;
+      }
+      gram[j] = r0;
+      gram[j + 1] = r1;
+      gram[j + 2] = r2;
+      gram[j + 3] = r3;
+      levelCross[j] = l0;
+      levelCross[j + 1] = l1;
+      levelCross[j + 2] = l2;
+      levelCross[j + 3] = l3;
+    }
+    for (; j <= P; j++) {
+      let r = 0;
+      let l = 0;
+      for (let t = a; t <= b; t++) {
+        r += dx[t] * dx[t - j];
+        l += level[t] * dx[t - j];
+      }
+      gram[j] = r;
+      levelCross[j] = l;
     }
     for (let i = 1; i <= P; i++) {
       for (let j = i; j <= P; j++) {
         gram[i * size + j] = gram[(i - 1) * size + (j - 1)] + dx[a - i] * dx[a - j] - dx[b + 1 - i] * dx[b + 1 - j];
       }
-    }
-    for (let j = 0; j <= P; j++) {
-      let s = 0;
-      for (let t = a; t <= b; t++) s += level[t] * dx[t - j];
-      levelCross[j] = s;
     }
   }
 

@@ -1,0 +1,128 @@
+/**
+ * Benchmarks of the pair screen and the rolling relation (speed is measured here, never in a
+ * test). Universes are seeded: clusters of three series sharing a random-walk trend plus
+ * independent walks, prices near 100.
+ *
+ * - 50 series x 2,500 rows, every directed pair (2,450) with the AIC lag search to the default
+ *   maximum (27 lags): target 2 s on all cores; also timed on one thread.
+ * - 100 series x 2,520 rows (9,900 directed pairs): target 5 s, peak resident memory under 300 MB
+ *   (the process's peak, threads included, read after the run: an upper bound for the screen).
+ * - Where Debian's python3-statsmodels is installed, tests/bench/reference_screen_timing.py times
+ *   its coint on a seeded sample of 100 of the same 2,450 pairs and extrapolates to all of them
+ *   (the full run would take minutes); the ratio ours / theirs has the goal 0.01.
+ * - Rolling relation, 2,500 rows, windows of 250 every row (2,251 residual ADF searches).
+ */
+import { execFileSync } from 'node:child_process';
+import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { availableParallelism, tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { SeededRandom, autoregressive1, randomWalk } from '../random';
+import { screenPairsInThreads, type ThreadReport } from '../screen/parallel-node';
+import { screenPairs, directedSeries } from '../screen/screen-pairs';
+import { rollingRelation } from '../stability/rolling-relation';
+import { timeIt, type Timing } from './timing';
+
+/** A timing with what else the screen benchmarks measure. */
+export interface ScreenTiming extends Timing {
+  ms: number;
+  /** Process CPU time per run, all threads (ms). */
+  cpuMs?: number;
+  threads?: ThreadReport;
+  peakRssMb?: number;
+  targetPeakRssMb?: number;
+  heapUsedMb?: number;
+  reference?: Record<string, unknown>;
+}
+
+/** Seeded universe: `clusters` triples sharing a trend, then independent walks, to n series of T rows. */
+export function benchUniverse(n: number, T: number, clusters: number, seed: number): { name: string; values: Float64Array }[] {
+  const rng = new SeededRandom(seed);
+  const out: { name: string; values: Float64Array }[] = [];
+  for (let c = 0; c < clusters; c++) {
+    const trend = randomWalk(rng, T, { start: 100, sigma: 0.8 });
+    for (let m = 0; m < 3; m++) {
+      const u = autoregressive1(rng, T, 0.8, 0.3);
+      const scale = 0.6 + 0.8 * rng.uniform();
+      out.push({ name: `C${c}_${m}`, values: trend.map((v, t) => 5 + scale * v + u[t]) });
+    }
+  }
+  while (out.length < n) out.push({ name: `W${out.length}`, values: randomWalk(rng, T, { start: 100, sigma: 0.8 }) });
+  return out;
+}
+
+function cpuPerRun(task: () => unknown, runs: number): number {
+  const start = process.cpuUsage();
+  for (let i = 0; i < runs; i++) task();
+  const used = process.cpuUsage(start);
+  return Math.round((used.user + used.system) / runs / 1000);
+}
+
+/** statsmodels coint on a seeded sample of directed pairs, extrapolated to all; a reason string when it cannot run. */
+function referenceScreen(series: { values: Float64Array }[], sample: [number, number][], total: number): Record<string, unknown> | string {
+  const python = '/usr/bin/python3';
+  const script = join(process.cwd(), 'tests', 'bench', 'reference_screen_timing.py');
+  if (!existsSync(python) || !existsSync(script)) return 'python3 or tests/bench/reference_screen_timing.py is missing';
+  const dir = mkdtempSync(join(tmpdir(), 'mooring-screen-bench-'));
+  try {
+    const file = join(dir, 'spec.json');
+    writeFileSync(file, JSON.stringify({ series: series.map((s) => Array.from(s.values)), pairs: sample, totalPairs: total }));
+    const out = execFileSync(python, [script, file], { encoding: 'utf8', stdio: ['ignore', 'pipe', 'ignore'], maxBuffer: 1 << 26 });
+    return JSON.parse(out) as Record<string, unknown>;
+  } catch {
+    return 'python3-statsmodels is not installed (apt-get install -y python3-statsmodels to compare)';
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+/** The screen and rolling benchmarks (see the file comment). */
+export function benchScreen(): ScreenTiming[] {
+  const cores = Math.min(availableParallelism(), 16);
+  const fifty = benchUniverse(50, 2500, 5, 2450);
+  const hundred = benchUniverse(100, 2520, 10, 9900);
+  const out: ScreenTiming[] = [];
+
+  let report: ThreadReport | undefined;
+  const threaded = () => (report = screenPairsInThreads(fifty, {}, { threads: cores }).report);
+  const t50 = timeIt(`Pair screen, 50 series x 2,500 rows (2,450 directed pairs, AIC to 27 lags), ${cores} threads`, threaded, { runs: 5, warmup: 1, targetMs: 2000 });
+  out.push({ ...t50, ms: t50.medianMs, cpuMs: cpuPerRun(threaded, 2), threads: report });
+  const single = () => screenPairs(fifty);
+  const t50one = timeIt('Pair screen, 50 series x 2,500 rows, one thread', single, { runs: 3, warmup: 1 });
+  out.push({ ...t50one, ms: t50one.medianMs, cpuMs: cpuPerRun(single, 1) });
+
+  const big = () => (report = screenPairsInThreads(hundred, {}, { threads: cores }).report);
+  const t100 = timeIt(`Pair screen, 100 series x 2,520 rows (9,900 directed pairs), ${cores} threads`, big, { runs: 3, warmup: 1, targetMs: 5000 });
+  const peakRssMb = Math.round(process.resourceUsage().maxRSS / 1024);
+  out.push({
+    ...t100, ms: t100.medianMs, cpuMs: cpuPerRun(big, 1), threads: report,
+    peakRssMb, targetPeakRssMb: 300, heapUsedMb: Math.round(process.memoryUsage().heapUsed / 2 ** 20),
+    withinTarget: t100.withinTarget === true && peakRssMb < 300,
+  });
+
+  const [y, x] = [fifty[0].values, fifty[1].values];
+  const roll = timeIt('Rolling relation, 2,500 rows, window 250, every row (2,251 windows)', () => rollingRelation(y, x, { window: 250 }), { runs: 5, warmup: 1 });
+  out.push({ ...roll, ms: roll.medianMs });
+
+  // The reference library on a seeded sample of the same 2,450 directed pairs.
+  const rng = new SeededRandom(100);
+  const chosen = new Set<number>();
+  while (chosen.size < 100) chosen.add(Math.floor(rng.uniform() * 2450));
+  const sample = [...chosen].sort((a, b) => a - b).map((d) => directedSeries(d, 50));
+  const reference = referenceScreen(fifty, sample, 2450);
+  if (typeof reference === 'string') {
+    out.push({ name: 'statsmodels coint on the 2,450 pairs (skipped)', medianMs: 0, minMs: 0, runs: 0, ms: 0, reference: { skipped: reference } });
+  } else {
+    const theirs = reference.extrapolatedMs as number;
+    const ours = screenPairs(fifty);
+    const oursP = new Map(ours.pairs.map((p) => [`${p.y}|${p.x}`, p.pValue] as const));
+    const theirP = reference.pValues as number[];
+    const worst = Math.max(...sample.map(([yi, xi], k) => Math.abs((oursP.get(`${fifty[yi].name}|${fifty[xi].name}`) as number) - theirP[k])));
+    out.push({
+      name: `statsmodels coint, 100 sampled pairs timed, extrapolated to 2,450 (ratio = ours on ${cores} threads / theirs)`,
+      medianMs: Math.round(theirs), minMs: Math.round(theirs), runs: 1, ms: Math.round(theirs),
+      reference: { ...reference, pValues: undefined, oursMs: t50.medianMs, ratio: Math.round((t50.medianMs / theirs) * 1e5) / 1e5, goal: 0.01, largestPValueDifference: worst },
+      withinTarget: t50.medianMs / theirs <= 0.01,
+    });
+  }
+  return out;
+}
