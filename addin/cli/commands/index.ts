@@ -13,6 +13,7 @@ import { kpssCommand } from './kpss';
 import { orderCommand } from './order';
 import { poCommand } from './po';
 import { ppCommand } from './pp';
+import { reportCommand } from './report';
 import { rollingCommand } from './rolling';
 import { screenCommand } from './screen';
 import { spreadCommand } from './spread';
@@ -22,6 +23,7 @@ import { varlagsCommand } from './varlags';
 export const MOORING_COMMANDS: readonly Command[] = [
   adfCommand, kpssCommand, ppCommand, orderCommand,
   egCommand, poCommand, hedgeCommand, ecmCommand, spreadCommand,
+  reportCommand,
   varlagsCommand, grangerCommand,
   screenCommand, rollingCommand, breaksCommand,
 ];
