@@ -27,6 +27,8 @@ export interface ThreadOptions {
   patienceMs?: number;
   /** Whether the main thread takes chunks too while the workers run (default true; false leaves them all to the workers). */
   mainThreadJoins?: boolean;
+  /** Work, in pairs times rows, that earns each thread beyond the first (default WORK_PER_THREAD). */
+  workPerThread?: number;
 }
 
 /** What the threads did. */
@@ -40,8 +42,12 @@ export interface ThreadReport {
   note?: string;
 }
 
-/** Fewest unordered pairs worth a worker: below this, starting a thread costs more than it saves. */
-export const PAIRS_PER_WORKER = 64;
+/**
+ * Pairs times rows that earn each thread beyond the first: 2,000,000, about 800 pairs of
+ * 2,500 rows or a tenth of a second of one thread's work, well above what starting a worker
+ * and warming its compiler cost. Below it the main thread finishes sooner alone.
+ */
+export const WORK_PER_THREAD = 2_000_000;
 
 /** Collects the error messages waiting on the workers' ports; true when there was one. */
 function readErrors(ports: readonly MessagePort[], errors: string[]): boolean {
@@ -67,7 +73,9 @@ export function screenPairsInThreads(series: readonly NamedSeries[], options: Sc
     throw new MooringInputError(`The number of threads must be a whole number from 1 to 64; got ${String(requested)}.`);
   }
   const total = unorderedPairCount(universe.names.length);
-  const threads = Math.max(1, Math.min(requested, Math.floor(total / PAIRS_PER_WORKER) + 1));
+  const work = total * universe.rows;
+  const perThread = threading.workPerThread ?? WORK_PER_THREAD;
+  const threads = Math.max(1, Math.min(requested, total, Math.floor(work / Math.max(perThread, 1)) + 1));
   const job = screenJob(universe, settings, threads);
   const errors: string[] = [];
   const workers: Worker[] = [];
@@ -110,7 +118,7 @@ export function screenPairsInThreads(series: readonly NamedSeries[], options: Sc
   for (const worker of workers) void worker.terminate();
   const result = finishScreen(universe, settings, new Float64Array(job.results));
   const report: ThreadReport = { threads, workersStarted: workers.length, chunksOnMainThread, chunks: count };
-  if (threads < requested) report.note = `${requested} threads were asked for; ${total} pairs keep ${threads} busy.`;
+  if (threads < requested) report.note = `${requested} threads were asked for; ${total} pairs of ${universe.rows} rows keep ${threads} busy.`;
   if (errors.length > 0) report.note = `Some work moved to the main thread: ${errors.join('; ')}.`;
   else if (workers.length > 0 && chunksOnMainThread === count) report.note = 'The main thread had run every chunk before the worker threads were ready.';
   return { result, report };

@@ -23,7 +23,7 @@ const single = screenPairs(series, { johansen: true });
 
 describe('screen on worker threads (built worker dist/cli/screen-worker.js)', () => {
   it('with the work left to one worker: the same result as on one thread, and the worker ran every chunk', () => {
-    const { result, report } = screenPairsInThreads(series, { johansen: true }, { threads: 2, workerFile: WORKER, mainThreadJoins: false });
+    const { result, report } = screenPairsInThreads(series, { johansen: true }, { threads: 2, workerFile: WORKER, mainThreadJoins: false, workPerThread: 1 });
     expect(report.workersStarted).toBe(1);
     expect(report.chunksOnMainThread).toBe(0);
     expect(report.note).toBeUndefined();
@@ -31,24 +31,26 @@ describe('screen on worker threads (built worker dist/cli/screen-worker.js)', ()
   });
 
   it('with 3 threads sharing the queue, the main one included: the same result', () => {
-    const { result, report } = screenPairsInThreads(series, { johansen: true }, { threads: 3, workerFile: WORKER });
+    const { result, report } = screenPairsInThreads(series, { johansen: true }, { threads: 3, workerFile: WORKER, workPerThread: 1 });
     expect(report.threads).toBe(3);
     expect(report.workersStarted).toBe(2);
     expect(result).toEqual(single);
   });
 
   it('when a worker cannot start, the main thread runs its chunks: still the same result, with a note', () => {
-    const { result, report } = screenPairsInThreads(series, { johansen: true }, { threads: 2, workerFile: join(DIST_CLI, 'no-such-worker.js') });
+    const { result, report } = screenPairsInThreads(series, { johansen: true }, { threads: 2, workerFile: join(DIST_CLI, 'no-such-worker.js'), workPerThread: 1 });
     expect(result).toEqual(single);
     expect(report.chunksOnMainThread).toBe(report.chunks);
     expect(report.note).toBeDefined();
   });
 
-  it('uses no more threads than the pairs keep busy, and says so', () => {
-    const { result, report } = screenPairsInThreads(series.slice(0, 4), {}, { threads: 8, workerFile: WORKER });
-    expect(report.threads).toBe(1);
-    expect(report.note).toBe('8 threads were asked for; 6 pairs keep 1 busy.');
-    expect(result).toEqual(screenPairs(series.slice(0, 4)));
+  it('uses no more threads than the work keeps busy (pairs x rows per thread), and says so', () => {
+    const small = screenPairsInThreads(series.slice(0, 4), {}, { threads: 8, workerFile: WORKER });
+    expect(small.report.threads).toBe(1);
+    expect(small.report.note).toBe('8 threads were asked for; 6 pairs of 300 rows keep 1 busy.');
+    expect(small.result).toEqual(screenPairs(series.slice(0, 4)));
+    // 153 pairs x 300 rows = 45,900: at 20,000 per thread, 3 threads.
+    expect(screenPairsInThreads(series, {}, { threads: 8, workerFile: WORKER, workPerThread: 20_000 }).report.threads).toBe(3);
   });
 
   it('refuses a thread count that is not a whole number from 1 to 64', () => {
@@ -58,15 +60,15 @@ describe('screen on worker threads (built worker dist/cli/screen-worker.js)', ()
 });
 
 describe('mooring screen in the built bundle: --threads 2 answers as --threads 1', () => {
-  it('prints the same JSON apart from the thread report', () => {
+  it('prints the same JSON apart from the thread report (46 series x 2,000 rows: 1,035 pairs, enough work for 2 threads)', () => {
+    const { series: wide } = generatedUniverse(43, { clusters: 4, perCluster: 3, walks: 34, T: 2000 });
     const dir = mkdtempSync(join(tmpdir(), 'mooring-screen-'));
     const file = join(dir, 'prices.csv');
-    const rows = series[0].values.length;
-    const lines = [series.map((s) => s.name).join(',')];
-    for (let t = 0; t < rows; t++) lines.push(series.map((s) => s.values[t].toFixed(6)).join(','));
+    const lines = [wide.map((s) => s.name).join(',')];
+    for (let t = 0; t < 2000; t++) lines.push(wide.map((s) => s.values[t].toFixed(6)).join(','));
     writeFileSync(file, `${lines.join('\n')}\n`);
     const run = (threads: number) => {
-      const out = spawnSync(process.execPath, [join(DIST_CLI, 'mooring.js'), 'screen', file, '--json', '--threads', String(threads)], { encoding: 'utf8' });
+      const out = spawnSync(process.execPath, [join(DIST_CLI, 'mooring.js'), 'screen', file, '--json', '--threads', String(threads)], { encoding: 'utf8', maxBuffer: 1 << 28 });
       expect(out.status, out.stderr).toBe(0);
       return JSON.parse(out.stdout) as Record<string, unknown> & { threads: { threads: number } };
     };
@@ -77,6 +79,6 @@ describe('mooring screen in the built bundle: --threads 2 answers as --threads 1
     const { threads: _a, ...restOne } = one;
     const { threads: _b, ...restTwo } = two;
     expect(restTwo).toEqual(restOne);
-    expect((restOne.pairs as unknown[]).length).toBe(18 * 17);
+    expect((restOne.pairs as unknown[]).length).toBe(46 * 45);
   });
 });
