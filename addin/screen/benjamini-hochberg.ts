@@ -9,6 +9,7 @@
  */
 import { MooringInputError } from '../errors';
 
+/** Benjamini-Hochberg adjusted p-values, in the input's order (see the file comment); refuses a value outside [0, 1]. */
 export function benjaminiHochberg(pValues: ArrayLike<number>): Float64Array {
   const m = pValues.length;
   for (let i = 0; i < m; i++) {

@@ -15,8 +15,11 @@ import { chunkRanges, screenChunkInto } from './screen-chunk';
 import type { ScreenSettings } from './screen-options';
 import { unorderedPairCount, type ScreenUniverse } from './screen-universe';
 
+/** Chunk state: no thread has taken it. */
 export const CHUNK_WAITING = 0;
+/** Chunk state: a thread is running it. */
 export const CHUNK_TAKEN = 1;
+/** Chunk state: its records are written. */
 export const CHUNK_DONE = 2;
 
 /** Everything a thread needs, as structured-clonable data. */

@@ -19,6 +19,7 @@ export const PAIR_STATUS = {
   singular: 4,
 } as const;
 
+/** One of the PAIR_STATUS codes. */
 export type PairStatus = (typeof PAIR_STATUS)[keyof typeof PAIR_STATUS];
 
 /** Offsets of the fields in a record. */

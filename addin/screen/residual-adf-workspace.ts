@@ -28,6 +28,7 @@ export interface ResidualAdfAnswer {
   nobs: number;
 }
 
+/** Buffers for the residual ADF, grown to the largest residual and lag count seen; ask it test() once per residual. */
 export class ResidualAdfWorkspace {
   private level = new Float64Array(0);
   private dx = new Float64Array(0);

@@ -16,6 +16,7 @@ import { decodePairs, rankByEvidence, withinHalfLifeRange, type ScreenPair } fro
 import { resolveScreenOptions, type ScreenOptions, type ScreenSettings } from './screen-options';
 import { screenUniverse, unorderedPairAt, unorderedPairCount, type NamedSeries, type ScreenUniverse } from './screen-universe';
 
+/** The types a caller of screenPairs needs, from one place. */
 export type { ScreenPair } from './screen-ranking';
 export type { ScreenOptions } from './screen-options';
 export type { NamedSeries } from './screen-universe';

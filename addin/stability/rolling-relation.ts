@@ -26,6 +26,7 @@ import { SlidingComoments } from './sliding-comoments';
 import { windowPlan } from './window-plan';
 import { rollingSummary } from './rolling-summary';
 
+/** The windows to look at. */
 export interface RollingOptions {
   /** Rows in each rolling window; for expanding windows, rows in the first. */
   window: number;

@@ -9,6 +9,7 @@
  * Working with deviations from the running means keeps the digits that raw sums of squares
  * lose on prices far from zero.
  */
+/** Means and co-moments of k variables over rows added and removed one at a time (see the file comment). */
 export class RunningComoments {
   private n = 0;
   private readonly m: Float64Array;

@@ -7,6 +7,7 @@
  */
 import { RunningComoments } from './running-comoments';
 
+/** Co-moments of the rows from .. to, moved forward by moveTo (see the file comment). */
 export class SlidingComoments {
   readonly moments: RunningComoments;
   private from = 0;
