@@ -42,6 +42,12 @@ export interface CellFormat {
   /** Heading level, for section titles (1 = block title). */
   heading?: 1 | 2;
   wrap?: boolean;
+  /**
+   * Fills that follow the cell's text as it changes (conditional formatting): the first rule
+   * whose text the cell's shown text begins with gives the fill. Optional; added after the
+   * first version of the port, so adapters that ignore it still write a correct block.
+   */
+  textFills?: { startsWith: string; fill: string }[];
 }
 
 /** One cell of a block to write: a value or a formula, with an optional format. */
@@ -61,6 +67,22 @@ export interface BlockToWrite {
   name: string;
   /** Column widths in points, left to right (optional). */
   columnWidths?: number[];
+  /**
+   * A1 ranges on the block's sheet, outside `cells`, that the block's formulas spill into
+   * (a column of the spread below its formula). occupiedCells checks them too, and writeBlock
+   * clears them, because a spill blocked by a filled cell shows #SPILL!. Optional.
+   */
+  reserved?: string[];
+  /** Text kept with the workbook-level name (its comment), returned by findBlock: where the block came from. Optional. */
+  note?: string;
+}
+
+/** A block found by its workbook-level name. */
+export interface FoundBlock {
+  sheet: string;
+  address: string;
+  /** The note written with the block, or null when it has none. */
+  note?: string | null;
 }
 
 /** A native line chart over ranges of a written block. */
@@ -107,6 +129,11 @@ export interface WorkbookPort {
   regionAroundSelection(): Promise<DataRegion | null>;
   /** Reads a region by sheet and A1 address (header row first). */
   readRegion(sheet: string, address: string): Promise<DataRegion>;
+  /**
+   * Reads an Excel table by name, at its current size (header row first). Optional: added
+   * after the first version of the port; callers fall back to readRegion when it is absent.
+   */
+  readTable?(name: string): Promise<DataRegion>;
   /** Turns a plain range into an Excel table so pasted rows are included; returns the table's name. */
   makeTable(sheet: string, address: string, suggestedName: string): Promise<string>;
   /** Lists the non-empty cells a block would overwrite (empty list: safe to write). */
@@ -116,7 +143,7 @@ export interface WorkbookPort {
   /** Adds a native line chart. */
   addChart(chart: ChartToAdd): Promise<void>;
   /** Finds a block previously written under this workbook-level name (its sheet and address), or null. */
-  findBlock(name: string): Promise<{ sheet: string; address: string } | null>;
+  findBlock(name: string): Promise<FoundBlock | null>;
   /** Clears a block (and its chart, by the same name) and removes its name. */
   removeBlock(name: string): Promise<void>;
   /** Adds a sheet with a unique name based on the suggestion; returns the name used. */

@@ -1,0 +1,155 @@
+/**
+ * The functions the in-memory workbook can evaluate: every MOOR.* custom function, called
+ * through the very implementations functions/functions.ts registers with Excel (so a test
+ * of the block exercises the same code a user's cell runs), and the handful of Excel
+ * built-ins the results block uses (IF, ISNUMBER, NA, ABS, AVERAGE, STDEV.S, COUNT, ROWS,
+ * ROW, INDEX, HSTACK). Any other name is #NAME?, as in Excel for an unknown function.
+ */
+import * as registered from '../../functions/functions';
+import {
+  FormulaError,
+  arrayOf,
+  elementwise,
+  firstError,
+  gridOf,
+  isMulti,
+  numbersIn,
+  scalarOf,
+  toBoolean,
+  toNumber,
+  type Evaluated,
+  type Grid,
+  type Reference,
+  type Scalar,
+} from './formula-values';
+
+/** What a function sees: its evaluated arguments (null for one left out) and a way to read a reference. */
+export interface CallContext {
+  args: (Evaluated | undefined)[];
+  read: (ref: Reference) => Grid;
+}
+
+type Builtin = (call: CallContext) => Evaluated;
+
+/** A cell as a custom function receives it: blanks null, errors as objects carrying their code. */
+function forCustomFunction(v: Evaluated | undefined, read: (ref: Reference) => Grid): unknown {
+  if (v === undefined) return null;
+  if (!isMulti(v)) return v;
+  return gridOf(v, read).map((row) => row.map((x) => (x === '' ? null : x)));
+}
+
+/** A custom function's thrown error as the cell's error value. */
+function errorValue(e: unknown): FormulaError {
+  const o = e as { code?: unknown; message?: unknown };
+  const code = o && (o.code === '#N/A' || o.code === '#VALUE!') ? o.code : '#VALUE!';
+  return new FormulaError(code, typeof o?.message === 'string' ? o.message : String(e));
+}
+
+/** A custom function's answer: a matrix becomes an array (it spills), anything else a scalar. */
+function fromCustomFunction(out: unknown): Evaluated {
+  if (Array.isArray(out)) return arrayOf(out.map((row: unknown[]) => row.map((x) => x as Scalar)));
+  return out as Scalar;
+}
+
+/** MOOR.<ID> for every function exported by functions/functions.ts (ids are the upper-cased export names). */
+const MOOR_FUNCTIONS: Record<string, (...args: unknown[]) => unknown> = Object.fromEntries(
+  Object.entries(registered)
+    .filter(([, f]) => typeof f === 'function')
+    .map(([name, f]) => [`MOOR.${name.toUpperCase()}`, f as (...args: unknown[]) => unknown]),
+);
+
+function callMoor(name: string, call: CallContext): Evaluated {
+  const f = MOOR_FUNCTIONS[name];
+  try {
+    return fromCustomFunction(f(...call.args.map((a) => forCustomFunction(a, call.read))));
+  } catch (e) {
+    return errorValue(e);
+  }
+}
+
+function arg(call: CallContext, i: number): Evaluated {
+  return call.args[i] ?? null;
+}
+
+function aggregate(call: CallContext, f: (xs: number[]) => Scalar): Scalar {
+  const all: number[] = [];
+  for (const a of call.args) {
+    if (a === undefined) continue;
+    const xs = numbersIn(gridOf(a, call.read));
+    if (xs instanceof FormulaError) return xs;
+    all.push(...xs);
+  }
+  return f(all);
+}
+
+function mean(xs: number[]): number {
+  return xs.reduce((s, x) => s + x, 0) / xs.length;
+}
+
+const BUILTINS: Record<string, Builtin> = {
+  IF: (call) =>
+    elementwise([arg(call, 0), arg(call, 1), call.args[2] === undefined ? false : arg(call, 2)], call.read, ([c, a, b]) => {
+      const t = toBoolean(c);
+      return t instanceof FormulaError ? t : t ? a : b;
+    }),
+  ISNUMBER: (call) => elementwise([arg(call, 0)], call.read, ([x]) => typeof x === 'number'),
+  NA: () => new FormulaError('#N/A'),
+  ABS: (call) =>
+    elementwise([arg(call, 0)], call.read, ([x]) => {
+      const n = toNumber(x);
+      return n instanceof FormulaError ? n : Math.abs(n);
+    }),
+  AVERAGE: (call) => aggregate(call, (xs) => (xs.length === 0 ? new FormulaError('#DIV/0!') : mean(xs))),
+  'STDEV.S': (call) =>
+    aggregate(call, (xs) => {
+      if (xs.length < 2) return new FormulaError('#DIV/0!');
+      const m = mean(xs);
+      return Math.sqrt(xs.reduce((s, x) => s + (x - m) ** 2, 0) / (xs.length - 1));
+    }),
+  COUNT: (call) => aggregate(call, (xs) => xs.length),
+  ROWS: (call) => {
+    const a = arg(call, 0);
+    if (a instanceof FormulaError) return a;
+    if (isMulti(a) && a.kind === 'ref') return a.range.bottom - a.range.top + 1;
+    return gridOf(a, call.read).length;
+  },
+  ROW: (call) => {
+    const a = arg(call, 0);
+    if (!isMulti(a) || a.kind !== 'ref') return new FormulaError('#VALUE!', 'ROW needs a reference.');
+    const rows: Grid = [];
+    for (let r = a.range.top; r <= a.range.bottom; r++) rows.push([r + 1]);
+    return rows.length === 1 ? rows[0][0] : arrayOf(rows);
+  },
+  INDEX: (call) => {
+    const grid = gridOf(arg(call, 0), call.read);
+    const r = toNumber(scalarOf(arg(call, 1), call.read));
+    const c = call.args[2] === undefined ? 1 : toNumber(scalarOf(arg(call, 2), call.read));
+    const bad = firstError([r, c]);
+    if (bad) return bad;
+    const row = grid[(r as number) - 1];
+    if (!Number.isInteger(r) || !Number.isInteger(c) || row === undefined || (c as number) < 1 || (c as number) > row.length) {
+      return new FormulaError('#REF!', 'INDEX points outside the array.');
+    }
+    return row[(c as number) - 1];
+  },
+  HSTACK: (call) => {
+    const grids = call.args.map((a) => gridOf(a ?? null, call.read));
+    const rows = Math.max(...grids.map((g) => g.length));
+    const out: Grid = [];
+    for (let r = 0; r < rows; r++) out.push(grids.flatMap((g) => g[r] ?? g[0].map(() => new FormulaError('#N/A'))));
+    return arrayOf(out);
+  },
+};
+
+/** Calls a function by its upper-case name. */
+export function callFunction(name: string, call: CallContext): Evaluated {
+  if (name in MOOR_FUNCTIONS) return callMoor(name, call);
+  const builtin = BUILTINS[name];
+  if (!builtin) return new FormulaError('#NAME?', `${name} is not a function the in-memory workbook knows.`);
+  return builtin(call);
+}
+
+/** The names the in-memory workbook evaluates (for messages and tests). */
+export function knownFunctions(): string[] {
+  return [...Object.keys(MOOR_FUNCTIONS), ...Object.keys(BUILTINS)].sort();
+}
