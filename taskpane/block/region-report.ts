@@ -1,0 +1,33 @@
+/**
+ * The diagnostic report of columns of a data region, through the same cleaner and engine
+ * call as every other surface (addin/series/clean-block.ts, addin/report): the region's
+ * columns by header, each row labelled by its sheet row, dates from the region's date
+ * column. Bad cells are refused with the cleaner's message naming the sheet row.
+ */
+import { MooringInputError } from '../../addin/errors';
+import { diagnose, type DiagnosticOptions } from '../../addin/report/pairwise-diagnostic';
+import { prepareDiagnosticInput } from '../../addin/report/prepare-input';
+import type { DiagnosticReport } from '../../addin/report/report-types';
+import { cleanBlock } from '../../addin/series/clean-block';
+import type { DataRegion } from '../workbook/port';
+
+/** The report of the named columns of the region (two or more). */
+export function regionReport(region: DataRegion, names: readonly string[], options: DiagnosticOptions & { skipGaps?: boolean } = {}): DiagnosticReport {
+  const columns = names.map((name) => {
+    const j = region.headers.indexOf(name);
+    if (j < 0) throw new MooringInputError(`There is no column headed '${name}' in ${region.sheet}!${region.address}: pick one of ${region.headers.join(', ')}.`);
+    if (j === region.dateColumn) throw new MooringInputError(`'${name}' is the date column of ${region.sheet}!${region.address}: pick columns of prices.`);
+    return region.rows.map((row) => row[j]);
+  });
+  const sheetRow = (i: number) => `${region.sheet} row ${region.firstDataRow + i}`;
+  const series = cleanBlock(columns, names, { rowLabel: sheetRow, skipGaps: options.skipGaps });
+  const d = region.dateColumn;
+  const dateOf = (i: number): string | null => {
+    if (d === null) return null;
+    const v = region.rows[i]?.[d];
+    return typeof v === 'string' && v.trim() !== '' ? v.trim() : null;
+  };
+  const input = prepareDiagnosticInput(series, { dateOf, source: region.tableName ?? `${region.sheet}!${region.address}` });
+  const { skipGaps: _skip, ...engineOptions } = options;
+  return diagnose(input, engineOptions);
+}

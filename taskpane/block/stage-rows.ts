@@ -1,0 +1,147 @@
+/**
+ * The stages of the results block, one section each, in the order the evidence builds:
+ * each series on its own (order of integration), whether the pair is tied (Engle-Granger
+ * both ways, Phillips-Ouliaris, Johansen), the long-run line and how the gap closes (hedge
+ * ratios, speed of adjustment, half-life, latest z-score), and which series moves first
+ * (lead-lag both ways). Every number is a MOOR formula over the source columns, with the
+ * settings the report used, so it matches the report when written and follows the data after.
+ * The one exception is a lead-lag test that has no cell function (error-correction form,
+ * Toda-Yamamoto): its p-value is written as a fixed number, marked so, and refreshed with
+ * the block.
+ */
+import { normalQuantile } from '../../addin/distributions';
+import type { PairReport } from '../../addin/report/pair-types';
+import type { DiagnosticReport } from '../../addin/report/report-types';
+import type { BlockCell } from '../workbook/port';
+import { COL, type BlockGrid } from './block-grid';
+import { FILL, NUMBER_FORMAT, STYLE, periodsFormat } from './block-style';
+import { textLiteral, type SeriesReferences } from './series-reference';
+import { halfLifeReading, orderReading, pValueReading, pullReading, rankReading, speedReading, stretchReading } from './verdict-formulas';
+
+/** What every section needs. */
+export interface StageContext {
+  report: DiagnosticReport;
+  pair: PairReport;
+  refs: SeriesReferences;
+  /** The relation's dependent and regressor (the report's normalisation). */
+  y: string;
+  x: string;
+  /** Address of the cell whose z-scores spill (for the latest z-score). */
+  zSpill: string;
+}
+
+/** A number row: label, the number (formula or fixed value), its reading, and how it was made. */
+function numberRow(
+  g: BlockGrid,
+  label: string,
+  number: { formula: string } | { fixed: number | null },
+  format: string,
+  reading: ((cell: string) => string) | null,
+  how: string,
+): void {
+  const row = g.next;
+  const cell = g.address(row, COL.value);
+  const value: BlockCell = 'formula' in number
+    ? { formula: number.formula, format: { numberFormat: format } }
+    : { value: number.fixed, format: { numberFormat: format, fill: FILL.fixed } };
+  g.add({
+    [COL.label]: { value: label, format: STYLE.label },
+    [COL.value]: value,
+    [COL.reading]: reading ? { formula: reading(cell), format: STYLE.verdict } : {},
+    [COL.how]: { value: how, format: STYLE.note },
+  });
+}
+
+function section(g: BlockGrid, title: string): void {
+  g.blank();
+  g.add({ [COL.label]: { value: title, format: STYLE.section } });
+}
+
+/** Each series on its own: the order of integration. */
+export function seriesStage(g: BlockGrid, c: StageContext): void {
+  const { alpha, deterministic } = c.report.settings;
+  section(g, 'Each series on its own');
+  for (const name of [c.pair.a, c.pair.b]) {
+    numberRow(g, `Does ${name} wander? Order of integration`, { formula: `=MOOR.ORDER(${c.refs.column(name)},${alpha},${textLiteral(deterministic)})` },
+      NUMBER_FORMAT.count, orderReading, 'ADF down from the levels, checked by KPSS: 0 settles, 1 wanders, 2 wanders in its changes too');
+  }
+}
+
+/** Whether the pair is tied: residual tests both ways and Johansen. */
+export function tieStage(g: BlockGrid, c: StageContext): void {
+  const { alpha, deterministic, lagRule } = c.report.settings;
+  const { a, b } = c.pair;
+  section(g, 'Are they tied together in the long run?');
+  const eg = (y: string, x: string) => `=MOOR.EGTEST(${c.refs.column(y)},${c.refs.column(x)},${textLiteral(deterministic)},${textLiteral(lagRule)})`;
+  const tie = (cell: string) => pValueReading(cell, alpha, 'tied', 'no evidence of a tie');
+  numberRow(g, `Tied? Engle-Granger, ${a} on ${b} (p-value)`, { formula: eg(a, b) }, NUMBER_FORMAT.pValue, tie,
+    `the gap left by the least-squares line of ${a} on ${b} is tested for a pull back; lags by ${lagRule.toUpperCase()}`);
+  numberRow(g, `Tied? Engle-Granger, ${b} on ${a} (p-value)`, { formula: eg(b, a) }, NUMBER_FORMAT.pValue, tie,
+    'the same test with the roles swapped; the two can disagree in short samples');
+  numberRow(g, `Tied? Phillips-Ouliaris, ${c.y} on ${c.x} (p-value)`,
+    { formula: `=MOOR.POTEST(${c.refs.column(c.y)},${c.refs.column(c.x)},${textLiteral(deterministic)})` }, NUMBER_FORMAT.pValue, tie,
+    'the same question, correcting for autocorrelation with a long-run variance instead of lags');
+  const j = c.pair.cointegration.johansen;
+  if (j) {
+    const args = `${c.refs.pair(a, b)},${j.lags},${textLiteral(j.case)}`;
+    numberRow(g, 'Tied? Johansen trace test of no relation (p-value)', { formula: `=MOOR.JOHANSEN(${args})` }, NUMBER_FORMAT.pValue,
+      (cell) => pValueReading(cell, alpha, 'at least one long-run relation', 'no evidence of a relation'),
+      `both series in one model, ${j.lags} lagged change${j.lags === 1 ? '' : 's'}; ${j.caseReason}`);
+    numberRow(g, 'Long-run relations found by Johansen', { formula: `=MOOR.RANK(${args},${alpha})` }, NUMBER_FORMAT.count, rankReading,
+      'the trace test taken step by step at the level above');
+  }
+}
+
+/** The long-run line and the gap: hedge ratios, speed of adjustment, half-life, latest z-score. */
+export function lineStage(g: BlockGrid, c: StageContext): void {
+  const { alpha } = c.report.settings;
+  const period = c.report.data.period;
+  const y = c.refs.column(c.y);
+  const x = c.refs.column(c.x);
+  section(g, `The long-run line of ${c.y} on ${c.x}, and how its gap closes`);
+  numberRow(g, `Hedge ratio: units of ${c.x} per unit of ${c.y} (least squares)`, { formula: `=MOOR.HEDGE(${y},${x})` }, NUMBER_FORMAT.ratio, null,
+    `${c.y} = intercept + ratio x ${c.x}; the spread beside is what this line leaves over`);
+  numberRow(g, 'Hedge ratio (dynamic OLS)', { formula: `=MOOR.HEDGE(${y},${x},"dols")` }, NUMBER_FORMAT.ratio, null,
+    'with leads and lags of the changes, chosen by AIC: the estimate with sound standard errors for wandering prices');
+  numberRow(g, `Does ${c.y} move back? Speed of adjustment`, { formula: `=MOOR.ECM(${y},${x},"aic")` }, NUMBER_FORMAT.ratio,
+    (cell) => speedReading(cell, c.y), `error-correction model: the share of yesterday's gap ${c.y} closes per ${period}; lags by AIC`);
+  const critical = normalQuantile(1 - alpha / 2);
+  numberRow(g, 'Is that pull significant? t-value of the speed', { formula: `=MOOR.ECM(${y},${x},"aic","stat")` }, NUMBER_FORMAT.statistic,
+    (cell) => pullReading(cell, critical, alpha), `significant when at or below -${critical.toFixed(2)} (two-sided, normal approximation)`);
+  numberRow(g, 'Does the spread revert? Half-life', { formula: `=MOOR.HALFLIFE(${y},${x})` }, periodsFormat(period),
+    (cell) => halfLifeReading(cell, period), `${period}s for a gap in the spread to halve, from its AR(1) coefficient`);
+  numberRow(g, 'Is the spread stretched now? Latest z-score', { formula: `=INDEX(${c.zSpill}#,ROWS(${c.zSpill}#))` }, NUMBER_FORMAT.statistic,
+    stretchReading, 'standard deviations from its mean on the last row, over the whole sample');
+}
+
+/** Which series moves first: lead-lag in both directions by the test the report found valid. */
+export function leadStage(g: BlockGrid, c: StageContext): void {
+  const ll = c.pair.leadLag;
+  if (!ll) return;
+  const { alpha } = c.report.settings;
+  section(g, 'Which one moves first?');
+  const cellForm = ll.method === 'f-differences' ? 'changes' : ll.method === 'f-levels' ? 'levels' : null;
+  for (const d of [ll.aLeadsB, ll.bLeadsA]) {
+    const lags = d.test.lags ?? 1;
+    const number = cellForm
+      ? { formula: `=MOOR.GRANGER(${c.refs.column(d.cause)},${c.refs.column(d.effect)},${lags},${textLiteral(cellForm)})` }
+      : { fixed: d.test.pValue };
+    const how = cellForm
+      ? `F test on the ${cellForm === 'changes' ? 'changes' : 'values'} with ${lags} lag${lags === 1 ? '' : 's'}`
+      : `${d.test.test} with ${lags} lag${lags === 1 ? '' : 's'}: no cell function computes it, so this number is fixed as written; refresh the block to update it`;
+    numberRow(g, `Does ${d.cause} lead ${d.effect}? (p-value)`, number, NUMBER_FORMAT.pValue,
+      (cell) => pValueReading(cell, alpha, `${d.cause} leads`, 'no evidence of a lead'), how);
+  }
+  g.add({ [COL.label]: { value: 'Why this test', format: STYLE.label }, [COL.how]: { value: ll.why, format: STYLE.note } });
+}
+
+/** The warnings that apply (data, series and pair), then the standing cautions, last. */
+export function closingStage(g: BlockGrid, c: StageContext): void {
+  const warnings = [...c.report.warnings, ...c.pair.warnings.map((w) => w.text), ...c.pair.unavailable.map((u) => `${u.part}: ${u.reason}`)];
+  if (warnings.length > 0) {
+    section(g, 'Worth knowing about these data');
+    for (const w of warnings) g.add({ [COL.label]: { value: w, format: STYLE.note } });
+  }
+  section(g, 'Before you rely on any of this');
+  for (const caution of c.report.cautions) g.add({ [COL.label]: { value: caution, format: STYLE.caution } });
+}
