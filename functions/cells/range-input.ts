@@ -47,28 +47,45 @@ export interface RangeRelation {
  */
 export const TRAILING_ZERO_LIMIT = 10;
 
-/** The range as rows of cells: a lone value (a single cell passed as a scalar) becomes a 1 x 1 range. */
+/**
+ * The range as rows of cells: a lone value (a single cell passed as a scalar) becomes a 1 x 1
+ * range, a flat list one row. Excel's ranges are rectangular, so only the first row is looked
+ * at here: a whole column must cost one pass over its cells, not three.
+ */
 function gridOf(range: unknown, name: string): readonly (readonly unknown[])[] {
   if (!Array.isArray(range)) return [[range]];
   if (range.length === 0) throw new MooringInputError(`${name} is an empty range: select the cells with the prices.`);
-  for (let i = 0; i < range.length; i++) {
-    if (!Array.isArray(range[i])) return [range];
-  }
+  if (!Array.isArray(range[0])) return [range];
   return range as unknown[][];
 }
 
+/** Width of a rectangular range: the first row's (a hand-built ragged grid reads missing cells as blanks). */
 function widthOf(grid: readonly (readonly unknown[])[]): number {
-  let width = 0;
-  for (const row of grid) if (row.length > width) width = row.length;
-  return width;
+  const first = grid[0].length;
+  const last = grid[grid.length - 1]?.length ?? 0;
+  return Math.max(first, last);
 }
 
-/** Column j of the grid, cut after its last filled cell (scanning up from the bottom first). */
+/** The cell at row i, column j, or undefined where a hand-built grid has no such row or cell. */
+function cellAt(grid: readonly (readonly unknown[])[], i: number, j: number): unknown {
+  const row = grid[i];
+  return Array.isArray(row) ? row[j] : undefined;
+}
+
+/**
+ * Column j of the grid, cut after its last filled cell. The backward scan tests the two blank
+ * forms Excel passes (null and '') inline before the general check, since a whole column
+ * hands over about a million of them.
+ */
 function columnCells(grid: readonly (readonly unknown[])[], j: number): unknown[] {
   let end = grid.length;
-  while (end > 0 && isBlankCell(grid[end - 1][j])) end--;
+  while (end > 0) {
+    const c = cellAt(grid, end - 1, j);
+    if (c === null || c === '' || c === undefined || (typeof c === 'string' && isBlankCell(c))) end--;
+    else break;
+  }
   const out = new Array<unknown>(end);
-  for (let i = 0; i < end; i++) out[i] = grid[i][j];
+  for (let i = 0; i < end; i++) out[i] = cellAt(grid, i, j);
   return out;
 }
 
