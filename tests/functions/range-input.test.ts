@@ -57,7 +57,8 @@ describe('refusals before any statistics', () => {
     expect(cellErrorOf(() => adf(column(['', null, ''])), '#VALUE!')).toMatch(/holds no numbers/);
   });
   it('a single cell', () => {
-    expect(cellErrorOf(() => adf(7), '#VALUE!')).toMatch(/has 1 usable value/);
+    expect(cellErrorOf(() => adf(7 as unknown as unknown[][]), '#VALUE!')).toMatch(/has 1 usable value/);
+    expect(cellErrorOf(() => adf([[7]]), '#VALUE!')).toMatch(/has 1 usable value/);
   });
   it('not a number: NaN and infinities are refused even though they are numbers', () => {
     expect(cellErrorOf(() => adf(column([...walk.slice(0, 30), NaN, ...walk.slice(30)])), '#VALUE!')).toMatch(/row 31 of its range is not a number \(NaN\): correct the calculation/);
