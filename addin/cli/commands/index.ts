@@ -9,6 +9,7 @@ import { ecmCommand } from './ecm';
 import { egCommand } from './eg';
 import { grangerCommand } from './granger';
 import { hedgeCommand } from './hedge';
+import { johansenCommand } from './johansen';
 import { kpssCommand } from './kpss';
 import { orderCommand } from './order';
 import { poCommand } from './po';
@@ -22,7 +23,7 @@ import { varlagsCommand } from './varlags';
 /** Every command, in help order. */
 export const MOORING_COMMANDS: readonly Command[] = [
   adfCommand, kpssCommand, ppCommand, orderCommand,
-  egCommand, poCommand, hedgeCommand, ecmCommand, spreadCommand,
+  egCommand, poCommand, johansenCommand, hedgeCommand, ecmCommand, spreadCommand,
   reportCommand,
   varlagsCommand, grangerCommand,
   screenCommand, rollingCommand, breaksCommand,

@@ -3,13 +3,12 @@
  * (chooseVarLags: every order on the same rows, a constant), with the criteria table.
  */
 import { chooseVarLags } from '../../var/choose-var-lags';
-import { MooringInputError } from '../../errors';
 import type { Command } from '../command';
 import { wholeNumberValue } from '../option-values';
 import { heading, labelled } from '../render/format';
 import { renderSampleTerminal, sampleJson } from '../render/sample';
 import { finiteOrNull } from '../render/test-json';
-import { blockFromContext } from '../series-input';
+import { blockFromContext, seriesList } from '../series-input';
 import { plainTable } from './plain-table';
 
 /** The varlags command. */
@@ -25,14 +24,7 @@ export const varlagsCommand: Command = {
   options: [{ name: 'max-lags', value: 'N', help: 'largest order tried (default 12 (n/100)^(1/4), capped by the sample)' }],
   examples: ['mooring varlags prices.csv --series Gasoil,Diesel --log', 'mooring varlags prices.csv --series Gasoil,Diesel,Freight --max-lags 8 --json'],
   run(context) {
-    const list = context.common.series;
-    if (list === undefined) throw new MooringInputError('varlags needs --series A,B[,...]: two or more columns, separated by commas.');
-    const names = list.split(',').map((s) => s.trim());
-    if (names.some((n) => n === '')) throw new MooringInputError(`--series has an empty name in '${list}': separate the names with single commas.`);
-    if (names.length < 2) throw new MooringInputError(`varlags needs at least two series in --series; got only '${names[0]}'.`);
-    const lower = names.map((n) => n.toLowerCase());
-    const repeated = names.find((_, i) => lower.indexOf(lower[i]) !== i);
-    if (repeated !== undefined) throw new MooringInputError(`'${repeated}' is named twice in --series: each series may appear once.`);
+    const names = seriesList(context.common.series, 'varlags');
     const maxLags = wholeNumberValue('max-lags', context.args.values.get('max-lags'), 'lags');
     const block = blockFromContext(context, names);
     const labels = block.map((s) => s.label);
