@@ -31,7 +31,7 @@ export function rowPeriod(dates: readonly string[] | null, given?: string): RowP
   const median = gaps[Math.floor(gaps.length / 2)];
   const hit = RANGES.find((r) => median >= r.from && median <= r.to);
   if (!hit) return { period: 'row', source: `the dates are ${median} days apart (median), which matches no calendar period` };
-  return { period: hit.word, source: `from the dates (median gap ${median} calendar day${median === 1 ? '' : 's'})` };
+  return { period: hit.word, source: `found from the dates: median gap ${median} calendar day${median === 1 ? '' : 's'}` };
 }
 
 /** Days since 1970 of each ISO date, or null unless every date reads and they increase. */

@@ -3,8 +3,8 @@ import { diagnose } from '../../addin/report/pairwise-diagnostic';
 import { type Fixtures, fixtureSeries, loadFixture } from '../reference/fixtures';
 
 /**
- * The diagnostic carries the reference library's numbers for the same inputs: statsmodels
- * 0.13.5 (Debian python3-statsmodels), fixtures by tests/reference/make_fixtures.py.
+ * The diagnostic carries the reference library's numbers for the same inputs: the committed
+ * fixtures of tests/reference (their README names the library, its version and each call).
  * Statistics to 1e-8 relative, p-values to 1e-6 absolute, as in the tests of each module;
  * the report adds no arithmetic of its own to them.
  */
@@ -19,7 +19,7 @@ function relative(a: number | null, b: number): number {
   return Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
 }
 
-describe('Engle-Granger both ways on the seeded cointegrated pair (statsmodels coint, constant, AIC, default maximum lag)', () => {
+describe('Engle-Granger both ways on the seeded cointegrated pair (reference Engle-Granger cases, constant, AIC, default maximum lag)', () => {
   const report = diagnose({ series: [{ name: 'pair_y', values: fixtureSeries(coint, 'pair_y') }, { name: 'pair_x', values: fixtureSeries(coint, 'pair_x') }] });
   const eg = report.pairs[0].cointegration.engleGranger;
   for (const [label, summary, y, x] of [['pair_y on pair_x', eg.aOnB, 'pair_y', 'pair_x'], ['pair_x on pair_y', eg.bOnA, 'pair_x', 'pair_y']] as const) {
@@ -37,7 +37,7 @@ describe('Engle-Granger both ways on the seeded cointegrated pair (statsmodels c
   });
 });
 
-describe('the independent walks indep_a and indep_b (statsmodels coint and coint_johansen)', () => {
+describe('the independent walks indep_a and indep_b (reference Engle-Granger and Johansen cases)', () => {
   const report = diagnose(
     { series: [{ name: 'indep_a', values: fixtureSeries(coint, 'indep_a') }, { name: 'indep_b', values: fixtureSeries(coint, 'indep_b') }] },
     { johansenCase: 'constant' },
@@ -50,7 +50,7 @@ describe('the independent walks indep_a and indep_b (statsmodels coint and coint
     expect(pair.cointegration.evidence).toBe('none');
   });
 
-  it('the Johansen trace statistics of the pair match coint_johansen at the lags the report chose', () => {
+  it('the Johansen trace statistics of the pair match the reference at the lags the report chose', () => {
     const j = pair.cointegration.johansen!;
     const c = johansen.cases.find((k) => k.series.join() === 'indep_a,indep_b' && k.deterministic === 'constant' && k.lagDiffs === j.lags);
     expect(c, `a fixture case with ${j.lags} lagged differences`).toBeDefined();
@@ -61,7 +61,7 @@ describe('the independent walks indep_a and indep_b (statsmodels coint and coint
   });
 });
 
-describe('the three-series system sys3 with rank 1 by construction (statsmodels coint_johansen, constant case)', () => {
+describe('the three-series system sys3 with rank 1 by construction (reference Johansen cases, constant case)', () => {
   const names = ['sys3_y1', 'sys3_y2', 'sys3_y3'];
   const report = diagnose({ series: names.map((n) => ({ name: n, values: fixtureSeries(johansen, n) })) }, { johansenCase: 'constant' });
   const j = report.system!.johansen!;
@@ -80,7 +80,7 @@ describe('the three-series system sys3 with rank 1 by construction (statsmodels 
   });
 });
 
-describe('US real GDP and consumption growth (statsmodels grangercausalitytests on macro_dlog_realgdp and macro_dlog_realcons)', () => {
+describe('US real GDP and consumption growth (reference F-test cases on macro_dlog_realgdp and macro_dlog_realcons)', () => {
   const report = diagnose({ series: [{ name: 'macro_dlog_realgdp', values: fixtureSeries(granger, 'macro_dlog_realgdp') }, { name: 'macro_dlog_realcons', values: fixtureSeries(granger, 'macro_dlog_realcons') }] });
   const ll = report.pairs[0].leadLag!;
 
@@ -107,7 +107,7 @@ describe('the VAR(2) pair var2_x -> var2_y, built so that x leads y and not the 
   });
 });
 
-describe('the order-of-integration steps on two AR(1) series (statsmodels adfuller and kpss, constant)', () => {
+describe('the order-of-integration steps on two AR(1) series (reference ADF and KPSS cases, constant)', () => {
   const names = ['ar1_phi050_250', 'ar1_phi090_250'];
   const report = diagnose({ series: names.map((n) => ({ name: n, values: fixtureSeries(adf, n) })) });
   for (const [i, name] of names.entries()) {

@@ -36,7 +36,7 @@ export function renderDiagnosticTerminal(report: DiagnosticReport, extra: { sour
   const out: string[] = [heading(title), ''];
   out.push(labelled('Data', dataLine(report)));
   out.push(labelled('Dropped rows', d.dropped.length === 0 ? 'none' : `${d.dropped.length}: ` + d.dropped.slice(0, 5).map((r) => `${r.series} ${r.row} (${r.reason})`).join('; ') + (d.dropped.length > 5 ? `; ${d.dropped.length - 5} more in --json` : '')));
-  out.push(labelled('Settings', `level ${formatLevel(s.alpha)}, lags by ${s.lagRule.toUpperCase()}, rolling window ${s.rollingWindow} ${d.period}s (one row is a ${d.period}: ${d.periodSource})`));
+  out.push(labelled('Settings', `level ${formatLevel(s.alpha)}, lags by ${s.lagRule.toUpperCase()}, rolling window ${s.rollingWindow} ${d.period}s; one row is a ${d.period}, ${d.periodSource}`));
   if (extra.htmlPath) out.push(labelled('HTML report', extra.htmlPath));
 
   out.push('', `Findings at the ${formatLevel(s.alpha)} level`, '');
