@@ -86,11 +86,11 @@ export class PairWorkspace {
       }
     }
     const base = first * RECORD_SIZE;
-    for (const r of [base, base + RECORD_SIZE]) {
-      out.fill(Number.NaN, r, r + RECORD_SIZE);
-      out[r + FIELD.nobs] = T;
-      out[r + FIELD.lastRow] = lastRow;
-    }
+    out.fill(Number.NaN, base, base + 2 * RECORD_SIZE);
+    out[base + FIELD.nobs] = T;
+    out[base + FIELD.lastRow] = lastRow;
+    out[base + RECORD_SIZE + FIELD.nobs] = T;
+    out[base + RECORD_SIZE + FIELD.lastRow] = lastRow;
     if (T < settings.minObservations) {
       out[base + FIELD.status] = PAIR_STATUS.tooFewRows;
       out[base + RECORD_SIZE + FIELD.status] = PAIR_STATUS.tooFewRows;
