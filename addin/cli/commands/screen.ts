@@ -114,7 +114,7 @@ export const screenCommand: Command = {
     { name: 'max-half-life', value: 'ROWS', help: 'show only pairs whose spread half-life is at most this' },
     { name: 'min-obs', value: 'N', help: 'test only pairs with at least N shared rows (default 20)' },
     { name: 'johansen', help: "also give each pair's Johansen trace rank (slower)" },
-    { name: 'threads', value: 'N', help: 'threads to use (default: every core)' },
+    { name: 'threads', value: 'N', help: 'most threads to use (default: every core; a small screen uses fewer, as starting a thread would cost more than it saves)' },
     { name: 'top', value: 'N', help: `pairs listed in the report (default ${DEFAULT_TOP}; --json lists all)` },
     LAGS_OPTION,
     MAX_LAGS_OPTION,
