@@ -29,12 +29,22 @@ export interface PlannedWriteOutcome extends WriteOutcome {
   chart: { added: boolean; error?: string };
 }
 
-/** The ranges of the earlier block of this name (its cells and its reserved spill), on its sheet. */
+/**
+ * The ranges of the earlier block of this name, on its sheet: its cells, and its spill
+ * columns from their top down to where the new block's spill ends. The spill of the earlier
+ * block has grown with its table, and Excel reports spilled cells with their values, so
+ * without this the block's own spill would be listed as someone else's data.
+ */
 async function earlierBlock(port: WorkbookPort, block: BlockToWrite): Promise<CellRange[] | null> {
   const found = await port.findBlock(block.name);
   if (!found || found.sheet !== block.sheet) return null;
   const note = decodeBlockNote(found.note ?? null);
-  return [parseRange(found.address), ...(note?.reserved ?? []).map((a) => parseRange(a))];
+  const newBottom = Math.max(-1, ...(block.reserved ?? []).map((a) => parseRange(a).bottom));
+  const spills = (note?.reserved ?? []).map((a) => {
+    const r = parseRange(a);
+    return { ...r, bottom: Math.max(r.bottom, newBottom) };
+  });
+  return [parseRange(found.address), ...spills];
 }
 
 function outside(cells: OccupiedCell[], own: CellRange[] | null): OccupiedCell[] {
