@@ -25,6 +25,10 @@ describe('docs/functions.md', () => {
     expect(page).toContain('=MOOR.EGTEST(y, x, [deterministic], [lags], [show])');
   });
 
+  it('is served with the add-in where the help links point (the build copies docs/*.md to dist/docs/)', () => {
+    expect(readFileSync(new URL('../../dist/docs/functions.md', import.meta.url), 'utf8')).toBe(readFileSync(DOCS_FILE, 'utf8'));
+  });
+
   it('renders optional arguments in brackets and escapes table bars', () => {
     const text = renderFunctionDocs(
       { functions: [{ name: 'DEMO', description: 'a | b', helpUrl: 'x#demo', parameters: [{ name: 'r', description: 'one', dimensionality: 'matrix' }, { name: 'o', description: 'two', optional: true }], result: {} }] },
