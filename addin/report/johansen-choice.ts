@@ -37,9 +37,9 @@ export function chooseJohansenCase(block: readonly Float64Array[], names: readon
   };
 }
 
-/** K lagged changes from the VAR order of the levels, and why. */
-export function chooseJohansenLags(block: readonly Float64Array[], lagRule: 'aic' | 'bic', known?: VarLagChoice): { lags: number; reason: string } {
-  const choice = known ?? chooseVarLags(block);
+/** K lagged changes from the VAR order of the levels (or the one already chosen), and why. */
+export function chooseJohansenLags(block: readonly Float64Array[], lagRule: 'aic' | 'bic', known?: VarLagChoice, names?: readonly string[]): { lags: number; reason: string } {
+  const choice = known ?? chooseVarLags(block, { names });
   const p = choice[lagRule];
   const lags = Math.max(p - 1, 0);
   const rule = lagRule.toUpperCase();
@@ -58,7 +58,7 @@ export function johansenSection(
   options: { alpha: number; lagRule: 'aic' | 'bic'; johansenCase: JohansenCase | 'auto'; varOrder?: VarLagChoice },
 ): JohansenSummary {
   const chosenCase = chooseJohansenCase(block, names, options.johansenCase);
-  const chosenLags = chooseJohansenLags(block, options.lagRule, options.varOrder);
+  const chosenLags = chooseJohansenLags(block, options.lagRule, options.varOrder, names);
   let result;
   try {
     result = johansenTest(block.slice(), { case: chosenCase.case, lags: chosenLags.lags, alpha: options.alpha }, names.slice());

@@ -52,7 +52,7 @@ export function leadLagSection(
   const orders: [OrderEvidence, OrderEvidence] = [orderEvidence(facts.a), orderEvidence(facts.b)];
   const method = chooseCausalityTest({ orderCause: orders[0], orderEffect: orders[1], cointegrated: facts.cointegrated }).method;
   const onChanges = method === 'f-differences';
-  const order = onChanges || options.levelsOrder === undefined ? chooseVarLags(onChanges ? [diff(a), diff(b)] : [a, b]) : options.levelsOrder;
+  const order = onChanges || options.levelsOrder === undefined ? chooseVarLags(onChanges ? [diff(a), diff(b)] : [a, b], { names: [names.a, names.b] }) : options.levelsOrder;
   const chosen = order[options.lagRule];
   const lags = Math.max(1, method === 'error-correction' ? chosen - 1 : chosen);
   const source = onChanges ? "VAR order of the pair's changes" : method === 'error-correction' ? 'VAR order of the pair less one' : 'VAR order of the pair';

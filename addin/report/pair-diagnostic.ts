@@ -53,7 +53,7 @@ export function diagnosePair(a: Float64Array, b: Float64Array, names: { a: strin
   const unavailable: UnavailablePart[] = [];
   const { alpha, deterministic, lagRule } = context;
   const eg = engleGrangerPair(a, b, names, { alpha, deterministic, lagRule });
-  const levelsOrder = attempt('VAR order', unavailable, () => chooseVarLags([a, b])) ?? undefined;
+  const levelsOrder = attempt('VAR order', unavailable, () => chooseVarLags([a, b], { names: [names.a, names.b] })) ?? undefined;
   const johansen = attempt('Johansen test', unavailable, () =>
     johansenSection([a, b], [names.a, names.b], { alpha, lagRule, johansenCase: context.johansenCase, varOrder: levelsOrder }));
   const factsA = context.orders[names.a];
@@ -75,11 +75,17 @@ export function diagnosePair(a: Float64Array, b: Float64Array, names: { a: strin
       ? `${names.b} leads, so the relation is written for ${names.a}, the follower, on its leader.`
       : `No single leader, so the relation is written for ${names.a}, the first of the pair, on ${names.b}.`;
 
+  // A copied column (one series an exact multiple of the other) leaves a spread of rounding noise: nothing to model.
+  const exactFit = eg.aOnB.statistic === null || eg.bOnA.statistic === null;
+  if (exactFit) {
+    const reason = `${names.a} and ${names.b} move as one up to scale (the Engle-Granger residual is exactly zero): check that one column is not a copy or a formula of the other.`;
+    for (const part of ['long-run relation', 'spread', 'error-correction model']) unavailable.push({ part, reason });
+  }
   const phillipsOuliaris = attempt('Phillips-Ouliaris test', unavailable, () => phillipsOuliarisSummary(y, x, yx, { alpha, deterministic }));
-  const relation = attempt('long-run relation', unavailable, () =>
+  const relation = exactFit ? null : attempt('long-run relation', unavailable, () =>
     longRunRelation(y, x, yx, { logged: context.logged, rowLabels: context.rowLabels, normalisationReason }));
   const line = bFollows ? eg.bOnA : eg.aOnB;
-  const spread = attempt('spread', unavailable, () =>
+  const spread = exactFit ? null : attempt('spread', unavailable, () =>
     spreadSection(y, x, { beta: line.beta, intercept: line.intercept ?? 0 }, yx, {
       rowLabels: context.rowLabels,
       dates: context.dates,

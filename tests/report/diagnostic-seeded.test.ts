@@ -154,3 +154,37 @@ describe('three series: Y tied to X1, X2 free (seed 31, 500 rows)', () => {
     expect(report.cautions.join(' ')).toMatch(/tested 3 pairs and 6 lead-lag directions/);
   });
 });
+
+describe('options and awkward data', () => {
+  const data = leaderFollower(14, 600, { gamma: 0.2 });
+  const series = [{ name: 'Lead', values: data.leader }, { name: 'Follow', values: data.follower }];
+
+  it('a window cuts the data before anything is estimated', () => {
+    const report = diagnose({ series }, { window: { start: 100, end: 400 } });
+    expect(report.data.observations).toBe(300);
+    expect(report.data.window).toEqual({ start: 100, end: 400 });
+    expect(report.data.first.label).toBe('row 101');
+    expect(report.pairs[0].spread?.values).toHaveLength(300);
+  });
+
+  it('BIC and a trend reach every step that takes them', () => {
+    const report = diagnose({ series }, { lagRule: 'bic', deterministic: 'trend' });
+    const pair = report.pairs[0];
+    expect(report.settings).toMatchObject({ lagRule: 'bic', deterministic: 'trend' });
+    expect(pair.cointegration.engleGranger.aOnB.deterministic).toBe('trend');
+    expect(pair.cointegration.johansen?.lagsReason).toMatch(/^BIC chose/);
+    expect(pair.leadLag?.aLeadsB.test.lagRule).toMatch(/^bic \(/);
+  });
+
+  it('a copied column (one series an exact multiple of the other) gives a report, with the parts it cannot support named, not a crash', () => {
+    const copy = data.leader.map((v) => 0.5 + 2 * v);
+    const report = diagnose({ series: [{ name: 'X', values: data.leader }, { name: 'Copy', values: copy }] });
+    const pair = report.pairs[0];
+    expect(pair.cointegration.engleGranger.aOnB.statistic).toBeNull();
+    expect(pair.cointegration.engleGranger.aOnB.statisticNote).toMatch(/minus infinity/);
+    expect(pair.spread).toBeNull();
+    expect(pair.unavailable.map((u) => u.part)).toEqual(expect.arrayContaining(['long-run relation', 'spread', 'error-correction model']));
+    expect(pair.warnings.filter((w) => w.kind === 'part-unavailable').map((w) => w.text).join(' ')).toMatch(/copy or a formula of the other/);
+    expect(JSON.stringify(report)).not.toMatch(/series 2/);
+  });
+});
