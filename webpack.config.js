@@ -169,11 +169,15 @@ async function addinConfig(mode, serving) {
     entry: {
       functions: FUNCTION_SOURCES,
       taskpane: './taskpane/taskpane.ts',
+      // The pane over the in-memory workbook with the demo data (npm run preview, end-to-end tests).
+      preview: './taskpane/preview/preview.ts',
     },
     output: {
       path: DIST,
       filename: '[name].js',
       publicPath: '',
+      // The pane's diagnosis worker is an async chunk named by its chunk name: dist/diagnose-worker.js.
+      chunkFilename: '[name].js',
       // dist/cli belongs to the cli configuration, which may be building at the same time.
       clean: { keep: /^cli(\/|\\|$)/ },
     },
@@ -190,6 +194,8 @@ async function addinConfig(mode, serving) {
             options: { metadataInput: FUNCTION_SOURCES },
           },
         },
+        // The preview page bundles the demo CSV as text.
+        { test: /\.csv$/, include: path.join(ROOT, 'addin', 'demo', 'data'), type: 'asset/source' },
       ],
     },
     // No eval-based source maps: the pages' content security policy forbids eval.
@@ -201,11 +207,13 @@ async function addinConfig(mode, serving) {
       // With the shared runtime the pane page hosts the custom functions too, so it loads both bundles.
       htmlPage(ADDIN_FILES.pane, './taskpane/taskpane.html', ['functions', 'taskpane']),
       htmlPage(ADDIN_FILES.functionsPage, './functions/functions.html', ['functions']),
+      htmlPage('preview.html', './taskpane/preview/preview.html', ['preview']),
       new CopyWebpackPlugin({
         patterns: [
           { from: 'manifest/manifest.xml', to: 'manifest.xml' },
           { from: 'assets/icon-*.png', to: 'assets/[name][ext]' },
           { from: 'taskpane/taskpane.css', to: 'taskpane.css' },
+          { from: 'node_modules/uplot/dist/uPlot.min.css', to: 'uPlot.min.css' },
           { from: 'docs/*.md', to: 'docs/[name][ext]', noErrorOnMissing: true },
         ],
       }),
