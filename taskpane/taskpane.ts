@@ -1,8 +1,11 @@
-// Task pane entry. A placeholder until the pane's features arrive: it shows the
-// product name and, when the page is not running inside Excel, a banner saying so.
+// Task pane entry. Inside Excel the guided pane starts over the Office adapter of the
+// workbook port; elsewhere the page says that it needs Excel (the preview page,
+// preview/preview.html, runs the same pane over the in-memory workbook instead).
 // Every Office call is guarded, and text goes in through textContent only.
 
 import { describeHost, type HostStatus } from './status';
+import { bootPane } from './ui/boot';
+import { OfficeWorkbook } from './workbook/office-adapter';
 
 function showStatus(status: HostStatus): void {
   const banner = document.getElementById('host-status');
@@ -20,7 +23,9 @@ function start(): void {
   void Office.onReady((info) => {
     // The typings declare HostType as a numeric enum; at run time its values are names.
     const host = info.host == null ? null : info.host === Office.HostType.Excel ? 'Excel' : String(info.host);
-    showStatus(describeHost(true, host));
+    const status = describeHost(true, host);
+    showStatus(status);
+    if (status.kind === 'ready') bootPane(new OfficeWorkbook());
   });
 }
 

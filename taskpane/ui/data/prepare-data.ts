@@ -1,0 +1,115 @@
+/**
+ * From the detected region and the first step's choices to the engine's input: the chosen
+ * columns go through the shared series cleaner together (so their rows line up), dates come
+ * from the date column, and the sample window is turned from the dates (or sheet rows) the
+ * user typed into positions among the cleaned rows. Every refusal is the engine's
+ * MooringInputError, whose message the pane shows as it is.
+ */
+import { MooringInputError } from '../../../addin/errors';
+import type { DiagnosticOptions } from '../../../addin/report/check-input';
+import { prepareDiagnosticInput, type DiagnosticInput } from '../../../addin/report/prepare-input';
+import type { DroppedRow } from '../../../addin/report/report-types';
+import { cleanBlock } from '../../../addin/series/clean-block';
+import type { DataRegion } from '../../workbook/port';
+import { describeColumns } from './columns';
+import { dateCellText } from './excel-date';
+
+/** The first step's choices. */
+export interface DataChoice {
+  /** Indices into the region's headers of the series to compare. */
+  columns: number[];
+  /** Take natural logs of the prices. */
+  log: boolean;
+  /** Drop blank or text cells inside a series (listed) instead of refusing them. */
+  skipGaps: boolean;
+  /** First date (or sheet row, without dates) of the sample, as typed; null or '' for the start. */
+  from: string | null;
+  /** Last date (or sheet row) of the sample; null or '' for the end. */
+  to: string | null;
+  /** Level of every decision. */
+  alpha: number;
+}
+
+/** The engine's input and what the first step reports about it. */
+export interface PreparedData {
+  input: DiagnosticInput;
+  /** The window among the cleaned rows, for the engine's options; undefined for all rows. */
+  window: DiagnosticOptions['window'];
+  /** Data rows in the region (below the header). */
+  regionRows: number;
+  /** Rows the cleaned series share, before the window. */
+  cleanRows: number;
+  /** Rows inside the window: what the diagnosis uses. */
+  usedRows: number;
+  /** First and last row used, as labels ("row 5 (2022-01-03)"). */
+  firstUsed: string;
+  lastUsed: string;
+  /** Cells dropped by the cleaner, with their reasons. */
+  dropped: DroppedRow[];
+  /** Rows left out by the window. */
+  outsideWindow: number;
+  /** Names of the series, as the headers have them. */
+  names: string[];
+}
+
+/** Cleans the chosen columns of the region and cuts the sample window. */
+export function prepareData(region: DataRegion, choice: DataChoice): PreparedData {
+  const columns = describeColumns(region);
+  if (choice.columns.length < 2) {
+    throw new MooringInputError('Choose at least two series: the diagnosis compares prices in pairs.');
+  }
+  const names = choice.columns.map((j) => columns[j]?.header ?? `column ${j + 1}`);
+  const cells = choice.columns.map((j) => region.rows.map((row) => row[j] ?? null));
+  const first = region.firstDataRow;
+  const dates = region.dateColumn === null ? null : region.rows.map((row) => dateCellText(row[region.dateColumn as number] ?? null));
+  const label = (i: number): string => (dates?.[i] ? `row ${first + i} (${dates[i]})` : `row ${first + i}`);
+  const block = cleanBlock(cells, names, { log: choice.log, skipGaps: choice.skipGaps, firstRow: first, rowLabel: label });
+  const input = prepareDiagnosticInput(block, {
+    dateOf: (i) => dates?.[i] ?? null,
+    source: `${region.sheet}!${region.address}`,
+  });
+  const sourceRows = Array.from(block[0].rows);
+  const window = windowOf(choice, sourceRows, dates, first);
+  const start = window?.start ?? 0;
+  const end = window?.end ?? sourceRows.length;
+  return {
+    input,
+    window,
+    regionRows: region.rows.length,
+    cleanRows: sourceRows.length,
+    usedRows: end - start,
+    firstUsed: label(sourceRows[start]),
+    lastUsed: label(sourceRows[end - 1]),
+    dropped: input.dropped ?? [],
+    outsideWindow: sourceRows.length - (end - start),
+    names,
+  };
+}
+
+/** The window among cleaned rows from the typed first and last date (or sheet row). */
+function windowOf(choice: DataChoice, sourceRows: number[], dates: (string | null)[] | null, firstRow: number): DiagnosticOptions['window'] {
+  const from = choice.from?.trim() || null;
+  const to = choice.to?.trim() || null;
+  if (from === null && to === null) return undefined;
+  const n = sourceRows.length;
+  const keyOf = (k: number): string | number => (dates ? (dates[sourceRows[k]] ?? '') : firstRow + sourceRows[k]);
+  const bound = (text: string, what: string): string | number => {
+    if (dates) {
+      if (!/^\d{4}-\d{2}-\d{2}/.test(text)) throw new MooringInputError(`The ${what} date '${text}' is not a date: type it as 2024-03-15.`);
+      return text;
+    }
+    const row = Number(text);
+    if (!Number.isInteger(row)) throw new MooringInputError(`The ${what} row '${text}' is not a row number: type a sheet row such as ${firstRow}.`);
+    return row;
+  };
+  const lo = from === null ? null : bound(from, 'first');
+  const hi = to === null ? null : bound(to, 'last');
+  let start = 0;
+  while (start < n && lo !== null && keyOf(start) < lo) start++;
+  let end = n;
+  while (end > start && hi !== null && keyOf(end - 1) > hi) end--;
+  if (end <= start) {
+    throw new MooringInputError(`No rows lie between ${from ?? 'the start'} and ${to ?? 'the end'}: widen the sample.`);
+  }
+  return start === 0 && end === n ? undefined : { start, end };
+}

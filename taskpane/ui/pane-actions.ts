@@ -1,0 +1,125 @@
+/**
+ * What the pane's controls do to its state: the data step's choices (each prepares the input
+ * again so the rows-used line is current), the stage choices (each runs the diagnosis
+ * again), the pair picker, and the write step's plan, yes or no, and write.
+ */
+import type { DiagnosticReport } from '../../addin/report/report-types';
+import type { BlockPlacement } from '../block/pair-block';
+import type { DataRegion } from '../workbook/port';
+import type { DataChoice } from './data/prepare-data';
+import type { PaneDeps, PaneState } from './pane';
+import type { StepId } from './steps';
+import type { ChoiceKey } from './views/choices';
+import { chosenPair } from './views/pair-choice';
+import type { WriteState } from './views/write-view';
+import { placementFor, planPairWrite, rewriteBlock, tableOfRegion, writePlan } from './write-actions';
+
+/** The pane's internals the actions use. */
+export interface PaneInternals {
+  render(): void;
+  run(then: StepId | null): void;
+  prepare(): void;
+  open(id: StepId): void;
+  rewatch(): Promise<void>;
+  /** Looks for the data around the selection again. */
+  detectAgain(): void;
+}
+
+/** The actions of the pane's controls. */
+export interface PaneActions {
+  detect(): void;
+  changeData(patch: Partial<DataChoice>): void;
+  runFromData(): void;
+  changeStage(key: ChoiceKey, value: string): void;
+  pickPair(index: number): void;
+  changeWrite(patch: Partial<WriteState>): void;
+  write(): void;
+  confirm(yes: boolean): void;
+  rewrite(report: DiagnosticReport, pair: { a: string; b: string }, region: DataRegion, placement: BlockPlacement): Promise<boolean>;
+}
+
+function message(e: unknown): string {
+  return e instanceof Error ? e.message : String(e);
+}
+
+/** Builds the actions over the pane's state. */
+export function createActions(s: PaneState, deps: PaneDeps, pane: PaneInternals): PaneActions {
+  const pairNames = (): { a: string; b: string } | null => {
+    const chosen = s.report ? chosenPair(s.report, s.pairIndex) : null;
+    return chosen ? { a: chosen.pair.a, b: chosen.pair.b } : null;
+  };
+  const finishWrite = async (confirmed: boolean): Promise<void> => {
+    const plan = s.write.plan;
+    if (!plan) return;
+    s.write = { ...s.write, busy: true };
+    pane.render();
+    const outcome = await writePlan(deps.port, plan, confirmed);
+    s.write = { ...s.write, busy: false, outcome };
+    const pair = pairNames();
+    if (outcome.ok && pair) s.written = { pair, placement: { sheet: plan.block.sheet, anchor: plan.block.anchor } };
+    pane.render();
+  };
+  return {
+    detect() {
+      pane.detectAgain();
+    },
+    changeData(patch) {
+      s.choice = { ...s.choice, ...patch };
+      pane.prepare();
+      pane.render();
+    },
+    runFromData() {
+      pane.run('series');
+    },
+    changeStage(key, value) {
+      s.stage = { ...s.stage, [key]: value } as PaneState['stage'];
+      pane.run(null);
+    },
+    pickPair(index) {
+      s.pairIndex = index;
+      s.write = { ...s.write, plan: null, outcome: null, problem: null };
+      pane.render();
+    },
+    changeWrite(patch) {
+      s.write = { ...s.write, ...patch };
+      pane.render();
+    },
+    write() {
+      const pair = pairNames();
+      if (!s.report || !s.region || !pair) return;
+      const report = s.report;
+      s.write = { ...s.write, busy: true, plan: null, outcome: null, problem: null, tableNote: null };
+      pane.render();
+      void (async () => {
+        try {
+          if (!s.region) return;
+          if (s.write.makeTable && !s.region.tableName) {
+            const made = await tableOfRegion(deps.port, s.region);
+            s.region = made.region;
+            s.write = { ...s.write, tableNote: made.note };
+            await pane.rewatch();
+          }
+          const placement = await placementFor(deps.port, s.region, s.write.place, s.write.cell);
+          const plan = await planPairWrite(deps.port, report, pair, s.region, placement);
+          s.write = { ...s.write, plan, busy: false };
+          if (plan.safe) await finishWrite(false);
+          else pane.render();
+        } catch (e) {
+          s.write = { ...s.write, busy: false, problem: message(e) };
+          pane.render();
+        }
+      })();
+    },
+    confirm(yes) {
+      if (yes) {
+        void finishWrite(true);
+        return;
+      }
+      s.write = { ...s.write, plan: null, problem: 'Nothing was written: the filled cells were kept. Choose another place, or write again and say yes.' };
+      pane.render();
+    },
+    rewrite(report, pair, region, placement) {
+      return rewriteBlock(deps.port, report, pair, region, placement).catch(() => false);
+    },
+  };
+}

@@ -1,0 +1,25 @@
+/** Renders "The relation and its pull" from its view model. */
+import { el } from '../dom';
+import type { RelationStepView } from '../views/relation-view';
+import { chartSlot } from './chart-slot';
+import { cautionsBox, factList, section, warningsBox } from './parts';
+
+/** The step's content. */
+export function renderRelationStep(view: RelationStepView, picker: HTMLElement | null): HTMLElement {
+  return el('div', { class: 'step-body' },
+    picker,
+    el('h3', { class: 'pair-title' }, view.pairLabel),
+    view.untiedNote ? el('p', { class: 'flag' }, view.untiedNote) : null,
+    view.pullVerdict ? el('div', { class: 'verdict' }, el('p', { class: 'verdict-text', 'data-role': 'pull' }, view.pullVerdict)) : null,
+    section('The long-run line',
+      view.relationText ? el('p', { class: 'relation' }, view.relationText) : el('p', {}, 'No long-run line could be estimated.'),
+      view.normalisationReason ? el('p', { class: 'why' }, view.normalisationReason) : null,
+      factList(view.lineFacts),
+      view.halvesNote ? el('p', { class: 'why' }, view.halvesNote) : null),
+    section('How a gap closes', factList(view.pullFacts)),
+    view.spreadVerdict ? section('Where the spread is now', el('p', {}, view.spreadVerdict)) : null,
+    view.charts ? chartSlot(view.charts.spread) : null,
+    view.charts ? chartSlot(view.charts.rollingZ) : null,
+    warningsBox('Worth knowing', [...view.warnings, ...view.unavailable]),
+    cautionsBox(view.cautions));
+}

@@ -1,0 +1,98 @@
+/**
+ * The view of "The relation and its pull": the long-run line between the pair in words
+ * (which price is written on which, and why), the hedge ratio by plain and dynamic least
+ * squares, whether it held across the halves of the sample, how fast a gap closes (the
+ * engine's "closes half its gap in about N days" sentence beside the numbers) and which side
+ * does the closing, where the spread stands now, and the spread and rolling z-score charts.
+ */
+import type { DiagnosticReport } from '../../../addin/report/report-types';
+import type { PairReport } from '../../../addin/report/pair-types';
+import { cautionsView, type CautionsView } from './cautions-view';
+import { pairCharts } from './chart-list';
+import type { ChartModel } from './chart-models';
+import { showNumber, showPValue } from './numbers';
+
+/** A labelled number of the step. */
+export interface FactView {
+  label: string;
+  value: string;
+}
+
+/** The step's view of one pair. */
+export interface RelationStepView {
+  pairLabel: string;
+  /** Said first when the tests found no tie: the numbers then describe a gap that need not close. */
+  untiedNote: string | null;
+  relationText: string | null;
+  normalisationReason: string | null;
+  lineFacts: FactView[];
+  halvesNote: string | null;
+  pullVerdict: string | null;
+  pullFacts: FactView[];
+  spreadVerdict: string | null;
+  charts: { spread: ChartModel; rollingZ: ChartModel } | null;
+  /** Parts the engine could not estimate, with its reasons. */
+  unavailable: string[];
+  warnings: string[];
+  cautions: CautionsView;
+}
+
+/** A half-life in words for a table cell. */
+function halfLifeText(halfLife: number | null, note: string | null, period: string): string {
+  if (halfLife === null) return note ?? 'none';
+  return `${showNumber(halfLife, 1)} ${period}s`;
+}
+
+/** The step's view of a pair of the report. */
+export function relationStepView(report: DiagnosticReport, pair: PairReport): RelationStepView {
+  const period = report.data.period;
+  const r = pair.relation;
+  const a = pair.adjustment;
+  const s = pair.spread;
+  const lineFacts: FactView[] = r
+    ? [
+        { label: 'Hedge ratio, plain least squares', value: showNumber(r.ols.beta, 4) },
+        { label: 'Hedge ratio, dynamic least squares', value: showNumber(r.dynamicOls.beta, 4) },
+        { label: 'Its standard error', value: showNumber(r.dynamicOls.standardError, 4) },
+        { label: 'Intercept, dynamic least squares', value: showNumber(r.dynamicOls.intercept, 4) },
+      ]
+    : [];
+  if (r?.halves) {
+    lineFacts.push(
+      { label: `Hedge ratio, ${r.halves.first.from} to ${r.halves.first.to}`, value: showNumber(r.halves.first.beta, 4) },
+      { label: `Hedge ratio, ${r.halves.second.from} to ${r.halves.second.to}`, value: showNumber(r.halves.second.beta, 4) },
+      { label: 'Held steady across the halves?', value: r.halves.stable ? 'Yes' : 'No: it moved' },
+    );
+  }
+  const pullFacts: FactView[] = a
+    ? [
+        { label: 'Half-life of a gap (both sides adjusting)', value: halfLifeText(a.ecm.halfLife, a.ecm.halfLifeNote, period) },
+        { label: 'Half-life of a gap (the spread alone)', value: halfLifeText(a.spreadAr1.halfLife, a.spreadAr1.halfLifeNote, period) },
+        { label: `${a.ecm.dependent.series} closes the gap?`, value: `${a.ecm.dependent.corrects ? 'Yes' : 'No'} (speed ${showNumber(a.ecm.dependent.speed, 4)}, p ${showPValue(a.ecm.dependent.pValue)})` },
+        { label: `${a.ecm.regressor.series} closes the gap?`, value: `${a.ecm.regressor.corrects ? 'Yes' : 'No'} (speed ${showNumber(a.ecm.regressor.speed, 4)}, p ${showPValue(a.ecm.regressor.pValue)})` },
+      ]
+    : [];
+  if (s) {
+    pullFacts.push(
+      { label: `Spread on ${s.latestDate ?? s.latestRow}, in standard deviations`, value: showNumber(s.latestZ, 2) },
+      { label: `Against the last ${s.rollingWindow} rows`, value: showNumber(s.latestRollingZ, 2) },
+    );
+  }
+  return {
+    pairLabel: `${pair.a} and ${pair.b}`,
+    untiedNote: pair.cointegration.cointegrated
+      ? null
+      : 'The tests found no long-run tie for this pair, so the line below is only a fit to the past: the gap has no reason to close.',
+    relationText: r?.text ?? null,
+    normalisationReason: r?.normalisationReason ?? null,
+    lineFacts,
+    halvesNote: r?.halvesNote ?? null,
+    pullVerdict: a?.verdict ?? null,
+    pullFacts,
+    spreadVerdict: s?.verdict ?? null,
+    charts: pairCharts(report, pair),
+    unavailable: pair.unavailable.map((u) => `No ${u.part}: ${u.reason}`),
+    warnings: pair.warnings.filter((w) => w.kind === 'near-unit-root' || w.kind === 'relation-moved').map((w) => w.text),
+    cautions: cautionsView(report),
+  };
+}

@@ -1,0 +1,116 @@
+/**
+ * Runs a diagnosis for the pane and lets the user cancel it. The worker runner sends the
+ * work to a Web Worker (a fresh one after a cancel, since cancelling terminates it); the
+ * inline runner is the fallback for a page without workers, running on the pane's thread
+ * after the pane has painted its progress bar.
+ */
+import { isMooringInputError } from '../../addin/errors';
+import type { DiagnosticOptions } from '../../addin/report/check-input';
+import { diagnose } from '../../addin/report/pairwise-diagnostic';
+import type { DiagnosticInput } from '../../addin/report/prepare-input';
+import type { DiagnosticReport } from '../../addin/report/report-types';
+import type { RunRequest, WorkerReply } from './messages';
+
+/** How a run ended. */
+export type RunOutcome =
+  | { kind: 'done'; report: DiagnosticReport }
+  | { kind: 'failed'; message: string; inputError: boolean }
+  | { kind: 'cancelled' };
+
+/** The size of a started job, for the progress line. */
+export interface RunSize {
+  series: number;
+  pairs: number;
+  rows: number;
+}
+
+/** A run in progress. */
+export interface RunHandle {
+  outcome: Promise<RunOutcome>;
+  cancel(): void;
+}
+
+/** Something that runs diagnoses. */
+export interface DiagnosisRunner {
+  /** Whether the work leaves the pane's thread. */
+  readonly offThread: boolean;
+  run(input: DiagnosticInput, options: DiagnosticOptions, onStart?: (size: RunSize) => void): RunHandle;
+}
+
+/** Runs each diagnosis in a Web Worker made by `makeWorker`. */
+export function workerRunner(makeWorker: () => Worker): DiagnosisRunner {
+  let worker: Worker | null = null;
+  let nextId = 1;
+  return {
+    offThread: true,
+    run(input, options, onStart) {
+      const id = nextId++;
+      const current = worker ?? (worker = makeWorker());
+      let settle: (o: RunOutcome) => void = () => undefined;
+      const outcome = new Promise<RunOutcome>((resolve) => {
+        settle = resolve;
+      });
+      const stop = (o: RunOutcome): void => {
+        current.removeEventListener('message', onMessage);
+        current.removeEventListener('error', onError);
+        settle(o);
+      };
+      const onMessage = (event: MessageEvent<WorkerReply>): void => {
+        const reply = event.data;
+        if (!reply || reply.id !== id) return;
+        if (reply.type === 'started') onStart?.({ series: reply.series, pairs: reply.pairs, rows: reply.rows });
+        else if (reply.type === 'done') stop({ kind: 'done', report: reply.report });
+        else stop({ kind: 'failed', message: reply.message, inputError: reply.inputError });
+      };
+      const onError = (event: ErrorEvent): void => {
+        event.preventDefault();
+        worker = null;
+        current.terminate();
+        stop({ kind: 'failed', message: `The diagnosis stopped with an internal error: ${event.message || 'unknown'}.`, inputError: false });
+      };
+      current.addEventListener('message', onMessage);
+      current.addEventListener('error', onError);
+      const request: RunRequest = { type: 'run', id, input, options };
+      current.postMessage(request);
+      return {
+        outcome,
+        cancel() {
+          if (worker === current) worker = null;
+          current.terminate();
+          stop({ kind: 'cancelled' });
+        },
+      };
+    },
+  };
+}
+
+/** Runs each diagnosis on the pane's thread, after one turn so the progress bar paints; cancel only works before it starts. */
+export function inlineRunner(): DiagnosisRunner {
+  return {
+    offThread: false,
+    run(input, options, onStart) {
+      let cancelled = false;
+      let settle: (o: RunOutcome) => void = () => undefined;
+      const outcome = new Promise<RunOutcome>((resolve) => {
+        settle = resolve;
+      });
+      setTimeout(() => {
+        if (cancelled) return;
+        const series = input.series.length;
+        onStart?.({ series, pairs: (series * (series - 1)) / 2, rows: input.series[0]?.values.length ?? 0 });
+        try {
+          settle({ kind: 'done', report: diagnose(input, options) });
+        } catch (e) {
+          settle({ kind: 'failed', message: e instanceof Error ? e.message : String(e), inputError: isMooringInputError(e) });
+        }
+      }, 30);
+      return {
+        outcome,
+        cancel() {
+          cancelled = true;
+          settle({ kind: 'cancelled' });
+        },
+      };
+    },
+  };
+}
