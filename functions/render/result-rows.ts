@@ -34,6 +34,7 @@ export const CAUTION = 'Evidence, not advice: relations break.';
 /** The level the decision row reports. */
 const DECISION_LEVEL = 0.05;
 
+/** How the lags were chosen, in words ("Lags: 3, chosen by AIC"). */
 const LAG_RULE_WORDS: Record<string, string> = {
   fixed: 'as given',
   aic: 'chosen by AIC',
@@ -78,8 +79,8 @@ export function resultRows(result: TestResult, extras: RowExtras = {}): ResultRo
   const levels = Object.keys(result.critical).sort((a, b) => parseFloat(a) - parseFloat(b));
   for (const level of levels) add(criticalKey(level), `Critical value at ${level}`, result.critical[level]);
   add('decision5', 'At the 5% level', decisionText(result));
-  add('lags', 'Lagged changes', result.lags);
-  if (result.lags !== null && result.lagRule) add('lagRule', 'Lags', LAG_RULE_WORDS[result.lagRule] ?? result.lagRule);
+  add('lags', 'Lags', result.lags);
+  if (result.lags !== null && result.lagRule) add('lagRule', 'How the lags were chosen', LAG_RULE_WORDS[result.lagRule] ?? result.lagRule);
   add('bandwidth', 'Bandwidth (kernel lags)', result.bandwidth);
   add('observations', 'Observations in the test', result.nobs);
   add('deterministic', 'Deterministic terms', DETERMINISTIC_LABEL[result.deterministic]);

@@ -39,7 +39,8 @@ export function showAnswer(answer: Answer, show: unknown, cards: () => boolean =
   const { result } = answer;
   if (choice === 'headline') return [[cellNumber(answer.headline.value, answer.headline.name, answer.headline.missing)]];
   if (choice === 'stat') {
-    return [[cellNumber(result.statistic, `The statistic (${result.statisticName})`, result.warnings[0])]];
+    const why = result.warnings.find((w) => /infinity/.test(w)) ?? result.warnings[0];
+    return [[cellNumber(result.statistic, `The statistic (${result.statisticName})`, why)]];
   }
   const rows = resultRows(result, answer.extras);
   if (choice === 'card' && cards()) {

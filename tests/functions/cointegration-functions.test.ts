@@ -148,6 +148,6 @@ describe('MOOR.ECM', () => {
     expect(engine.y.alpha).toBeLessThan(0);
   });
   it('takes a fixed number of lags', () => {
-    expect(tableValue(ecm(column(yv), column(xv), 3, 'all'), 'Lagged changes')).toBe(3);
+    expect(tableValue(ecm(column(yv), column(xv), 3, 'all'), 'Lags')).toBe(3);
   });
 });
