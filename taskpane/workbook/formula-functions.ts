@@ -121,6 +121,7 @@ const BUILTINS: Record<string, Builtin> = {
     return rows.length === 1 ? rows[0][0] : arrayOf(rows);
   },
   INDEX: (call) => {
+    if (arg(call, 0) instanceof FormulaError) return arg(call, 0);
     const grid = gridOf(arg(call, 0), call.read);
     const r = toNumber(scalarOf(arg(call, 1), call.read));
     const c = call.args[2] === undefined ? 1 : toNumber(scalarOf(arg(call, 2), call.read));

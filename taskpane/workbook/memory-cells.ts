@@ -181,7 +181,12 @@ export class MemoryCells {
       sheet,
       hasSheet: (s) => this.sheets.has(s),
       read: (ref) => this.read(ref),
-      spill: (s, row, col) => this.result(s, row, col) ?? new FormulaError('#REF!', `${s}!${cellAddress({ row, col })} holds no formula to spill.`),
+      spill: (s, row, col) => {
+        // As in Excel, a spill reference to a formula that cannot spill is #REF!.
+        const r = this.result(s, row, col);
+        if (r === null) return new FormulaError('#REF!', `${s}!${cellAddress({ row, col })} holds no formula to spill.`);
+        return r instanceof FormulaError && r.code === '#SPILL!' ? new FormulaError('#REF!', `The formula in ${s}!${cellAddress({ row, col })} cannot spill.`) : r;
+      },
       tableColumns: (t, a, b) => this.tableColumns(t, a, b),
     };
   }
