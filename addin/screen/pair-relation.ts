@@ -139,34 +139,28 @@ export class PairWorkspace {
     out[r + FIELD.tau] = adf.tau;
     out[r + FIELD.lags] = adf.lags;
     out[r + FIELD.pValue] = residualTauPValue(adf.tau, 'const', 2) as number;
-    spreadFacts(u, T, out, r);
+    spreadFacts(this.adf.sums, u[0], u[T - 1], T, out, r);
   }
 }
 
-/** Half-life (AR(1) with a constant) and the last row's z-score (sample standard deviation) of the spread u[0..T-1]. */
-function spreadFacts(u: Float64Array, T: number, out: Float64Array, r: number): void {
-  let mean = 0;
-  for (let t = 0; t < T; t++) mean += u[t];
-  mean /= T;
-  let ss = 0;
-  for (let t = 0; t < T; t++) ss += (u[t] - mean) * (u[t] - mean);
-  const sd = Math.sqrt(ss / (T - 1));
-  out[r + FIELD.zscore] = sd > 0 ? (u[T - 1] - mean) / sd : Number.NaN;
-  let mLag = 0;
-  let mChange = 0;
-  for (let t = 1; t < T; t++) {
-    mLag += u[t - 1];
-    mChange += u[t] - u[t - 1];
-  }
-  mLag /= T - 1;
-  mChange /= T - 1;
-  let sLL = 0;
-  let sLC = 0;
-  for (let t = 1; t < T; t++) {
-    const l = u[t - 1] - mLag;
-    sLL += l * l;
-    sLC += l * (u[t] - u[t - 1] - mChange);
-  }
+/**
+ * Half-life (AR(1) with a constant) and the last row's z-score (sample standard deviation)
+ * of the spread u[0..T-1], from its plain sums (ResidualAdfWorkspace.sums). The spread is a
+ * least-squares residual with a constant, so its mean is zero up to rounding and the
+ * one-pass forms below lose no digits:
+ *   var = (sum u^2 - T m^2) / (T - 1),
+ *   lambda = [sum u_{t-1} Δu_t - (T-1) m_lag m_change] / [sum u_{t-1}^2 - (T-1) m_lag^2],
+ * with m_lag = (sum u - u_T) / (T - 1) and m_change = (u_T - u_1) / (T - 1) over t = 2..T.
+ */
+function spreadFacts(sums: { sum: number; sumSquares: number; levelTimesChange: number }, first: number, last: number, T: number, out: Float64Array, r: number): void {
+  const mean = sums.sum / T;
+  const sd = Math.sqrt(Math.max(sums.sumSquares - T * mean * mean, 0) / (T - 1));
+  out[r + FIELD.zscore] = sd > 0 ? (last - mean) / sd : Number.NaN;
+  const n = T - 1;
+  const mLag = (sums.sum - last) / n;
+  const mChange = (last - first) / n;
+  const sLL = sums.sumSquares - last * last - n * mLag * mLag;
+  const sLC = sums.levelTimesChange - n * mLag * mChange;
   const lambda = sLC / sLL;
   out[r + FIELD.speed] = lambda;
   if (Number.isFinite(lambda)) out[r + FIELD.halfLife] = halfLifeFromSpeed(lambda).halfLife ?? Number.NaN;

@@ -40,8 +40,15 @@ export class ResidualAdfWorkspace {
   private z = new Float64Array(0);
   private ssr = new Float64Array(0);
   private lastT = new Float64Array(0);
+  private levelSquares = 0; // sum of level^2 over rows P .. T-2
   private capacityRows = -1;
   private capacityLags = -1;
+
+  /**
+   * Plain sums of the last residual tested, from the pass that reads it: sum u_t, sum u_t^2,
+   * and sum over t < T-1 of u_t (u_{t+1} - u_t). Its mean, spread and AR(1) follow from these.
+   */
+  readonly sums = { sum: 0, sumSquares: 0, levelTimesChange: 0 };
 
   private reserve(T: number, pmax: number): void {
     if (T > this.capacityRows) {
@@ -72,21 +79,36 @@ export class ResidualAdfWorkspace {
     const P = rule === 'fixed' ? fixedLags : pmax;
     this.reserve(T, P);
     const { level, dx } = this;
+    let su = 0;
     let sl = 0;
-    for (let t = 0; t < T; t++) {
-      level[t] = u[t];
-      sl += u[t] * u[t];
-    }
     let sd = 0;
+    let sc = 0;
     for (let t = 0; t < T - 1; t++) {
-      const d = u[t + 1] - u[t];
+      const v = u[t];
+      const d = u[t + 1] - v;
+      level[t] = v;
       dx[t] = d;
+      su += v;
+      sl += v * v;
       sd += d * d;
+      sc += v * d;
     }
+    const last = u[T - 1];
+    level[T - 1] = last;
+    su += last;
+    sl += last * last;
+    this.sums.sum = su;
+    this.sums.sumSquares = sl;
+    this.sums.levelTimesChange = sc;
     const rmsLevel = Math.sqrt(sl / T);
     const rmsChange = Math.sqrt(sd / (T - 1));
-    if (rmsLevel > 0) for (let t = 0; t < T; t++) level[t] /= rmsLevel;
-    if (rmsChange > 0) for (let t = 0; t < T - 1; t++) dx[t] /= rmsChange;
+    const levelScale = rmsLevel > 0 ? rmsLevel : 1;
+    const changeScale = rmsChange > 0 ? rmsChange : 1;
+    for (let t = 0; t < T - 1; t++) {
+      level[t] /= levelScale;
+      dx[t] /= changeScale;
+    }
+    level[T - 1] /= levelScale;
     this.crossProducts(T, P);
     const lags = rule === 'fixed' ? fixedLags : this.chooseLags(T, P, rule, rmsChange > 0 ? rmsChange : 1);
     return { tau: this.tauAt(T, P, lags), lags, nobs: T - 1 - lags };
@@ -101,6 +123,9 @@ export class ResidualAdfWorkspace {
     // Row 0 (the response with lag j) and the level with lag j, four lags per pass over the
     // rows: each dx[t - j] is loaded once for both products. Every sum still runs over t in
     // order, so the numbers are those of one loop per lag.
+    let ll = 0;
+    for (let t = a; t <= b; t++) ll += level[t] * level[t];
+    this.levelSquares = ll;
     let j = 0;
     for (; j + 3 <= P; j += 4) {
       let r0 = 0, r1 = 0, r2 = 0, r3 = 0, l0 = 0, l1 = 0, l2 = 0, l3 = 0;
@@ -151,9 +176,7 @@ export class ResidualAdfWorkspace {
     const { level, gram, levelCross, xtx, xty } = this;
     const size = P + 1;
     const k = P + 1;
-    let ll = 0;
-    for (let t = P; t <= T - 2; t++) ll += level[t] * level[t];
-    xtx[0] = ll;
+    xtx[0] = this.levelSquares;
     xty[0] = levelCross[0];
     for (let j = 1; j <= P; j++) {
       xtx[j] = levelCross[j];
@@ -225,8 +248,7 @@ export class ResidualAdfWorkspace {
     const k = p + 1;
     // Rows P..T-2 from the search's cross products, then the rows p..P-1 it left out.
     let yty = gram[0];
-    let ll = 0;
-    for (let t = P; t <= T - 2; t++) ll += level[t] * level[t];
+    let ll = this.levelSquares;
     for (let i = 1; i <= p; i++) {
       xty[i - 1] = gram[i];
       xtx[(i - 1) * k + p] = levelCross[i];
