@@ -85,10 +85,11 @@ export function sampleOf(table: CsvTable, file: string, series: CleanSeries): Sa
  * `minimum` of them. `command` names the command in the messages.
  */
 export function seriesList(given: string | undefined, command: string, minimum = 2): string[] {
-  if (given === undefined) throw new MooringInputError(`${command} needs --series A,B[,...]: ${minimum} or more columns, separated by commas.`);
+  const count = minimum === 2 ? 'two' : String(minimum);
+  if (given === undefined) throw new MooringInputError(`${command} needs --series A,B[,...]: ${count} or more columns, separated by commas.`);
   const names = given.split(',').map((s) => s.trim());
   if (names.some((n) => n === '')) throw new MooringInputError(`--series has an empty name in '${given}': separate the names with single commas.`);
-  if (names.length < minimum) throw new MooringInputError(`${command} needs at least ${minimum} series in --series; got only '${names[0]}'.`);
+  if (names.length < minimum) throw new MooringInputError(`${command} needs at least ${count} series in --series; got only '${names[0]}'.`);
   const lower = names.map((n) => n.toLowerCase());
   const repeated = names.find((_, i) => lower.indexOf(lower[i]) !== i);
   if (repeated !== undefined) throw new MooringInputError(`'${repeated}' is named twice in --series: each series may appear once.`);

@@ -36,7 +36,7 @@ describe('mooring johansen', () => {
     });
   }
   it('refuses one series and an unknown case word in one line', () => {
-    expectOneLineRefusal(run('johansen', 'd.csv', '--series', 'lrm'), /at least 2 series/);
-    expectOneLineRefusal(run('johansen', 'd.csv', '--series', 'lrm,lry', '--case', 'drift'), /--case must be one of none, restricted-constant/);
+    expect(expectOneLineRefusal(run('johansen', 'd.csv', '--series', 'lrm'))).toMatch(/at least two series/);
+    expect(expectOneLineRefusal(run('johansen', 'd.csv', '--series', 'lrm,lry', '--case', 'drift'))).toMatch(/--case must be one of none, restricted-constant/);
   });
 });
