@@ -5,8 +5,8 @@
  * writes only when nothing else is in the way or the user said yes, and checks again just
  * before writing, so a cell typed meanwhile is never overwritten unseen.
  */
-import { overlaps, parseCell, parseRange, type CellRange } from '../workbook/a1-address';
-import type { BlockToWrite, ChartToAdd, OccupiedCell, WorkbookPort, WriteOutcome } from '../workbook/port';
+import { overlaps, parseCell, parseRange, rangeSize, type CellRange } from '../workbook/a1-address';
+import type { BlockCell, BlockToWrite, ChartToAdd, FoundBlock, OccupiedCell, WorkbookPort, WriteOutcome } from '../workbook/port';
 import { decodeBlockNote } from './block-note';
 
 /** What a write would do, for the pane to show before asking. */
@@ -38,6 +38,10 @@ export interface PlannedWriteOutcome extends WriteOutcome {
 async function earlierBlock(port: WorkbookPort, block: BlockToWrite): Promise<CellRange[] | null> {
   const found = await port.findBlock(block.name);
   if (!found || found.sheet !== block.sheet) return null;
+  return ownRanges(found, block);
+}
+
+function ownRanges(found: FoundBlock, block: BlockToWrite): CellRange[] {
   const note = decodeBlockNote(found.note ?? null);
   const newBottom = Math.max(-1, ...(block.reserved ?? []).map((a) => parseRange(a).bottom));
   const spills = (note?.reserved ?? []).map((a) => {
@@ -56,11 +60,29 @@ function outside(cells: OccupiedCell[], own: CellRange[] | null): OccupiedCell[]
   });
 }
 
-/** What writing the block would replace. Writes nothing. */
+/**
+ * The block padded with empty cells to the size of the earlier block it replaces in the same
+ * place, so one write also clears the earlier block's rows and columns that the new one lacks.
+ */
+function padToEarlier(block: BlockToWrite, found: FoundBlock | null): BlockToWrite {
+  if (!found || found.sheet !== block.sheet) return block;
+  const old = parseRange(found.address);
+  const at = parseCell(block.anchor);
+  if (old.top !== at.row || old.left !== at.col) return block;
+  const { rows, cols } = rangeSize(old);
+  const width = Math.max(cols, ...block.cells.map((r) => r.length));
+  const cells: BlockCell[][] = block.cells.map((r) => [...r, ...Array.from({ length: width - r.length }, () => ({}))]);
+  while (cells.length < rows) cells.push(Array.from({ length: width }, () => ({})));
+  return { ...block, cells };
+}
+
+/** What writing the block would replace. Writes nothing. The plan's block is padded over an earlier block of the same name in the same place. */
 export async function planBlockWrite(port: WorkbookPort, block: BlockToWrite, chart: ChartToAdd | null = null): Promise<BlockPlan> {
-  const own = await earlierBlock(port, block);
-  const occupied = outside(await port.occupiedCells(block), own);
-  return { block, chart, occupied, replacesEarlierBlock: own !== null, safe: occupied.length === 0 };
+  const found = await port.findBlock(block.name);
+  const padded = padToEarlier(block, found);
+  const own = found && found.sheet === block.sheet ? ownRanges(found, padded) : null;
+  const occupied = outside(await port.occupiedCells(padded), own);
+  return { block: padded, chart, occupied, replacesEarlierBlock: own !== null, safe: occupied.length === 0 };
 }
 
 /** Writes a plan: at once when safe, else only with `confirmed` (the user's explicit yes to the cells listed). */

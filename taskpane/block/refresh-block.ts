@@ -1,15 +1,15 @@
 /**
  * Refreshing and removing a written block by its workbook-level name. Refresh re-reads the
  * source (the table at its current size, or the recorded range), runs the diagnostic again,
- * rebuilds the block in the same place and writes it over the old one in one write, padded
- * to the old block's size so no stale row is left below; the fixed numbers (a lead-lag test
+ * rebuilds the block in the same place and writes it over the old one in one write (the plan
+ * pads it to the old block's size, so no stale row is left below); the fixed numbers (a lead-lag test
  * with no cell function), the warnings and the chart's extent are then current again. It
  * stops, writing nothing, when the new block would reach cells that are not its own.
  */
 import { MooringInputError } from '../../addin/errors';
 import type { DiagnosticOptions } from '../../addin/report/pairwise-diagnostic';
-import { cellAddress, parseRange, rangeSize } from '../workbook/a1-address';
-import type { BlockCell, DataRegion, WorkbookPort } from '../workbook/port';
+import { cellAddress, parseRange } from '../workbook/a1-address';
+import type { DataRegion, WorkbookPort } from '../workbook/port';
 import { decodeBlockNote, type BlockNote } from './block-note';
 import { buildPairBlock } from './pair-block';
 import { planBlockWrite, writePlannedBlock, type PlannedWriteOutcome } from './plan-block-write';
@@ -32,11 +32,7 @@ export async function refreshBlock(port: WorkbookPort, name: string, options: Di
   const report = regionReport(region, [note.a, note.b], options);
   const old = parseRange(found.address);
   const { block, chart } = buildPairBlock(report, { a: note.a, b: note.b }, region, { sheet: found.sheet, anchor: cellAddress({ row: old.top, col: old.left }) });
-  const size = rangeSize(old);
-  const width = Math.max(size.cols, ...block.cells.map((r) => r.length));
-  const cells: BlockCell[][] = block.cells.map((r) => [...r, ...Array.from({ length: width - r.length }, () => ({}))]);
-  while (cells.length < size.rows) cells.push(Array.from({ length: width }, () => ({})));
-  const plan = await planBlockWrite(port, { ...block, cells }, chart);
+  const plan = await planBlockWrite(port, block, chart);
   if (!plan.safe) return writePlannedBlock(port, plan, false);
   return writePlannedBlock(port, plan, true);
 }

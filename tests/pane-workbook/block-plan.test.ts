@@ -7,6 +7,8 @@
 import { describe, expect, it } from 'vitest';
 import { planBlockWrite, writePlannedBlock } from '../../taskpane/block/plan-block-write';
 import { removeBlock } from '../../taskpane/block/refresh-block';
+import { buildPairBlock } from '../../taskpane/block/pair-block';
+import { regionReport } from '../../taskpane/block/region-report';
 import { cellsOf, parseRange } from '../../taskpane/workbook/a1-address';
 import { demoBlock } from './demo-block';
 
@@ -66,6 +68,38 @@ describe('writing over occupied cells', () => {
     const again = await planBlockWrite(wb, built.block, built.chart);
     expect(again.replacesEarlierBlock).toBe(true);
     expect(again.safe).toBe(true);
+  });
+});
+
+describe('replacing an earlier block', () => {
+  it('clears the rows of a longer earlier block in the same write', async () => {
+    const { wb, built } = await demoBlock();
+    await writePlannedBlock(wb, await planBlockWrite(wb, built.block, built.chart));
+    const shorter = { ...built.block, cells: built.block.cells.slice(0, 10), reserved: [] };
+    const plan = await planBlockWrite(wb, shorter);
+    expect(plan.safe).toBe(true);
+    expect(plan.block.cells).toHaveLength(built.block.cells.length);
+    expect((await writePlannedBlock(wb, plan)).ok).toBe(true);
+    expect(wb.shownValues('Prices', `I11:L${built.block.cells.length}`).flat().every((v) => v === null)).toBe(true);
+    expect(wb.shownValue('Prices', 'I7')).toBe(built.block.cells[6][0].value);
+  });
+});
+
+describe('bad input', () => {
+  it('names the sheet row of a text cell in the prices and what would work', async () => {
+    const { wb } = await demoBlock();
+    wb.setValues('Prices', 'B37', [['n/a']]);
+    const region = await wb.readTable('QuennelPrices');
+    expect(() => regionReport(region, ['GateGasoil', 'DockDiesel'])).toThrow(/Prices row 37/);
+  });
+
+  it('refuses a column the data do not have, a date column and a bad anchor with plain messages', async () => {
+    const { wb, region, report } = await demoBlock();
+    expect(() => regionReport(region, ['GateGasoil', 'Crude'])).toThrow(/no column headed 'Crude'.*pick one of Date, GateGasoil/);
+    expect(() => regionReport(region, ['Date', 'GateGasoil'])).toThrow(/'Date' is the date column/);
+    expect(() => buildPairBlock(report, { a: 'GateGasoil', b: 'HeavyFuel' }, region)).toThrow(/holds no pair of GateGasoil and HeavyFuel/);
+    await expect(wb.writeBlock({ sheet: 'Prices', anchor: 'not a cell', cells: [[{ value: 1 }]], name: 'x' })).rejects.toThrow(/'not a cell' is not a cell address such as J2/);
+    await expect(wb.writeBlock({ sheet: 'Nowhere', anchor: 'A1', cells: [[{ value: 1 }]], name: 'x' })).rejects.toThrow(/no sheet named 'Nowhere': pick one of Prices/);
   });
 });
 
