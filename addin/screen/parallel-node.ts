@@ -6,8 +6,12 @@
  *
  * The call is synchronous: the main thread works through chunks itself and then waits on the
  * queue's finished count (Atomics.wait), so the command line keeps its synchronous commands.
- * If a worker cannot start, the main thread simply takes its chunks; if one takes a chunk
- * and falls silent for `patienceMs`, the main thread runs that chunk again.
+ * If a worker cannot start, the main thread simply takes its chunks; a chunk a worker still
+ * holds when the main thread is done is run again by the main thread after a short wait (see
+ * below), and any chunk is after `patienceMs` without progress.
+ *
+ * Worker is imported from 'worker_threads', not 'node:worker_threads': webpack 5.112 mangles
+ * the worker chunk's constructor call for the prefixed name.
  */
 import { availableParallelism } from 'node:os';
 import { MessageChannel, Worker, receiveMessageOnPort, type MessagePort } from 'worker_threads';
@@ -35,8 +39,10 @@ export interface ThreadOptions {
 export interface ThreadReport {
   threads: number;
   workersStarted: number;
-  /** Chunks the main thread ran. */
+  /** Chunks the main thread ran, those it ran again included. */
   chunksOnMainThread: number;
+  /** Chunks the main thread ran again because a worker still held them. */
+  chunksRetaken: number;
   chunks: number;
   /** Why fewer threads helped than were asked for, if so. */
   note?: string;
@@ -94,32 +100,47 @@ export function screenPairsInThreads(series: readonly NamedSeries[], options: Sc
       errors.push(e instanceof Error ? e.message : String(e));
     }
   }
-  let chunksOnMainThread = threading.mainThreadJoins === false && workers.length > 0 ? 0 : drainChunks(job);
+  const joins = threading.mainThreadJoins !== false || workers.length === 0;
+  const patience = threading.patienceMs ?? 60_000;
+  let chunksOnMainThread = 0;
+  let chunksRetaken = 0;
+  let straggler = patience;
+  if (joins) {
+    const started = performance.now();
+    chunksOnMainThread = drainChunks(job);
+    // A worker's first chunks run before its compiler has warmed up, so the last chunk it holds
+    // can take far longer than on the warm main thread. Rather than wait for it, the main thread
+    // runs such a chunk again once twice its own time per chunk has passed without progress
+    // (the numbers are the same, whichever thread writes them).
+    if (chunksOnMainThread > 0) straggler = Math.min(patience, Math.max(2, (2 * (performance.now() - started)) / chunksOnMainThread));
+  }
   const states = new Int32Array(job.states);
   const count = job.chunks.length;
-  const patience = threading.patienceMs ?? 60_000;
   let done = finishedChunks(job);
-  let since = Date.now();
+  let since = performance.now();
   while (done < count) {
-    Atomics.wait(states, count, done, 50);
+    Atomics.wait(states, count, done, Math.min(50, straggler));
     const failed = readErrors(ports, errors);
     const now = finishedChunks(job);
     if (now !== done && !failed) {
       done = now;
-      since = Date.now();
-    } else if (failed || Date.now() - since > patience) {
-      if (!failed) errors.push(`a worker thread left a chunk unfinished for ${patience} ms`);
-      chunksOnMainThread += drainChunks(job, true);
+      since = performance.now();
+    } else if (failed || performance.now() - since > straggler) {
+      if (!failed && straggler === patience) errors.push(`a worker thread left a chunk unfinished for ${patience} ms`);
+      const again = drainChunks(job, true);
+      chunksOnMainThread += again;
+      chunksRetaken += again;
       done = finishedChunks(job);
+      since = performance.now();
     }
   }
   readErrors(ports, errors);
   for (const port of ports) port.close();
   for (const worker of workers) void worker.terminate();
   const result = finishScreen(universe, settings, new Float64Array(job.results));
-  const report: ThreadReport = { threads, workersStarted: workers.length, chunksOnMainThread, chunks: count };
+  const report: ThreadReport = { threads, workersStarted: workers.length, chunksOnMainThread, chunksRetaken, chunks: count };
   if (threads < requested) report.note = `${requested} threads were asked for; ${total} pairs of ${universe.rows} rows keep ${threads} busy.`;
   if (errors.length > 0) report.note = `Some work moved to the main thread: ${errors.join('; ')}.`;
-  else if (workers.length > 0 && chunksOnMainThread === count) report.note = 'The main thread had run every chunk before the worker threads were ready.';
+  else if (workers.length > 0 && chunksOnMainThread - chunksRetaken === count) report.note = 'The main thread had run every chunk before the worker threads were ready.';
   return { result, report };
 }
