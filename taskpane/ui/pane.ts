@@ -2,7 +2,7 @@
  * The guided pane: holds the walk's state and draws the current step from its view model.
  * It reaches the workbook only through the port, runs the engine only through the runner
  * (a Web Worker), and re-renders after every change, putting keyboard focus back on the
- * control that had it. Alt+Right and Alt+Left move between steps from anywhere in the pane.
+ * control that had it. Alt+Right and Alt+Left move between steps from anywhere on the page.
  */
 import type { DiagnosticReport } from '../../addin/report/report-types';
 import type { DataRegion, WorkbookPort } from '../workbook/port';
@@ -42,6 +42,8 @@ export interface PaneState {
   report: DiagnosticReport | null;
   /** Data rows of the region when the report was made. */
   reportRows: number;
+  /** What the report covers, in words ("GateGasoil, DockDiesel on Prices!A1:G781"). */
+  reportOf: string | null;
   running: { started: number; size: { series: number; pairs: number; rows: number } | null; cancel: () => void } | null;
   runProblem: string | null;
   notice: string | null;
@@ -59,12 +61,17 @@ export interface PaneHandle {
   destroy(): void;
 }
 
+/** What a prepared input covers, in words, to tell whether the report in hand is of the data on screen. */
+export function coverage(prepared: PreparedData): string {
+  return `${prepared.names.join(', ')} on ${prepared.input.source ?? 'the sheet'}`;
+}
+
 /** Mounts the pane into `root`. */
 export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
   const s: PaneState = {
     step: 'data', region: null, regionProblem: null,
     choice: { columns: [], log: true, skipGaps: true, from: null, to: null, alpha: 0.05 },
-    prepared: null, prepareProblem: null, stage: { ...DEFAULT_CHOICES }, report: null, reportRows: 0,
+    prepared: null, prepareProblem: null, stage: { ...DEFAULT_CHOICES }, report: null, reportRows: 0, reportOf: null,
     running: null, runProblem: null, notice: null, pairIndex: null, write: initialWriteState(), written: null,
   };
   let charts: DrawnChart[] = [];
@@ -137,6 +144,7 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
     });
     s.running = { started: Date.now(), size: null, cancel: handle.cancel };
     s.runProblem = null;
+    if (!notice) s.notice = null;
     ticker = setInterval(() => {
       const text = root.querySelector('[data-role="progress-text"]');
       if (text && s.running) text.textContent = text.textContent?.replace(/\d+ s so far/, `${Math.floor((Date.now() - s.running.started) / 1000)} s so far`) ?? '';
@@ -147,13 +155,14 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
       ticker = null;
       s.running = null;
       if (outcome.kind === 'cancelled') {
-        s.runProblem = 'The diagnosis was cancelled: nothing changed. Run it again when you are ready.';
+        s.notice = 'The diagnosis was cancelled: nothing changed. Run it again when you are ready.';
       } else if (outcome.kind === 'failed') {
         s.runProblem = outcome.message;
       } else {
         const before = s.reportRows;
         s.report = outcome.report;
         s.reportRows = regionRows;
+        s.reportOf = coverage(prepared);
         if (s.pairIndex !== null && s.pairIndex >= outcome.report.pairs.length) s.pairIndex = null;
         if (notice) s.notice = await notice(before);
         if (then) s.step = then;
@@ -192,6 +201,7 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
   };
 
   const detect = async (): Promise<void> => {
+    s.notice = null;
     try {
       const region = await deps.port.regionAroundSelection();
       s.region = region;
@@ -214,16 +224,20 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
     const i = stepIndex(s.step) + (event.key === 'ArrowRight' ? 1 : -1);
     if (i < 0 || i >= STEPS.length) return;
     event.preventDefault();
+    event.stopPropagation();
     open(STEPS[i].id);
   };
-  root.addEventListener('keydown', onKey);
+  // On the document, in the capture phase: focus may sit on the page itself after a redraw, and a
+  // radio group or text field would otherwise take Alt+arrow as its own arrow key.
+  const doc = root.ownerDocument;
+  doc.addEventListener('keydown', onKey, true);
   render();
   void detect();
   return {
     state: () => s,
     detect,
     destroy() {
-      root.removeEventListener('keydown', onKey);
+      doc.removeEventListener('keydown', onKey, true);
       unwatch?.();
       charts.forEach((c) => c.destroy());
       if (ticker) clearInterval(ticker);

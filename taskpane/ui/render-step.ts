@@ -3,7 +3,7 @@
  * hands it to the step's renderer with the actions its controls call.
  */
 import { describeColumns } from './data/columns';
-import type { PaneState } from './pane';
+import { coverage, type PaneState } from './pane';
 import type { PaneActions } from './pane-actions';
 import { renderDataStep } from './render/data-step';
 import { renderLeaderStep } from './render/leader-step';
@@ -26,7 +26,10 @@ import { writeStepView } from './views/write-view';
 export function renderStep(s: PaneState, actions: PaneActions): HTMLElement {
   if (s.step === 'data') {
     const view = s.region ? dataStepView(s.region, describeColumns(s.region), s.choice.columns, s.prepared, s.prepareProblem) : null;
-    return renderDataStep(view, s.choice, s.region ? s.prepareProblem : s.regionProblem, {
+    const stale = s.report && s.reportOf && (!s.prepared || coverage(s.prepared) !== s.reportOf)
+      ? `Steps 2 to 6 still show the last run (${s.reportOf}) until you run the diagnosis again.`
+      : null;
+    return renderDataStep(view, s.choice, s.region ? s.prepareProblem : s.regionProblem, stale, {
       detect: () => actions.detect(),
       change: (patch) => actions.changeData(patch),
       run: () => actions.runFromData(),

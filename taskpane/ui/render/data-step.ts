@@ -32,7 +32,7 @@ function textField(label: string, value: string, placeholder: string, role: stri
 }
 
 /** The step's content. */
-export function renderDataStep(view: DataStepView | null, choice: DataChoice, problem: string | null, handlers: DataStepHandlers, busy: boolean): HTMLElement {
+export function renderDataStep(view: DataStepView | null, choice: DataChoice, problem: string | null, stale: string | null, handlers: DataStepHandlers, busy: boolean): HTMLElement {
   const detect = el('fluent-button', { appearance: 'secondary', 'data-role': 'detect' }, 'Use the data around my selection');
   detect.addEventListener('click', () => handlers.detect());
   if (!view) {
@@ -52,7 +52,7 @@ export function renderDataStep(view: DataStepView | null, choice: DataChoice, pr
   }, { 'data-column': c.header }));
 
   const levelId = nextId('level');
-  const level = el('fluent-radio-group', { orientation: 'horizontal', name: 'alpha', value: String(choice.alpha), 'aria-labelledby': levelId, 'data-choice': 'alpha' });
+  const level = el('fluent-radio-group', { orientation: 'vertical', name: 'alpha', value: String(choice.alpha), 'aria-labelledby': levelId, 'data-choice': 'alpha' });
   for (const l of LEVELS) {
     const id = nextId('alpha');
     level.appendChild(el('fluent-field', { 'label-position': 'after' }, el('label', { slot: 'label', for: id }, l.label), el('fluent-radio', { slot: 'input', id, value: l.value, checked: Number(l.value) === choice.alpha })));
@@ -66,6 +66,7 @@ export function renderDataStep(view: DataStepView | null, choice: DataChoice, pr
   run.addEventListener('click', () => handlers.run());
 
   return el('div', { class: 'step-body' },
+    stale ? el('p', { class: 'flag', 'data-role': 'stale' }, stale) : null,
     el('p', { class: 'found', 'data-role': 'found' }, view.found),
     el('p', { class: 'why' }, view.dateColumn),
     detect,

@@ -51,7 +51,7 @@ export function dataStepView(region: DataRegion, columns: readonly ColumnInfo[],
   if (prepared) {
     const parts = [`${prepared.usedRows} of ${prepared.regionRows} rows used, ${prepared.firstUsed} to ${prepared.lastUsed}.`];
     const gaps = prepared.regionRows - prepared.cleanRows;
-    if (gaps > 0) parts.push(`${gaps} row${gaps === 1 ? '' : 's'} left out as gaps or blanks at the ends.`);
+    if (gaps > 0) parts.push(`${gaps} row${gaps === 1 ? '' : 's'} left out (a gap in a series, or blank at the ends).`);
     if (prepared.outsideWindow > 0) parts.push(`${prepared.outsideWindow} row${prepared.outsideWindow === 1 ? '' : 's'} outside the sample window.`);
     if (prepared.dropped.length > 0) parts.push(`${prepared.dropped.length} cell${prepared.dropped.length === 1 ? '' : 's'} dropped (listed below).`);
     rowsSentence = parts.join(' ');
