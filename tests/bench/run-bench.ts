@@ -15,6 +15,8 @@ import { benchEngleGranger, benchPair } from '../../addin/bench/cointegration-be
 import { benchBlock, benchJohansen } from '../../addin/bench/johansen-bench';
 import { benchCausality } from '../../addin/bench/causality-bench';
 import { benchBreaks } from '../../addin/bench/breaks-bench';
+import { benchScreen } from '../../addin/bench/screen-bench';
+import { benchFunctions } from './functions-bench';
 import type { Timing } from '../../addin/bench/timing';
 
 interface ReferenceTimes {
@@ -45,6 +47,8 @@ function main(): void {
   const johansen = benchJohansen();
   const causality = benchCausality();
   const breaks = benchBreaks();
+  const functions = benchFunctions();
+  const screen = benchScreen();
   const walk = Array.from(randomWalk(new SeededRandom(11), 10_000, { start: 100 }));
   const pair = benchPair();
   const reference = referenceTimes({
@@ -65,7 +69,7 @@ function main(): void {
     const ours = johansen[0].medianMs;
     comparisons.johansen6x2500 = { oursMs: ours, referenceMs: round(reference.cointJohansenMs), ratio: round(ours / reference.cointJohansenMs) };
   }
-  const all: Timing[] = [...unitRoot, ...cleaner, ...cointegration, ...johansen, ...causality, ...breaks];
+  const all: Timing[] = [...unitRoot, ...cleaner, ...cointegration, ...johansen, ...causality, ...breaks, ...functions, ...screen];
   const report = {
     machine: { node: process.version, cpus: cpus().length },
     benchmarks: all,
