@@ -278,7 +278,8 @@ describe('webpack.config.js', () => {
     const addin = configs.find((c) => c.name === 'addin')!;
     expect(addin.output.path).toBe(join(ROOT, 'dist'));
     expect(addin.output.filename).toBe('[name].js');
-    expect(Object.keys(addin.entry).map((name) => `${name}.js`)).toEqual([ADDIN_FILES.functionsScript, 'taskpane.js']);
+    // The manifest's bundles, plus the preview page's (npm run preview; never named by the manifest).
+    expect(Object.keys(addin.entry).map((name) => `${name}.js`)).toEqual([ADDIN_FILES.functionsScript, 'taskpane.js', 'preview.js']);
     expect(addin.entry.functions).toEqual(FUNCTION_SOURCES);
     expect(FUNCTION_SOURCES).toContain(join(ROOT, 'functions', 'functions.ts'));
 
