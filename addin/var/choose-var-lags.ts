@@ -8,15 +8,21 @@
  * The smallest value wins; a tie goes to the smaller p. These are the reference library's
  * conventions, so the orders and values compare exactly.
  *
- * Speed: the designs are nested (order p uses the first 1 + Kp columns of order M's design), so
- * one Householder QR of the largest design gives every order's residual cross products:
- * with z_k = Q'y_k, (E'E)_ab for the first m columns is the sum of z_a[i] z_b[i] over i >= m
- * (the same identity as HouseholderQr.nestedSsr, per pair of equations).
+ * Speed: the lag columns are shifted copies of the K series, so the Gram matrix of the largest
+ * design is built in O(n K^2 M) (var-lag-gram.ts) and one Cholesky of it gives every order's
+ * residual cross products (nested-var-residuals.ts); when that path is not numerically safe
+ * (near-collinear lags, a near-exact fit), one Householder QR of the largest design gives them
+ * instead (var-lag-cross-products-qr.ts). The Gram path conditions the data (mean-free, unit
+ * scale) and adds 2 sum ln(scale_k) back to ln|Sigma|, so both paths return the same values:
+ * on price-like random walks they differ by about 1e-12 in ln|Sigma|, and the Gram path steps
+ * aside when its error estimate passes 5e-10.
  */
 import { CholeskyDecomposition, Matrix } from 'ml-matrix';
 import { MooringInputError } from '../errors';
-import { HouseholderQr, assertFullRank } from '../linalg/householder-qr';
-import { checkedBlock, checkedLagCount, varDesign } from './var-design';
+import { nestedVarResiduals } from './nested-var-residuals';
+import { checkedBlock, checkedLagCount } from './var-design';
+import { varLagCrossProductsByQr } from './var-lag-cross-products-qr';
+import { varLagGram } from './var-lag-gram';
 
 /** The four criteria (and ln|Sigma|) of one VAR order. */
 export interface VarLagRow {
@@ -72,30 +78,25 @@ function logDeterminant(sigma: number[][]): number {
   return s;
 }
 
-/** E'E of the VAR(p) on the last T - maxLags rows, for p = 0..maxLags, from one QR. */
-function nestedCrossProducts(series: readonly Float64Array[], maxLags: number, names: readonly string[]): number[][][] {
-  const K = series.length;
-  const design = varDesign(series, maxLags, 'const', maxLags, names);
-  const qr = new HouseholderQr(design.columns, design.nobs);
-  assertFullRank(qr, design.columnNames);
-  const z = design.responses.map((y) => qr.qtY(y));
-  const n = design.nobs;
-  const out: number[][][] = [];
-  for (let p = 0; p <= maxLags; p++) {
-    const m = 1 + K * p;
-    const e = Array.from({ length: K }, () => new Array<number>(K).fill(0));
-    for (let a = 0; a < K; a++) {
-      for (let b = a; b < K; b++) {
-        const za = z[a];
-        const zb = z[b];
-        let s = 0;
-        for (let i = m; i < n; i++) s += za[i] * zb[i];
-        e[a][b] = e[b][a] = s;
-      }
-    }
-    out.push(e);
+/** How the residual cross products were found: the Gram path, or the QR path ("auto" tries the Gram path first). */
+export type VarLagMethod = 'auto' | 'qr';
+
+/**
+ * E'E of every order (row-major K x K) and the term that returns ln|E'E| to the data's units.
+ * "auto" uses the Gram path unless it declines, then the QR path; "qr" goes straight to QR.
+ */
+function residualCrossProducts(
+  series: readonly Float64Array[],
+  maxLags: number,
+  names: readonly string[],
+  method: VarLagMethod,
+): { crossProducts: Float64Array[]; logScale: number } {
+  if (method === 'auto') {
+    const gram = varLagGram(series, maxLags);
+    const crossProducts = nestedVarResiduals(gram, series.length, maxLags);
+    if (crossProducts !== null) return { crossProducts, logScale: gram.logScale };
   }
-  return out;
+  return { crossProducts: varLagCrossProductsByQr(series, maxLags, names), logScale: 0 };
 }
 
 function argminFirst(values: readonly number[]): number {
@@ -104,8 +105,14 @@ function argminFirst(values: readonly number[]): number {
   return best;
 }
 
-/** Chooses the VAR order of the block (one array per series) by AIC, BIC, HQ and FPE. */
-export function chooseVarLags(block: readonly ArrayLike<number>[], options: { maxLags?: number; names?: readonly string[] } = {}): VarLagChoice {
+/**
+ * Chooses the VAR order of the block (one array per series) by AIC, BIC, HQ and FPE.
+ * `method: 'qr'` skips the Gram path (for checks; the answers agree to rounding).
+ */
+export function chooseVarLags(
+  block: readonly ArrayLike<number>[],
+  options: { maxLags?: number; names?: readonly string[]; method?: VarLagMethod } = {},
+): VarLagChoice {
   const series = checkedBlock(block, options.names);
   const K = series.length;
   const T = series[0].length;
@@ -132,11 +139,12 @@ export function chooseVarLags(block: readonly ArrayLike<number>[], options: { ma
 
   const n = T - maxLags;
   const names = series.map((_, k) => options.names?.[k] ?? `series ${k + 1}`);
-  const crossProducts = nestedCrossProducts(series, maxLags, names);
+  const { crossProducts, logScale } = residualCrossProducts(series, maxLags, names, options.method ?? 'auto');
   const table: VarLagRow[] = [];
   for (let p = 0; p <= maxLags; p++) {
-    const sigma = crossProducts[p].map((row) => row.map((v) => v / n));
-    const logDetSigma = logDeterminant(sigma);
+    const e = crossProducts[p];
+    const sigma = Array.from({ length: K }, (_, a) => Array.from({ length: K }, (_, b) => e[a * K + b] / n));
+    const logDetSigma = logDeterminant(sigma) + logScale;
     const free = p * K * K + K;
     const coefficientsPerEquation = K * p + 1;
     table.push({

@@ -1,13 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import { chooseVarLags, defaultVarMaxLags, largestVarLags } from '../../addin/var/choose-var-lags';
 import { MooringInputError } from '../../addin/errors';
+import { nestedVarResiduals } from '../../addin/var/nested-var-residuals';
+import { checkedBlock } from '../../addin/var/var-design';
+import { varLagGram } from '../../addin/var/var-lag-gram';
 import { fixtureSeries, loadFixture, type Fixtures } from '../reference/fixtures';
 
 /**
  * Reference: statsmodels 0.13.5 (Debian python3-statsmodels) VAR.select_order(maxlags, trend="c"),
  * fixtures made by tests/reference/make_fixtures.py: a seeded stationary VAR(2) pair, the two US
  * macro growth rates (macrodata) and the four Danish money-demand series in levels.
- * Chosen orders exactly; every criterion value for p = 0..maxLags to 1e-8 relative.
+ * Chosen orders exactly; every criterion value for p = 0..maxLags to 1e-8 relative, by both
+ * routes to the residual cross products (the Gram path, which these systems take, and QR).
  */
 const fixture = loadFixture<Fixtures['var-select']>('var-select');
 
@@ -20,20 +24,26 @@ describe('VAR lag order against the reference library (statsmodels select_order)
     expect(fixture.cases.length).toBe(3);
   });
   for (const c of fixture.cases) {
-    it(`${c.series.join(', ')}, max ${c.maxLags}: orders aic ${c.selected.aic}, bic ${c.selected.bic}, hq ${c.selected.hq}, fpe ${c.selected.fpe}`, () => {
-      const block = c.series.map((id) => fixtureSeries(fixture, id));
-      const r = chooseVarLags(block, { maxLags: c.maxLags, names: c.series });
-      expect(r.nobs).toBe(c.nobs);
-      expect({ aic: r.aic, bic: r.bic, hq: r.hq, fpe: r.fpe }).toEqual(c.selected);
-      expect(r.table.length).toBe(c.maxLags + 1);
-      r.table.forEach((row, p) => {
-        expect(row.lags).toBe(p);
-        expect(relative(row.aic, c.ics.aic[p])).toBeLessThan(1e-8);
-        expect(relative(row.bic, c.ics.bic[p])).toBeLessThan(1e-8);
-        expect(relative(row.hq, c.ics.hqic[p])).toBeLessThan(1e-8);
-        expect(relative(row.fpe, c.ics.fpe[p])).toBeLessThan(1e-8);
+    for (const method of ['auto', 'qr'] as const) {
+      it(`${c.series.join(', ')}, max ${c.maxLags}, ${method === 'auto' ? 'Gram path' : 'QR path'}: orders aic ${c.selected.aic}, bic ${c.selected.bic}, hq ${c.selected.hq}, fpe ${c.selected.fpe}`, () => {
+        const block = c.series.map((id) => fixtureSeries(fixture, id));
+        if (method === 'auto') {
+          const series = checkedBlock(block);
+          expect(nestedVarResiduals(varLagGram(series, c.maxLags), series.length, c.maxLags)).not.toBeNull();
+        }
+        const r = chooseVarLags(block, { maxLags: c.maxLags, names: c.series, method });
+        expect(r.nobs).toBe(c.nobs);
+        expect({ aic: r.aic, bic: r.bic, hq: r.hq, fpe: r.fpe }).toEqual(c.selected);
+        expect(r.table.length).toBe(c.maxLags + 1);
+        r.table.forEach((row, p) => {
+          expect(row.lags).toBe(p);
+          expect(relative(row.aic, c.ics.aic[p])).toBeLessThan(1e-8);
+          expect(relative(row.bic, c.ics.bic[p])).toBeLessThan(1e-8);
+          expect(relative(row.hq, c.ics.hqic[p])).toBeLessThan(1e-8);
+          expect(relative(row.fpe, c.ics.fpe[p])).toBeLessThan(1e-8);
+        });
       });
-    });
+    }
   }
 });
 
