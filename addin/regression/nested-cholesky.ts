@@ -15,21 +15,26 @@ export interface NestedFits {
   usable: number;
 }
 
-export function nestedFitsFromGram(xtx: Float64Array, xty: Float64Array, yty: number, k: number, n: number): NestedFits {
-  const L = new Float64Array(k * k);
-  const z = new Float64Array(k);
-  const ssr = new Float64Array(k + 1).fill(Number.NaN);
-  const lastT = new Float64Array(k + 1).fill(Number.NaN);
+/** Work buffers for nestedFitsInto, sized for k columns: factor k*k, z k, ssr and lastT k + 1. */
+export interface NestedFitBuffers {
+  factor: Float64Array;
+  z: Float64Array;
+  ssr: Float64Array;
+  lastT: Float64Array;
+}
+
+/**
+ * The nested fits written into caller-owned buffers (no allocation, for loops over many
+ * designs); returns how many columns could be used before the factorisation broke down.
+ */
+export function nestedFitsInto(xtx: Float64Array, xty: Float64Array, yty: number, k: number, n: number, buffers: NestedFitBuffers): number {
+  const { factor: L, z, ssr, lastT } = buffers;
   ssr[0] = yty;
-  let usable = k;
   let explained = 0;
   for (let j = 0; j < k; j++) {
     let d = xtx[j * k + j];
     for (let m = 0; m < j; m++) d -= L[j * k + m] * L[j * k + m];
-    if (!(d > 1e-13 * Math.max(xtx[j * k + j], 1e-300))) {
-      usable = j;
-      break;
-    }
+    if (!(d > 1e-13 * Math.max(xtx[j * k + j], 1e-300))) return j;
     const ljj = Math.sqrt(d);
     L[j * k + j] = ljj;
     for (let i = j + 1; i < k; i++) {
@@ -46,5 +51,16 @@ export function nestedFitsFromGram(xtx: Float64Array, xty: Float64Array, yty: nu
     const dof = n - (j + 1);
     lastT[j + 1] = dof > 0 && rss > 0 ? Math.abs(z[j]) / Math.sqrt(rss / dof) : Number.POSITIVE_INFINITY;
   }
-  return { ssr, lastT, usable };
+  return k;
+}
+
+export function nestedFitsFromGram(xtx: Float64Array, xty: Float64Array, yty: number, k: number, n: number): NestedFits {
+  const buffers: NestedFitBuffers = {
+    factor: new Float64Array(k * k),
+    z: new Float64Array(k),
+    ssr: new Float64Array(k + 1).fill(Number.NaN),
+    lastT: new Float64Array(k + 1).fill(Number.NaN),
+  };
+  const usable = nestedFitsInto(xtx, xty, yty, k, n, buffers);
+  return { ssr: buffers.ssr, lastT: buffers.lastT, usable };
 }

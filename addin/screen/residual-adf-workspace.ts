@@ -17,6 +17,7 @@
  * that leaves t-ratios and the lag choice unchanged and keeps the cross products well sized.
  */
 import { gaussianLogLikelihood } from '../regression/least-squares';
+import { nestedFitsInto } from '../regression/nested-cholesky';
 import { TSTAT_STOP, type LagRule } from '../unitroot/adf-lag-search';
 
 /** What the residual ADF reports for one residual. */
@@ -215,30 +216,7 @@ export class ResidualAdfWorkspace {
    * pivot fails.
    */
   private nestedFits(k: number, yty: number, n: number): number {
-    const { xtx, xty, factor: L, z, ssr, lastT } = this;
-    ssr[0] = yty;
-    let explained = 0;
-    for (let j = 0; j < k; j++) {
-      let d = xtx[j * k + j];
-      for (let m = 0; m < j; m++) d -= L[j * k + m] * L[j * k + m];
-      if (!(d > 1e-13 * Math.max(xtx[j * k + j], 1e-300))) return j;
-      const ljj = Math.sqrt(d);
-      L[j * k + j] = ljj;
-      for (let i = j + 1; i < k; i++) {
-        let s = xtx[i * k + j];
-        for (let m = 0; m < j; m++) s -= L[i * k + m] * L[j * k + m];
-        L[i * k + j] = s / ljj;
-      }
-      let s = xty[j];
-      for (let m = 0; m < j; m++) s -= L[j * k + m] * z[m];
-      z[j] = s / ljj;
-      explained += z[j] * z[j];
-      const rss = Math.max(yty - explained, 0);
-      ssr[j + 1] = rss;
-      const dof = n - (j + 1);
-      lastT[j + 1] = dof > 0 && rss > 0 ? Math.abs(z[j]) / Math.sqrt(rss / dof) : Number.POSITIVE_INFINITY;
-    }
-    return k;
+    return nestedFitsInto(this.xtx, this.xty, yty, k, n, { factor: this.factor, z: this.z, ssr: this.ssr, lastT: this.lastT });
   }
 
   /** tau of the regression with p lags on rows p .. T-2, the lagged level ordered last (see the file comment). */
