@@ -129,6 +129,8 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
 
   const open = (id: StepId): void => {
     if (STEPS[stepIndex(id)].needsReport && !s.report) return;
+    // A notice is read where it appeared; moving on clears it.
+    if (id !== s.step) s.notice = null;
     s.step = id;
     render();
     root.querySelector<HTMLElement>('#step-title')?.focus();

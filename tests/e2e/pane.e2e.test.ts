@@ -113,7 +113,7 @@ describe('the pane in a browser', () => {
     await page.locator('[data-role="confirm-yes"]').click();
     await page.waitForSelector('[data-role="written"]');
     const lines = await page.locator('[data-role="written"] li').allTextContents();
-    expect(lines[0]).toMatch(/^Wrote \d+ cells \(\d+ rows by \d+ columns\) to Prices, from J2, named Mooring_GateGasoil_DockDiesel\.$/);
+    expect(lines[0]).toMatch(/^Wrote \d+ cells to Prices!J2:[A-Z]+\d+ \(\d+ rows by \d+ columns\), named Mooring_GateGasoil_DockDiesel\.$/);
     const block = await page.evaluate(() => {
       const wb = window.__mooringWorkbook!;
       const cells: { address: string; formula: string | undefined; format: { bold?: boolean; numberFormat?: string } | undefined; shown: unknown }[] = [];
@@ -191,6 +191,16 @@ describe('the pane in a browser', () => {
     await page.keyboard.press('Alt+ArrowRight');
     expect(await title()).toBe('2. How each series moves');
     await shot(page, '10-cancelled');
+  });
+
+  it('fits the narrowest pane, 320 px, with no sideways scrolling', async () => {
+    await page.setViewportSize({ width: 320, height: 900 });
+    for (const step of ['tied', 'relation']) {
+      await page.locator(`[data-step="${step}"]`).click();
+      const wide = await page.evaluate(() => document.documentElement.scrollWidth);
+      expect(wide).toBeLessThanOrEqual(320);
+    }
+    await shot(page, '11-narrow-320');
   });
 
   it('made no request outside the page and broke no content security rule', () => {

@@ -95,7 +95,36 @@ describe('writing the block through the port', () => {
     const done = writeStepView(region, { a: 'GateGasoil', b: 'DockDiesel' }, { ...initialWriteState(), plan, outcome });
     expect(done.confirm).toBeNull();
     expect(done.result?.ok).toBe(true);
-    expect(done.result?.lines[0]).toBe(`Wrote ${outcome.written.length} cells (${plan.block.cells.length} rows by ${plan.block.cells[0].length} columns) to Prices, from J2, named ${plan.block.name}.`);
+    const rows = plan.block.cells.length;
+    const cols = plan.block.cells[0].length;
+    // The block starts at J2, so it ends at column J + cols - 1 and row 2 + rows - 1.
+    const corner = `${String.fromCharCode('J'.charCodeAt(0) + cols - 1)}${2 + rows - 1}`;
+    expect(done.result?.lines[0]).toBe(`Wrote ${outcome.written.length} cells to Prices!J2:${corner} (${rows} rows by ${cols} columns), named ${plan.block.name}.`);
+  });
+
+  it('says exactly which cells a failed write changed, and that the old contents were put back', async () => {
+    const { workbook, region } = await demoRegion();
+    const plan = await planPairWrite(workbook, report, { a: 'GateGasoil', b: 'DockDiesel' }, region, { sheet: 'Prices', anchor: 'J2' });
+    workbook.failNextWrite({ afterCells: 3 });
+    const outcome = await writePlan(workbook, plan, false);
+    const view = writeStepView(region, { a: 'GateGasoil', b: 'DockDiesel' }, { ...initialWriteState(), plan, outcome });
+    expect(view.result?.ok).toBe(false);
+    expect(view.result?.lines[0]).toMatch(/failed after 3 of \d+ cells: .*The previous contents were put back\.$/);
+    expect(view.result?.lines[1]).toBe(`Cells changed before the failure: ${outcome.written.join(', ')}.`);
+    expect(outcome.written).toHaveLength(3);
+    expect(workbook.shownValue('Prices', 'J2')).toBeNull();
+  });
+
+  it('puts the block on a new sheet of its own when asked', async () => {
+    const { workbook, region } = await demoRegion();
+    const placement = await placementFor(workbook, region, 'new-sheet', '');
+    expect(placement.anchor).toBe('A1');
+    expect(placement.sheet).toMatch(/^Mooring/);
+    expect(workbook.cells.sheets.has(placement.sheet)).toBe(true);
+    const plan = await planPairWrite(workbook, report, { a: 'GateGasoil', b: 'DockDiesel' }, region, placement);
+    expect(plan.safe).toBe(true);
+    expect((await writePlan(workbook, plan, false)).ok).toBe(true);
+    expect(workbook.shownValue(placement.sheet, 'A1')).toBe('GateGasoil and DockDiesel: 780 rows, 2022-01-03 to 2024-12-27');
   });
 
   it('turns a plain range into a table, and offers to only while it is not one', async () => {

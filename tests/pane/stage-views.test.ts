@@ -108,6 +108,9 @@ describe('The relation and its pull', () => {
     expect(v.untiedNote).toBeNull();
     expect(v.pullFacts.find((f) => f.label === 'Half-life of a gap (the spread alone)')?.value).toBe('11.9 days');
     expect(v.lineFacts.find((f) => f.label === 'Held steady across the halves?')?.value).toBe('Yes');
+    // In the demo market DockDiesel closes the gap and its leader GateGasoil does not.
+    expect(v.pullFacts.find((f) => f.label === 'DockDiesel moves to close the gap?')?.value).toBe('Yes');
+    expect(v.pullFacts.find((f) => f.label === 'GateGasoil moves to close the gap?')?.value).toBe('No');
   });
 
   it('draws the spread with bands at the engine mean +/- 2 sd, and the rolling z-score with guides at +/- 2', () => {

@@ -68,8 +68,10 @@ export function relationStepView(report: DiagnosticReport, pair: PairReport): Re
     ? [
         { label: 'Half-life of a gap (both sides adjusting)', value: halfLifeText(a.ecm.halfLife, a.ecm.halfLifeNote, period) },
         { label: 'Half-life of a gap (the spread alone)', value: halfLifeText(a.spreadAr1.halfLife, a.spreadAr1.halfLifeNote, period) },
-        { label: `${a.ecm.dependent.series} closes the gap?`, value: `${a.ecm.dependent.corrects ? 'Yes' : 'No'} (speed ${showNumber(a.ecm.dependent.speed, 4)}, p ${showPValue(a.ecm.dependent.pValue)})` },
-        { label: `${a.ecm.regressor.series} closes the gap?`, value: `${a.ecm.regressor.corrects ? 'Yes' : 'No'} (speed ${showNumber(a.ecm.regressor.speed, 4)}, p ${showPValue(a.ecm.regressor.pValue)})` },
+        ...[a.ecm.dependent, a.ecm.regressor].flatMap((side) => [
+          { label: `${side.series} moves to close the gap?`, value: side.corrects ? 'Yes' : 'No' },
+          { label: `${side.series}: speed (p-value)`, value: `${showNumber(side.speed, 4)} (${showPValue(side.pValue)})` },
+        ]),
       ]
     : [];
   if (s) {

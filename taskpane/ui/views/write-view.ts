@@ -4,6 +4,7 @@
  * and what it holds, for an explicit yes), and exactly what was written or what failed.
  */
 import type { BlockPlan, PlannedWriteOutcome } from '../../block/plan-block-write';
+import { cellAddress, parseCell } from '../../workbook/a1-address';
 import type { DataRegion, OccupiedCell } from '../../workbook/port';
 
 /** Where the user wants the block. */
@@ -68,7 +69,9 @@ export function writeStepView(region: DataRegion, pair: { a: string; b: string }
     if (o.ok) {
       const rows = plan.block.cells.length;
       const cols = plan.block.cells[0]?.length ?? 0;
-      const lines = [`Wrote ${o.written.length} cells (${rows} rows by ${cols} columns) to ${plan.block.sheet}, from ${plan.block.anchor}, named ${plan.block.name}.`];
+      const top = parseCell(plan.block.anchor);
+      const span = `${plan.block.anchor}:${cellAddress({ row: top.row + rows - 1, col: top.col + Math.max(cols, 1) - 1 })}`;
+      const lines = [`Wrote ${o.written.length} cells to ${plan.block.sheet}!${span} (${rows} rows by ${cols} columns), named ${plan.block.name}.`];
       if (plan.replacesEarlierBlock) lines.push('It replaced the earlier block of this pair.');
       lines.push(o.chart.added ? `Added the chart '${plan.chart?.title ?? ''}'.` : `No chart: ${o.chart.error ?? 'none was asked for'}.`);
       if (state.tableNote) lines.push(state.tableNote);
