@@ -77,6 +77,8 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
   let charts: DrawnChart[] = [];
   let ticker: ReturnType<typeof setInterval> | null = null;
   let unwatch: (() => void) | null = null;
+  // A change that arrived while a run was going; handled when the run ends.
+  let pendingChange: RegionChange | null = null;
 
   const prepare = (): void => {
     s.prepared = null;
@@ -172,6 +174,9 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
       }
       render();
       if (then && outcome.kind === 'done') root.querySelector<HTMLElement>('#step-title')?.focus();
+      const waiting = pendingChange;
+      pendingChange = null;
+      if (waiting) void refreshFromSheet(waiting);
     });
   };
 
@@ -181,7 +186,11 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
   };
 
   const refreshFromSheet = async (change: RegionChange): Promise<void> => {
-    if (!s.region || s.running) return;
+    if (!s.region) return;
+    if (s.running) {
+      pendingChange = change;
+      return;
+    }
     try {
       s.region = await deps.port.readRegion(change.sheet, change.address);
     } catch (e) {

@@ -142,6 +142,7 @@ describe('Who moves first', () => {
       ['Does DockDiesel move before GateGasoil?', 'No evidence'],
     ]);
     expect(v.method).toBe('Toda-Yamamoto test');
+    expect(v.directions[0].rows.map((r) => [r.label, r.decision])).toEqual([['Toda-Yamamoto', 'rejects']]);
     expect(v.cautions.items).toEqual(expect.arrayContaining(two.pairs[0].leadLag!.cautions));
   });
 

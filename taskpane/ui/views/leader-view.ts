@@ -38,7 +38,7 @@ const METHOD_NAMES: Record<string, string> = {
 };
 
 function direction(d: LeadLagDirectionSummary): DirectionView {
-  const rows = [testRow(d.longRun ? 'Short-run test' : 'Test', d.test)];
+  const rows = [testRow(d.longRun ? 'Short-run test' : d.test.test, d.test)];
   if (d.longRun) rows.push(testRow('Long-run test', d.longRun));
   return { question: `Does ${d.cause} move before ${d.effect}?`, answer: d.leads ? 'Yes' : 'No evidence', rows };
 }
