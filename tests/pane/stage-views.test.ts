@@ -97,6 +97,7 @@ describe('Tied together?', () => {
     expect(chosenPair(five, null)?.pair.b).toBe('DockDiesel');
     expect(chosenPair(five, 9)?.index).toBe(9);
     expect(chosenPair(five, 99)?.index).toBe(options[0].index);
+    expect(chosenPair({ ...five, pairs: [] }, null)).toBeNull();
   });
 });
 

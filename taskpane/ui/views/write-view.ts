@@ -72,6 +72,8 @@ export function writeStepView(region: DataRegion, pair: { a: string; b: string }
       const top = parseCell(plan.block.anchor);
       const span = `${plan.block.anchor}:${cellAddress({ row: top.row + rows - 1, col: top.col + Math.max(cols, 1) - 1 })}`;
       const lines = [`Wrote ${o.written.length} cells to ${plan.block.sheet}!${span} (${rows} rows by ${cols} columns), named ${plan.block.name}.`];
+      const beyond = o.written.length - rows * cols;
+      if (beyond > 0) lines.push(`${beyond} more cell${beyond === 1 ? ' was' : 's were'} cleared below it, for the columns that spill down.`);
       if (plan.replacesEarlierBlock) lines.push('It replaced the earlier block of this pair.');
       lines.push(o.chart.added ? `Added the chart '${plan.chart?.title ?? ''}'.` : `No chart: ${o.chart.error ?? 'none was asked for'}.`);
       if (state.tableNote) lines.push(state.tableNote);
