@@ -30,6 +30,8 @@ import { critCell } from './analyses/critical-value-cells';
 import { ecmCell } from './analyses/ecm-cells';
 import { johansenCell, rankCell } from './analyses/johansen-cells';
 import { grangerCell, varLagsCell } from './analyses/lead-lag-cells';
+import { rollingCell } from './analyses/rolling-cells';
+import { screenCell } from './analyses/screen-cells';
 import { halfLifeCell, hedgeCell, spreadCell, zScoreCell } from './analyses/spread-cells';
 import { adfCell, kpssCell, orderCell, ppCell } from './analyses/unit-root-cells';
 import { addinVersion } from './version';
@@ -248,6 +250,34 @@ export function granger(cause: any[][], effect: any[][], lags?: any, method?: an
  */
 export function varlags(block: any[][], criterion?: any, maxlags?: any): number {
   return answer(() => varLagsCell(block, criterion, maxlags));
+}
+
+/**
+ * Pair screen: every pair of the block's series tested both ways round, p-values adjusted for the number tested, ranked.
+ * @customfunction SCREEN
+ * @helpurl https://localhost:3000/docs/functions.md#screen
+ * @param block Prices of 2 or more series, one column each (series 1, 2, ... from the left), on the same rows.
+ * @param [alpha] Level for the adjusted p-values and the chance count, such as 0.05 or 5%. Default 0.05.
+ * @param [show] list (ranked pairs), matrix (the p-values, y by row, x by column) or adjusted (the same, adjusted). Default list.
+ * @returns A table with a header, ending with how many pairs would pass by chance alone.
+ */
+export function screen(block: any[][], alpha?: any, show?: any): any[][] {
+  return answer(() => screenCell(block, alpha, show));
+}
+
+/**
+ * Rolling relation: the Engle-Granger p-value, hedge ratio and half-life of y on x in each window of rows.
+ * @customfunction ROLLING
+ * @helpurl https://localhost:3000/docs/functions.md#rolling
+ * @param y Prices of the series on the left of the relation: one column or one row.
+ * @param x Prices of the other series: one column (or row), on the same rows as y.
+ * @param window Rows in each window: a whole number of 20 or more, at most the length of the series.
+ * @param [step] Rows between window ends; the last window always ends on the last row. Default 1.
+ * @param [show] all (window end, p-value, hedge ratio, half-life), pvalue, beta or halflife. Default all.
+ * @returns One row per window, oldest first, under a header row.
+ */
+export function rolling(y: any[][], x: any[][], window: any, step?: any, show?: any): any[][] {
+  return answer(() => rollingCell(y, x, window, step, show));
 }
 
 /**

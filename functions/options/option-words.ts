@@ -35,3 +35,11 @@ export const LEAD_LAG_METHODS = ['auto', 'f', 'ty', 'ecm'] as const;
 /** Information criteria for the VAR lag order. */
 export const VAR_CRITERIA = ['aic', 'bic', 'hq', 'fpe'] as const;
 export type VarCriterion = (typeof VAR_CRITERIA)[number];
+
+/** What MOOR.SCREEN spills: the ranked pairs, or the grid of raw or adjusted p-values. */
+export const SCREEN_SHOW_WORDS = ['list', 'matrix', 'adjusted'] as const;
+export type ScreenShow = (typeof SCREEN_SHOW_WORDS)[number];
+
+/** What MOOR.ROLLING spills: every statistic, or one of them. */
+export const ROLLING_SHOW_WORDS = ['all', 'pvalue', 'beta', 'halflife'] as const;
+export type RollingShow = (typeof ROLLING_SHOW_WORDS)[number];

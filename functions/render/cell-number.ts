@@ -26,3 +26,10 @@ export function spillValues(values: ArrayLike<number | null>, what: string, lead
   }
   return out;
 }
+
+/** One cell of a spilled table: a finite number as it is, null (no value there) as an empty cell; NaN or an infinity is a fault upstream. */
+export function spillCell(value: number | null, what: string): number | string {
+  if (value === null) return '';
+  if (Number.isFinite(value)) return value;
+  throw new Error(`${what} came out as ${String(value)}`);
+}

@@ -52,6 +52,8 @@ const SURFACE: Record<string, { args: string[]; spills: boolean }> = {
   ECM: { args: ['y[]', 'x[]', 'lags?', 'show?'], spills: true },
   GRANGER: { args: ['cause[]', 'effect[]', 'lags?', 'method?', 'show?'], spills: true },
   VARLAGS: { args: ['block[]', 'criterion?', 'maxlags?'], spills: false },
+  SCREEN: { args: ['block[]', 'alpha?', 'show?'], spills: true },
+  ROLLING: { args: ['y[]', 'x[]', 'window', 'step?', 'show?'], spills: true },
   CRIT: { args: ['test', 'observations?', 'variables?', 'deterministic?', 'level?'], spills: false },
 };
 
