@@ -175,12 +175,14 @@ describe('the pane in a browser', () => {
     for (let j = 3; j <= 12; j++) await page.locator(`[data-column="S${j}"]`).click();
     await page.locator('[data-role="run"]').click();
     await page.waitForSelector('[data-role="progress-text"]:has-text("66 pairs")');
-    // The pane thread stays free while the worker computes: a timer still fires promptly.
+    // The pane thread stays free while the worker computes: a 50 ms timer still fires within
+    // two seconds (on the pane thread the 66 pairs would hold it for far longer), and the
+    // page still answers a click (the Cancel button below).
     const lag = await page.evaluate(() => new Promise<number>((done) => {
       const t = performance.now();
       setTimeout(() => done(performance.now() - t - 50), 50);
     }));
-    expect(lag).toBeLessThan(500);
+    expect(lag).toBeLessThan(2000);
     await shot(page, '09-long-run');
     await page.locator('[data-role="cancel"]').click();
     await page.waitForSelector('[data-role="notice"]:has-text("cancelled")');
