@@ -8,7 +8,7 @@
  *
  * p-value: MacKinnon (1994) with the step-1 deterministic case and N = y plus the xs (null
  * above 6 variables, with a note). Critical values: MacKinnon (2010) with N and T - 1
- * observations, T the length of the series (the reference library's and Stata's count).
+ * observations, T the length of the series (the reference library's count).
  *
  * When y is an exact combination of the xs (R^2 >= 1 - 100 sqrt(eps), the reference
  * library's rule), the residual is rounding noise and an ADF on it means nothing. We then
