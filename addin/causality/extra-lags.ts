@@ -47,8 +47,9 @@ export function cautiousGivenOrder(order: OrderEvidence): number {
 
 /** dmax from the integration orders of the pair [cause, effect]. */
 export function extraLagsFromOrders(pair: readonly Float64Array[], names: PairNames, alpha: number): ExtraLagsChoice {
-  const causeOrder = integrationOrder(pair[0], { alpha }, names.cause);
-  const effectOrder = integrationOrder(pair[1], { alpha }, names.effect);
+  // dmax only needs to know whether an order is 0, 1, or 2 and more: the second differences are not tested.
+  const causeOrder = integrationOrder(pair[0], { alpha, highestDifference: 1 }, names.cause);
+  const effectOrder = integrationOrder(pair[1], { alpha, highestDifference: 1 }, names.effect);
   const cause = cautiousOrder(causeOrder);
   const effect = cautiousOrder(effectOrder);
   const warnings: string[] = [];

@@ -75,8 +75,9 @@ function orderFacts(pair: readonly Float64Array[], names: readonly [string, stri
     return { a, b, source: 'given', extraLags: Math.max(cautiousGivenOrder(a), cautiousGivenOrder(b)) };
   }
   if (!needed) return { a: 'uncertain', b: 'uncertain', source: 'not needed', extraLags: null };
-  const ra = integrationOrder(pair[0], { alpha }, names[0]);
-  const rb = integrationOrder(pair[1], { alpha }, names[1]);
+  // Only "0, 1, or 2 and more" matters for the choice and for dmax, so the second differences are not tested.
+  const ra = integrationOrder(pair[0], { alpha, highestDifference: 1 }, names[0]);
+  const rb = integrationOrder(pair[1], { alpha, highestDifference: 1 }, names[1]);
   return { a: orderEvidence(ra), b: orderEvidence(rb), source: 'tested', extraLags: Math.max(cautiousOrder(ra), cautiousOrder(rb)) };
 }
 

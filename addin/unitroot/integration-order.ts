@@ -19,6 +19,15 @@ export const MIN_OBSERVATIONS = 20;
 export interface IntegrationOrderOptions {
   alpha?: number;
   deterministic?: Deterministic;
+  /**
+   * Where the downward testing starts (default 2: Pantula's order, second differences first).
+   * 1 starts at the first differences and tests the second differences only when the first
+   * still have a unit root (to tell 2 from "above 2"). For the usual I(0) and I(1) prices this
+   * skips the costliest regression (second differences take the longest lag search); it can
+   * differ from the default only if the second differences keep a unit root while the first do
+   * not, which an over-differenced series does not do. Used by the lead-lag tests.
+   */
+  highestDifference?: 1 | 2;
 }
 
 export interface OrderStep {
@@ -79,15 +88,22 @@ export function integrationOrder(series: ArrayLike<number>, options: Integration
     return { differences: d, adf, kpss, adfRejects: (adf.pValue ?? 1) < alpha, kpssRejects: (kpss.pValue ?? 0) < alpha };
   };
 
+  const highest = options.highestDifference ?? 2;
+  if (highest !== 1 && highest !== 2) throw new MooringInputError(`The most differences tested must be 1 or 2; got ${String(highest)}.`);
   const steps: OrderStep[] = [];
   let order: IntegrationOrderResult['order'] = 0;
-  for (let d = 2; d >= 0; d--) {
+  for (let d = highest; d >= 0; d--) {
     const step = stepAt(d);
     steps.push(step);
     if (!step.adfRejects) {
       order = d === 2 ? 'above 2' : ((d + 1) as 1 | 2);
       break;
     }
+  }
+  if (highest === 1 && order === 2) {
+    const second = stepAt(2);
+    steps.unshift(second);
+    if (!second.adfRejects) order = 'above 2';
   }
   const numeric = order === 'above 2' ? 3 : order;
   const atOrder = steps.find((s) => s.differences === numeric);

@@ -41,3 +41,26 @@ describe('integration order, tested from the highest order down (Pantula 1989)',
     expect(() => integrationOrder(randomWalk(rng, 100), { alpha: 5 })).toThrow(/significance level/);
   });
 });
+
+describe('integration order starting at the first differences (the lead-lag tests use it)', () => {
+  const rng = new SeededRandom(2718);
+  const cases: [string, () => Float64Array][] = [
+    ['a stationary AR(1)', () => autoregressive1(rng, 400, 0.5)],
+    ['a random walk', () => randomWalk(rng, 400, { start: 80 })],
+    ['a cumulated walk', () => cumulate(randomWalk(rng, 400))],
+    ['a twice-cumulated walk', () => cumulate(cumulate(randomWalk(rng, 400)))],
+  ];
+  for (const [label, make] of cases) {
+    it(`${label}: the same order and agreement as Pantula's order from the top`, () => {
+      const x = make();
+      const top = integrationOrder(x);
+      const fromFirst = integrationOrder(x, { highestDifference: 1 });
+      expect(fromFirst.order).toBe(top.order);
+      expect(fromFirst.agree).toBe(top.agree);
+    });
+  }
+  it('skips the second differences for an I(1) series', () => {
+    const r = integrationOrder(randomWalk(rng, 400), { highestDifference: 1 });
+    expect(r.steps.map((s) => s.differences)).toEqual([1, 0]);
+  });
+});
