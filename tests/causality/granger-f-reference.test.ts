@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { grangerF } from '../../addin/causality/granger-f';
-import type { TestResult } from '../../addin/result';
 import { fixtureSeries, loadFixture, type Fixtures } from '../reference/fixtures';
+import { relative, detail } from '../reference/compare';
 
 /**
  * Reference: statsmodels 0.13.5 (Debian python3-statsmodels) grangercausalitytests(maxlag=4),
@@ -11,16 +11,6 @@ import { fixtureSeries, loadFixture, type Fixtures } from '../reference/fixtures
  * 1e-8 relative, their p-values to 1e-8 absolute, degrees of freedom and rows exactly.
  */
 const fixture = loadFixture<Fixtures['granger']>('granger');
-
-function relative(a: number, b: number): number {
-  return Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
-}
-
-function detail(r: TestResult, key: string): number {
-  const d = r.details.find((x) => x.key === key);
-  if (!d || typeof d.value !== 'number') throw new Error(`detail ${key} missing`);
-  return d.value;
-}
 
 describe('Granger F against the reference library (statsmodels grangercausalitytests)', () => {
   it('has four directions with lags 1..4 each', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { todaYamamoto } from '../../addin/causality/toda-yamamoto';
-import type { TestResult } from '../../addin/result';
 import { fixtureSeries, loadFixture, type Fixtures } from '../reference/fixtures';
+import { relative, detail } from '../reference/compare';
 
 /**
  * Reference: statsmodels 0.13.5 (Debian python3-statsmodels), fixtures made by
@@ -13,16 +13,6 @@ import { fixtureSeries, loadFixture, type Fixtures } from '../reference/fixtures
  * Statistic and coefficients to 1e-8 relative, p-value to 1e-8 absolute, rows exactly.
  */
 const fixture = loadFixture<Fixtures['var-wald']>('var-wald');
-
-function relative(a: number, b: number): number {
-  return Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
-}
-
-function detail(r: TestResult, key: string): number {
-  const d = r.details.find((x) => x.key === key);
-  if (!d || typeof d.value !== 'number') throw new Error(`detail ${key} missing`);
-  return d.value;
-}
 
 describe('Toda-Yamamoto against the reference library (statsmodels VAR cov_params and test_causality)', () => {
   it('has 12 cases: three pairs, both directions, p = 1 and 2', () => {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { engleGranger } from '../../addin/cointegration/engle-granger';
 import { type Fixtures, fixtureSeries, loadFixture } from '../reference/fixtures';
+import { relative } from '../reference/compare';
 
 /**
  * Reference: statsmodels 0.13.5 (Debian python3-statsmodels) coint, fixtures made by
@@ -10,10 +11,6 @@ import { type Fixtures, fixtureSeries, loadFixture } from '../reference/fixtures
  * lags and nobs exactly, beta / intercept / trend to 1e-8 relative, critical values to 1e-10.
  */
 const fixture = loadFixture<Fixtures['coint']>('coint');
-
-function relative(a: number, b: number): number {
-  return Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
-}
 
 describe('Engle-Granger against the reference library (statsmodels coint)', () => {
   it(`covers every deterministic option and lag rule (${fixture.cases.length} cases)`, () => {

@@ -8,13 +8,10 @@ import { describe, expect, it } from 'vitest';
 import { adf, kpss, order, pptest } from '../../functions/functions';
 import { fixtureSeries, loadFixture, type Fixtures } from '../reference/fixtures';
 import { column, only, row, tableValue } from './cell-shapes';
+import { relative } from '../reference/compare';
 
 const adfFixture = loadFixture<Fixtures['adf']>('adf');
 const kpssFixture = loadFixture<Fixtures['kpss']>('kpss');
-
-function relative(a: number, b: number): number {
-  return Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
-}
 
 describe('MOOR.ADF against statsmodels adfuller (adf.json)', () => {
   // The function has no maximum-lag argument, so only cases at the default maximum or with fixed lags apply.

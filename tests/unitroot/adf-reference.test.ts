@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { adfTest } from '../../addin/unitroot/adf';
 import type { Deterministic } from '../../addin/result';
+import { relative } from '../reference/compare';
 
 /**
  * Reference: statsmodels 0.13.5 (Debian python3-statsmodels) adfuller, fixtures made by
@@ -25,10 +26,6 @@ const fixture = JSON.parse(readFileSync(new URL('../reference/fixtures/adf.json'
   series: Record<string, number[]>;
   cases: AdfCase[];
 };
-
-function relative(a: number, b: number): number {
-  return Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
-}
 
 describe('ADF against the reference library (statsmodels adfuller)', () => {
   it(`covers every deterministic option and lag rule (${fixture.cases.length} cases)`, () => {

@@ -5,6 +5,7 @@ import { nestedVarResiduals } from '../../addin/var/nested-var-residuals';
 import { checkedBlock } from '../../addin/var/var-design';
 import { varLagGram } from '../../addin/var/var-lag-gram';
 import { fixtureSeries, loadFixture, type Fixtures } from '../reference/fixtures';
+import { relative } from '../reference/compare';
 
 /**
  * Reference: statsmodels 0.13.5 (Debian python3-statsmodels) VAR.select_order(maxlags, trend="c"),
@@ -14,10 +15,6 @@ import { fixtureSeries, loadFixture, type Fixtures } from '../reference/fixtures
  * routes to the residual cross products (the Gram path, which these systems take, and QR).
  */
 const fixture = loadFixture<Fixtures['var-select']>('var-select');
-
-function relative(a: number, b: number): number {
-  return Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
-}
 
 describe('VAR lag order against the reference library (statsmodels select_order)', () => {
   it(`has the three systems (${fixture.cases.length} cases)`, () => {

@@ -2,16 +2,13 @@ import { describe, expect, it } from 'vitest';
 import { coefficientRow, fitVar } from '../../addin/var/fit-var';
 import { MooringInputError } from '../../addin/errors';
 import { fixtureSeries, loadFixture, type Fixtures } from '../reference/fixtures';
+import { relative } from '../reference/compare';
 
 /**
  * fitVar's coefficient layout against the reference library (statsmodels 0.13.5 VAR params,
  * recorded in var-wald.json with their row numbers), and the invariances a VAR must have.
  */
 const wald = loadFixture<Fixtures['var-wald']>('var-wald');
-
-function relative(a: number, b: number): number {
-  return Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
-}
 
 describe('fitVar', () => {
   it("coefficient rows follow the reference library's params rows (constant, lag 1 of each series, lag 2, ...): 12 cases to 1e-8", () => {
