@@ -1,16 +1,32 @@
 /**
- * The end-to-end tests' browser: Debian's Chromium driven by playwright-core, headless, with
- * no network but the preview server on 127.0.0.1 (no test tool downloads a browser of its
- * own), and the built dist/ served by the preview's own static server.
+ * The end-to-end tests' browser: the one find-browser.ts finds (MOORING_BROWSER, else an
+ * installed Chromium, Chrome or Edge, else the Chromium packaged in a registry dev dependency)
+ * driven by playwright-core, headless, with no network but the preview server on 127.0.0.1
+ * (no test tool downloads a browser of its own), and the built dist/ served by the preview's
+ * own static server.
  */
 import { existsSync, mkdirSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { findBrowser, type FoundBrowser } from './find-browser';
 // @ts-expect-error The preview server is plain JavaScript (node taskpane/preview/serve.mjs).
 import { startPreviewServer } from '../../taskpane/preview/serve.mjs';
 
-/** Where Debian installs Chromium. */
-export const CHROMIUM = '/usr/bin/chromium';
+/**
+ * The switches every launch uses: no sandbox (the tests run as root on CI), no GPU, and none of
+ * the browser's own background connections (this machine's network is closed to them).
+ */
+export const BROWSER_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'];
+
+/** Launches a found browser headless with BROWSER_ARGS. */
+export async function launchBrowser(found: FoundBrowser): Promise<Browser> {
+  return chromium.launch({
+    executablePath: found.executablePath,
+    headless: true,
+    args: BROWSER_ARGS,
+    env: { ...process.env, ...found.env } as Record<string, string>,
+  });
+}
 
 /** Screenshots of the walk go here (git-ignored). */
 export const SHOTS = fileURLToPath(new URL('../../test-artifacts/e2e/', import.meta.url));
@@ -33,14 +49,14 @@ export interface PreviewSession {
 /** Starts the server and the browser and opens the preview at 340 px wide. */
 export async function openPreview(): Promise<PreviewSession> {
   if (!existsSync(PREVIEW_HTML)) throw new Error('dist/preview.html is missing: npm test builds it (or run npx webpack --mode production --config-name addin).');
-  if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: apt-get install chromium (.ci/run does).`);
+  const found = await findBrowser();
   mkdirSync(SHOTS, { recursive: true });
   const server = (await startPreviewServer({ port: 0 })) as { url: string; close(): Promise<void> };
-  const browser = await chromium.launch({
-    executablePath: CHROMIUM,
-    headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
+  const browser = await launchBrowser(found).catch(async (e: Error) => {
+    await server.close();
+    throw new Error(`The ${found.source} browser ${found.executablePath} did not start: ${e.message}`);
   });
+  console.info(`End-to-end browser: ${found.source} ${found.executablePath} (version ${browser.version()})`);
   const page = await browser.newPage({ viewport: { width: 340, height: 900 } });
   const foreignRequests: string[] = [];
   const errors: string[] = [];
