@@ -54,10 +54,11 @@ export function version(): string {
  * @param [deterministic] Terms in the test regression: none, const or trend. Default const.
  * @param [lags] Lagged changes: a whole number, or aic, bic or tstat to choose them. Default aic.
  * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The p-value, the statistic, a labelled table or a card.
  */
-export function adf(series: any[][], deterministic?: any, lags?: any, show?: any): any[][] {
-  return answer(() => adfCell(series, deterministic, lags, show));
+export function adf(series: any[][], deterministic?: any, lags?: any, show?: any, prep?: any): any[][] {
+  return answer(() => adfCell(series, deterministic, lags, show, prep));
 }
 
 /**
@@ -68,10 +69,11 @@ export function adf(series: any[][], deterministic?: any, lags?: any, show?: any
  * @param [deterministic] Stationary around: const (a level) or trend. Default const.
  * @param [bandwidth] Kernel lags of the long-run variance: a whole number, or auto (Newey-West). Default auto.
  * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The p-value, the statistic, a labelled table or a card.
  */
-export function kpss(series: any[][], deterministic?: any, bandwidth?: any, show?: any): any[][] {
-  return answer(() => kpssCell(series, deterministic, bandwidth, show));
+export function kpss(series: any[][], deterministic?: any, bandwidth?: any, show?: any, prep?: any): any[][] {
+  return answer(() => kpssCell(series, deterministic, bandwidth, show, prep));
 }
 
 /**
@@ -82,10 +84,11 @@ export function kpss(series: any[][], deterministic?: any, bandwidth?: any, show
  * @param [deterministic] Terms in the test regression: none, const or trend. Default const.
  * @param [bandwidth] Kernel lags of the long-run variance: a whole number, or auto (Newey-West). Default auto.
  * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The p-value, the statistic, a labelled table or a card.
  */
-export function pptest(series: any[][], deterministic?: any, bandwidth?: any, show?: any): any[][] {
-  return answer(() => ppCell(series, deterministic, bandwidth, show));
+export function pptest(series: any[][], deterministic?: any, bandwidth?: any, show?: any, prep?: any): any[][] {
+  return answer(() => ppCell(series, deterministic, bandwidth, show, prep));
 }
 
 /**
@@ -95,10 +98,11 @@ export function pptest(series: any[][], deterministic?: any, bandwidth?: any, sh
  * @param series Prices: one column or one row. Blank cells at the ends are skipped.
  * @param [alpha] Significance level of each step, such as 0.05 or 5%. Default 0.05.
  * @param [deterministic] Terms in the level tests: none, const or trend. Default const.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns 0, 1 or 2, or the text "above 2".
  */
-export function order(series: any[][], alpha?: any, deterministic?: any): any {
-  return answer(() => orderCell(series, alpha, deterministic));
+export function order(series: any[][], alpha?: any, deterministic?: any, prep?: any): any {
+  return answer(() => orderCell(series, alpha, deterministic, prep));
 }
 
 /**
@@ -110,10 +114,11 @@ export function order(series: any[][], alpha?: any, deterministic?: any): any {
  * @param [deterministic] Terms in the relation: none, const or trend. Default const.
  * @param [lags] Lagged changes in the residual test: a whole number, or aic, bic or tstat. Default aic.
  * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The p-value, the statistic, a labelled table or a card.
  */
-export function egtest(y: any[][], x: any[][], deterministic?: any, lags?: any, show?: any): any[][] {
-  return answer(() => egCell(y, x, deterministic, lags, show));
+export function egtest(y: any[][], x: any[][], deterministic?: any, lags?: any, show?: any, prep?: any): any[][] {
+  return answer(() => egCell(y, x, deterministic, lags, show, prep));
 }
 
 /**
@@ -125,10 +130,11 @@ export function egtest(y: any[][], x: any[][], deterministic?: any, lags?: any, 
  * @param [deterministic] Terms in the relation: none, const or trend. Default const.
  * @param [bandwidth] Kernel lags of the long-run variance: a whole number, or auto (Newey-West). Default auto.
  * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The p-value, the statistic, a labelled table or a card.
  */
-export function potest(y: any[][], x: any[][], deterministic?: any, bandwidth?: any, show?: any): any[][] {
-  return answer(() => poCell(y, x, deterministic, bandwidth, show));
+export function potest(y: any[][], x: any[][], deterministic?: any, bandwidth?: any, show?: any, prep?: any): any[][] {
+  return answer(() => poCell(y, x, deterministic, bandwidth, show, prep));
 }
 
 /**
@@ -139,10 +145,11 @@ export function potest(y: any[][], x: any[][], deterministic?: any, bandwidth?: 
  * @param [lags] Lagged changes in the model: a whole number. Default 1.
  * @param [deterministic] none, restricted-constant, constant, restricted-trend or trend. Default constant.
  * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The p-value, the statistic, a labelled table or a card.
  */
-export function johansen(block: any[][], lags?: any, deterministic?: any, show?: any): any[][] {
-  return answer(() => johansenCell(block, lags, deterministic, show));
+export function johansen(block: any[][], lags?: any, deterministic?: any, show?: any, prep?: any): any[][] {
+  return answer(() => johansenCell(block, lags, deterministic, show, prep));
 }
 
 /**
@@ -153,10 +160,11 @@ export function johansen(block: any[][], lags?: any, deterministic?: any, show?:
  * @param [lags] Lagged changes in the model: a whole number. Default 1.
  * @param [deterministic] none, restricted-constant, constant, restricted-trend or trend. Default constant.
  * @param [alpha] Significance level of each step, such as 0.05 or 5%. Default 0.05.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The number of long-run relations, from 0 to the number of series.
  */
-export function rank(block: any[][], lags?: any, deterministic?: any, alpha?: any): number {
-  return answer(() => rankCell(block, lags, deterministic, alpha));
+export function rank(block: any[][], lags?: any, deterministic?: any, alpha?: any, prep?: any): number {
+  return answer(() => rankCell(block, lags, deterministic, alpha, prep));
 }
 
 /**
@@ -166,10 +174,12 @@ export function rank(block: any[][], lags?: any, deterministic?: any, alpha?: an
  * @param y Prices of the series you hold: one column or one row.
  * @param x Prices of the hedge: one column (or row), on the same rows as y.
  * @param [method] ols (y on x), reverse-ols (x on y, turned round), tls (orthogonal) or dols (dynamic OLS). Default ols.
+ * @param [show] slope (the line's slope; with logs an elasticity) or units (units of x to hold per unit of y at the latest prices). Default slope.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The hedge ratio beta.
  */
-export function hedge(y: any[][], x: any[][], method?: any): number {
-  return answer(() => hedgeCell(y, x, method));
+export function hedge(y: any[][], x: any[][], method?: any, show?: any, prep?: any): number {
+  return answer(() => hedgeCell(y, x, method, show, prep));
 }
 
 /**
@@ -179,10 +189,11 @@ export function hedge(y: any[][], x: any[][], method?: any): number {
  * @param y Prices of the series you hold: one column or one row.
  * @param x Prices of the hedge: one column (or row), on the same rows as y.
  * @param [beta] Hedge ratio to use, with no intercept. Default: estimated with its intercept by least squares.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The spread, one value per row of y, spilled beside the prices.
  */
-export function spread(y: any[][], x: any[][], beta?: any): any[][] {
-  return answer(() => spreadCell(y, x, beta));
+export function spread(y: any[][], x: any[][], beta?: any, prep?: any): any[][] {
+  return answer(() => spreadCell(y, x, beta, prep));
 }
 
 /**
@@ -191,10 +202,11 @@ export function spread(y: any[][], x: any[][], beta?: any): any[][] {
  * @helpurl https://localhost:3000/docs/functions.md#halflife
  * @param y A spread, or the prices of the series on the left of the relation: one column or one row.
  * @param [x] Prices of the other series, on the same rows as y. Default: none, when y is already a spread.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The half-life in rows (days for daily prices).
  */
-export function halflife(y: any[][], x?: any[][]): number {
-  return answer(() => halfLifeCell(y, x));
+export function halflife(y: any[][], x?: any[][], prep?: any): number {
+  return answer(() => halfLifeCell(y, x, prep));
 }
 
 /**
@@ -204,10 +216,11 @@ export function halflife(y: any[][], x?: any[][]): number {
  * @param y A spread, or the prices of the series on the left of the relation: one column or one row.
  * @param [x] Prices of the other series, on the same rows as y. Default: none, when y is already a spread.
  * @param [window] Rows in a trailing window (3 or more). Default: the whole sample.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The z-scores, one per row of y, spilled beside the prices.
  */
-export function zscore(y: any[][], x?: any[][], window?: any): any[][] {
-  return answer(() => zScoreCell(y, x, window));
+export function zscore(y: any[][], x?: any[][], window?: any, prep?: any): any[][] {
+  return answer(() => zScoreCell(y, x, window, prep));
 }
 
 /**
@@ -218,10 +231,11 @@ export function zscore(y: any[][], x?: any[][], window?: any): any[][] {
  * @param x Prices of the other series: one column (or row), on the same rows as y.
  * @param [lags] Lagged changes of both series: a whole number, or aic to choose. Default aic.
  * @param [show] What to return: headline (y's speed), stat (its t-value), all (a labelled table) or card. Default headline.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The speed of adjustment, its t-value, a labelled table or a card.
  */
-export function ecm(y: any[][], x: any[][], lags?: any, show?: any): any[][] {
-  return answer(() => ecmCell(y, x, lags, show));
+export function ecm(y: any[][], x: any[][], lags?: any, show?: any, prep?: any): any[][] {
+  return answer(() => ecmCell(y, x, lags, show, prep));
 }
 
 /**
@@ -231,12 +245,13 @@ export function ecm(y: any[][], x: any[][], lags?: any, show?: any): any[][] {
  * @param cause The series that may lead: one column or one row.
  * @param effect The series that may follow, on the same rows as cause.
  * @param [lags] Lags of both series: a whole number of 1 or more, or aic or bic to choose. Default aic.
- * @param [method] auto (the test valid for the data), f (F test), ty (Toda-Yamamoto) or ecm (error correction). Default auto.
+ * @param [method] auto (the test valid for the data), f (F test on the data the orders call for), levels (F test on the values as given), changes (F test on their changes), ty (Toda-Yamamoto) or ecm (error correction). Default auto.
  * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The p-value, the statistic, a labelled table or a card.
  */
-export function granger(cause: any[][], effect: any[][], lags?: any, method?: any, show?: any): any[][] {
-  return answer(() => grangerCell(cause, effect, lags, method, show));
+export function granger(cause: any[][], effect: any[][], lags?: any, method?: any, show?: any, prep?: any): any[][] {
+  return answer(() => grangerCell(cause, effect, lags, method, show, prep));
 }
 
 /**
@@ -246,17 +261,18 @@ export function granger(cause: any[][], effect: any[][], lags?: any, method?: an
  * @param block Series, one column each, on the same rows.
  * @param [criterion] aic, bic, hq or fpe. Default aic.
  * @param [maxlags] Largest order tried: a whole number of 1 or more. Default round(12 (T/100)^(1/4)), capped.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The number of lags.
  */
-export function varlags(block: any[][], criterion?: any, maxlags?: any): number {
-  return answer(() => varLagsCell(block, criterion, maxlags));
+export function varlags(block: any[][], criterion?: any, maxlags?: any, prep?: any): number {
+  return answer(() => varLagsCell(block, criterion, maxlags, prep));
 }
 
 /**
- * Pair screen: every pair of the block's series tested both ways round, p-values adjusted for the number tested, ranked.
+ * Pair screen: each series' order of integration first, then every pair of series that wander with the same order tested both ways round, p-values adjusted for the number tested, ranked; the other pairs are listed after the ranking with the reason.
  * @customfunction SCREEN
  * @helpurl https://localhost:3000/docs/functions.md#screen
- * @param block Prices of 2 or more series, one column each (series 1, 2, ... from the left), on the same rows.
+ * @param block Prices of 2 or more series, one column each, on the same rows. A first row of text names the series: select the header row too, or use Table1[#All] for a table; without it they are series 1, 2, ... from the left.
  * @param [alpha] Level for the adjusted p-values and the chance count, such as 0.05 or 5%. Default 0.05.
  * @param [show] list (ranked pairs), matrix (the p-values, y by row, x by column) or adjusted (the same, adjusted). Default list.
  * @returns A table with a header, ending with how many pairs would pass by chance alone.
@@ -274,10 +290,11 @@ export function screen(block: any[][], alpha?: any, show?: any): any[][] {
  * @param window Rows in each window: a whole number of 20 or more, at most the length of the series.
  * @param [step] Rows between window ends; the last window always ends on the last row. Default 1.
  * @param [show] all (window end, p-value, hedge ratio, half-life), pvalue, beta or halflife. Default all.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns One row per window, oldest first, under a header row.
  */
-export function rolling(y: any[][], x: any[][], window: any, step?: any, show?: any): any[][] {
-  return answer(() => rollingCell(y, x, window, step, show));
+export function rolling(y: any[][], x: any[][], window: any, step?: any, show?: any, prep?: any): any[][] {
+  return answer(() => rollingCell(y, x, window, step, show, prep));
 }
 
 /**

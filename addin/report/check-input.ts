@@ -6,6 +6,7 @@
 import { MooringInputError } from '../errors';
 import { requireJohansenCase, type JohansenCase } from '../johansen/deterministic-case';
 import type { Deterministic } from '../result';
+import { describePreparation, parsePreparation } from '../series/preparation';
 import type { DiagnosticInput } from './prepare-input';
 import type { DroppedRow } from './report-types';
 
@@ -27,6 +28,13 @@ export interface DiagnosticOptions {
   period?: string;
   /** Rows in the trailing window of the rolling z-score; default 60, or a third of the sample when shorter. */
   rollingWindow?: number;
+  /**
+   * How the surface prepared the prices, in the words of addin/series/preparation.ts ("log, skip
+   * gaps, from row 521"): recorded in the report's settings so every rendering of the report
+   * (the results block above all) runs its formulas on the same rows; the preparation itself is
+   * done before the diagnostic, by the surface.
+   */
+  preparation?: string;
 }
 
 /** Fewest observations the diagnostic works with: enough for the unit-root steps, the halves and the lag searches. */
@@ -107,7 +115,7 @@ export function checkDiagnosticInput(input: DiagnosticInput, options: Diagnostic
 }
 
 /** Reads and checks the level, the deterministic terms, the lag rule and the Johansen case. */
-export function checkDiagnosticOptions(options: DiagnosticOptions): { alpha: number; deterministic: Deterministic; lagRule: 'aic' | 'bic'; johansenCase: JohansenCase | 'auto' } {
+export function checkDiagnosticOptions(options: DiagnosticOptions): { alpha: number; deterministic: Deterministic; lagRule: 'aic' | 'bic'; johansenCase: JohansenCase | 'auto'; preparation: string } {
   const alpha = options.alpha ?? 0.05;
   if (typeof alpha !== 'number' || !(alpha > 0 && alpha < 0.5)) {
     throw new MooringInputError(`The significance level must lie between 0 and 0.5, such as 0.05; got ${String(alpha)}.`);
@@ -120,7 +128,8 @@ export function checkDiagnosticOptions(options: DiagnosticOptions): { alpha: num
   if (lagRule !== 'aic' && lagRule !== 'bic') throw new MooringInputError(`The lag rule must be 'aic' or 'bic'; got '${String(lagRule)}'.`);
   const johansenCase = options.johansenCase ?? 'auto';
   if (johansenCase !== 'auto') requireJohansenCase(johansenCase);
-  return { alpha, deterministic, lagRule, johansenCase };
+  const preparation = describePreparation(parsePreparation(options.preparation ?? null, 'The preparation of the prices'));
+  return { alpha, deterministic, lagRule, johansenCase, preparation };
 }
 
 function lengthOf(input: DiagnosticInput, names: string[]): number {

@@ -114,6 +114,8 @@ export interface DiagnosticSettings {
   johansenCase: JohansenCase | 'auto';
   /** Rows in the trailing window of the rolling z-score. */
   rollingWindow: number;
+  /** How the prices were prepared before the diagnostic (addin/series/preparation.ts); '' when as given. */
+  preparation: string;
 }
 
 /** A headline finding, in plain words, with the subject it is about. */

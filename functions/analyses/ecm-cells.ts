@@ -9,7 +9,7 @@ import { errorCorrectionModel, type AdjustmentEquation, type ErrorCorrectionResu
 import { longRunHypotheses } from '../../addin/causality/causality-wording';
 import type { ResultDetail, TestResult } from '../../addin/result';
 import { readPair } from '../cells/range-input';
-import { countOrWord } from '../options/option-values';
+import { countOrWord, prepValue } from '../options/option-values';
 import { showAnswer } from '../render/show-answer';
 
 function equationDetails(eq: AdjustmentEquation, tag: 'Y' | 'X'): ResultDetail[] {
@@ -18,7 +18,7 @@ function equationDetails(eq: AdjustmentEquation, tag: 'Y' | 'X'): ResultDetail[]
     { key: `speedStandardError${tag}`, label: `Standard error, speed of ${eq.series}`, value: eq.standardError },
     { key: `speedP${tag}`, label: `p-value, speed of ${eq.series}`, value: eq.pValue },
     { key: `gapSpeed${tag}`, label: `Share of the gap ${eq.series} closes per period (negative closes)`, value: eq.gapSpeed },
-    { key: `halfLife${tag}`, label: `Half-life if only ${eq.series} adjusted (periods)`, value: eq.halfLife ?? eq.halfLifeNote ?? null },
+    { key: `halfLife${tag}`, label: `Half-life if only ${eq.series} adjusted (periods)`, value: eq.halfLifeAlone ?? eq.halfLifeAloneNote ?? null },
     { key: `rSquared${tag}`, label: `R² of the equation for ${eq.series}`, value: eq.rSquared },
   ];
   return out;
@@ -34,7 +34,7 @@ export function ecmResult(ecm: ErrorCorrectionResult): TestResult {
     ...equationDetails(ecm.y, 'Y'),
     ...equationDetails(ecm.x, 'X'),
     { key: 'combinedSpeed', label: 'Share of the gap closed per period, both sides', value: ecm.combinedSpeed },
-    { key: 'halfLife', label: 'Half-life of the gap (periods)', value: ecm.halfLife ?? ecm.halfLifeNote ?? null },
+    { key: 'ecmHalfLife', label: 'Half-life implied by the error-correction model, both prices adjusting (periods)', value: ecm.ecmHalfLife ?? ecm.ecmHalfLifeNote ?? null },
     { key: 'maxLags', label: 'Largest lag searched', value: ecm.maxLags },
   ];
   return {
@@ -56,9 +56,9 @@ export function ecmResult(ecm: ErrorCorrectionResult): TestResult {
   };
 }
 
-export function ecmCell(y: unknown, x: unknown, lags: unknown, show: unknown) {
+export function ecmCell(y: unknown, x: unknown, lags: unknown, show: unknown, prep?: unknown) {
   const lagChoice = countOrWord('lags', lags, ['aic'] as const, 'aic', 'lagged changes');
-  const pair = readPair(y, x, { y: 'y', x: 'x' }, 'the error-correction model');
+  const pair = readPair(y, x, { y: 'y', x: 'x' }, 'the error-correction model', prepValue(prep));
   const ecm = errorCorrectionModel(pair.y.values, pair.x.values, { lags: lagChoice }, { y: pair.y.name, x: pair.x.name });
   const answer = {
     result: ecmResult(ecm),

@@ -11,15 +11,17 @@ import { spreadSeries } from '../../addin/spread/spread-series';
 import { rollingZScore, zScore } from '../../addin/spread/z-score';
 import { NoValue } from '../cells/no-value';
 import { readPair, readRelation, readSeries, type Orientation } from '../cells/range-input';
-import { decimalValue, isOmitted, optionWord, wholeNumber } from '../options/option-values';
-import { HEDGE_WORDS, type HedgeWord } from '../options/option-words';
-import { cellNumber, spillValues } from '../render/cell-number';
+import { decimalValue, isOmitted, optionWord, prepValue, wholeNumber } from '../options/option-values';
+import { HEDGE_SHOW_WORDS, HEDGE_WORDS, type HedgeWord } from '../options/option-words';
+import { hedgeUnits } from '../../addin/cointegration/hedge-units';
+import { cellNumber, spillByRow } from '../render/cell-number';
 
 /** The spread and where its first value sits. */
 interface SpreadOf {
   values: Float64Array;
   orientation: Orientation;
-  leadingBlanks: number;
+  /** Source index of each value in the range, so the spill lines up with the rows it came from. */
+  rows: Int32Array;
 }
 
 function hedgeRatio(method: HedgeWord, y: Float64Array, x: Float64Array): HedgeRatio {
@@ -36,31 +38,35 @@ function hedgeRatio(method: HedgeWord, y: Float64Array, x: Float64Array): HedgeR
 }
 
 /** A single x for the pair functions: one column (or row) beside y. */
-function pairOf(y: unknown, x: unknown) {
-  return readPair(y, x, { y: 'y', x: 'x' }, 'a hedge ratio');
+function pairOf(y: unknown, x: unknown, prep: unknown) {
+  return readPair(y, x, { y: 'y', x: 'x' }, 'a hedge ratio', prepValue(prep));
 }
 
 /** Units of x per unit of y in the line y = intercept + beta x. */
-export function hedgeCell(y: unknown, x: unknown, method: unknown): number {
+export function hedgeCell(y: unknown, x: unknown, method: unknown, show: unknown, prep?: unknown): number {
   const word = optionWord('method', method, HEDGE_WORDS, 'ols');
-  const pair = pairOf(y, x);
-  return cellNumber(hedgeRatio(word, pair.y.values, pair.x.values).beta, 'The hedge ratio');
+  const what = optionWord('show', show, HEDGE_SHOW_WORDS, 'slope');
+  const pair = pairOf(y, x, prep);
+  const slope = cellNumber(hedgeRatio(word, pair.y.values, pair.x.values).beta, 'The hedge ratio');
+  if (what === 'slope') return slope;
+  return hedgeUnits(slope, pair.y.values, pair.x.values, pair.y.logged, { y: 'y', x: 'x' }).hedgeUnits;
 }
 
 /** The Engle-Granger spread (step-1 residual, with a constant) of y on the xs, or y itself when x is left out. */
-function spreadOf(y: unknown, x: unknown): SpreadOf {
+function spreadOf(y: unknown, x: unknown, prep: unknown): SpreadOf {
+  const how = prepValue(prep);
   if (isOmitted(x)) {
-    const single = readSeries(y, 'y');
-    return { values: single.series.values, orientation: single.orientation, leadingBlanks: single.series.leadingBlanks };
+    const single = readSeries(y, 'y', how);
+    return { values: single.series.values, orientation: single.orientation, rows: single.series.rows };
   }
-  const input = readRelation(y, x);
+  const input = readRelation(y, x, undefined, how);
   const step1 = cointegratingRegression(input.y.values, input.xs.map((s) => s.values), 'const', { y: input.y.name, xs: input.xs.map((s) => s.name) });
   if (step1.exactFit) {
     throw new NoValue(
       `${step1.names.y} is an exact combination of ${step1.names.xs.join(', ')} (R² = ${step1.rSquared.toFixed(7)}), so the spread is rounding noise: ` +
         'check that one column is not a copy or a formula of another.');
   }
-  return { values: step1.residuals, orientation: input.orientation, leadingBlanks: input.y.leadingBlanks };
+  return { values: step1.residuals, orientation: input.orientation, rows: input.y.rows };
 }
 
 function spill(values: (number | string)[], orientation: Orientation): (number | string)[][] {
@@ -68,25 +74,25 @@ function spill(values: (number | string)[], orientation: Orientation): (number |
 }
 
 /** The spread y - beta x, beta as given (no intercept) or, when left out, y - intercept - beta x by least squares. */
-export function spreadCell(y: unknown, x: unknown, beta: unknown): (number | string)[][] {
+export function spreadCell(y: unknown, x: unknown, beta: unknown, prep?: unknown): (number | string)[][] {
   const given = decimalValue('beta', beta, 'the hedge ratio: units of x per unit of y');
-  const pair = pairOf(y, x);
+  const pair = pairOf(y, x, prep);
   const fit = given === undefined ? olsHedgeRatio(pair.y.values, pair.x.values) : { beta: given, intercept: 0 };
   const values = spreadSeries(pair.y.values, pair.x.values, fit.beta, fit.intercept, { y: 'y', x: 'x' });
-  return spill(spillValues(values, 'The spread', pair.y.leadingBlanks), pair.orientation);
+  return spill(spillByRow(values, pair.y.rows, 'The spread'), pair.orientation);
 }
 
 /** Periods for a gap in the spread to halve (AR(1) of the spread); #N/A when the spread does not revert. */
-export function halfLifeCell(y: unknown, x: unknown): number {
-  const spread = spreadOf(y, x);
+export function halfLifeCell(y: unknown, x: unknown, prep?: unknown): number {
+  const spread = spreadOf(y, x, prep);
   const answer = halfLife(spread.values);
   return cellNumber(answer.halfLife, 'The half-life', answer.halfLife === null ? `No half-life: ${answer.note}.` : undefined);
 }
 
 /** z-scores of the spread (or of y), over the whole sample or a trailing window. */
-export function zScoreCell(y: unknown, x: unknown, window: unknown): (number | string)[][] {
+export function zScoreCell(y: unknown, x: unknown, window: unknown, prep?: unknown): (number | string)[][] {
   const w = wholeNumber('window', window, undefined, 'rows in the trailing window', 3);
-  const spread = spreadOf(y, x);
+  const spread = spreadOf(y, x, prep);
   const values = w === undefined ? zScore(spread.values).values : rollingZScore(spread.values, w);
-  return spill(spillValues(values, 'The z-score', spread.leadingBlanks), spread.orientation);
+  return spill(spillByRow(values, spread.rows, 'The z-score'), spread.orientation);
 }

@@ -22,6 +22,7 @@ import { MooringInputError } from '../../addin/errors';
 import { alignAll } from '../../addin/series/align-series';
 import { isBlankCell } from '../../addin/series/cell-kinds';
 import { cleanSeries, type CleanSeries } from '../../addin/series/clean-series';
+import { AS_GIVEN, cutWindow, type Preparation } from '../../addin/series/preparation';
 
 /** How a range holds its series. */
 export type Orientation = 'column' | 'row';
@@ -104,7 +105,7 @@ export function trailingZeroRun(cells: readonly unknown[]): number {
   return run;
 }
 
-function clean(cells: unknown[], name: string, orientation: Orientation): CleanSeries {
+function clean(cells: unknown[], name: string, orientation: Orientation, prep: Preparation): CleanSeries {
   const zeros = trailingZeroRun(cells);
   if (zeros >= TRAILING_ZERO_LIMIT) {
     throw new MooringInputError(
@@ -112,11 +113,16 @@ function clean(cells: unknown[], name: string, orientation: Orientation): CleanS
         'select only the rows that hold prices instead of a whole column. If they are real zeros, the history ends in a stale or broken feed: check it.');
   }
   const axis = orientation === 'column' ? 'row' : 'column';
-  return cleanSeries(cells, { name, rowLabel: (index) => `${axis} ${index + 1} of its range` });
+  return cleanSeries(cells, { name, log: prep.log, skipGaps: prep.skipGaps, rowLabel: (index) => `${axis} ${index + 1} of its range` });
 }
 
-/** One series from a range that is one column or one row. */
-export function readSeries(range: unknown, name: string): RangeSeries {
+/** Whether a range holds more than one row and more than one column (a block of series, one per column). */
+export function isBlockRange(range: unknown): boolean {
+  return Array.isArray(range) && range.length > 1 && Array.isArray(range[0]) && widthOf(range as unknown[][]) > 1;
+}
+
+/** One series from a range that is one column or one row, prepared as `prep` says. */
+export function readSeries(range: unknown, name: string, prep: Preparation = AS_GIVEN): RangeSeries {
   const grid = gridOf(range, name);
   const width = widthOf(grid);
   if (grid.length > 1 && width > 1) {
@@ -124,18 +130,19 @@ export function readSeries(range: unknown, name: string): RangeSeries {
   }
   const orientation: Orientation = grid.length === 1 && width > 1 ? 'row' : 'column';
   const cells = orientation === 'row' ? rowCells(grid, 0) : columnCells(grid, 0);
-  return { series: clean(cells, name, orientation), orientation };
+  const [series] = cutWindow([clean(cells, name, orientation, prep)], prep);
+  return { series, orientation };
 }
 
 /** Several series from a range: one per column, or one per row when `orientation` is 'row'. */
-export function readSeriesSet(range: unknown, name: string, orientation: Orientation): CleanSeries[] {
+export function readSeriesSet(range: unknown, name: string, orientation: Orientation, prep: Preparation = AS_GIVEN): CleanSeries[] {
   const grid = gridOf(range, name);
   const count = orientation === 'column' ? widthOf(grid) : grid.length;
   const label = (k: number) => (count === 1 ? name : `${name} (${orientation} ${k + 1})`);
   const out: CleanSeries[] = [];
   for (let k = 0; k < count; k++) {
     const cells = orientation === 'column' ? columnCells(grid, k) : rowCells(grid, k);
-    out.push(clean(cells, label(k), orientation));
+    out.push(clean(cells, label(k), orientation, prep));
   }
   return out;
 }
@@ -145,25 +152,25 @@ export function readSeriesSet(range: unknown, name: string, orientation: Orienta
  * the same way (columns beside a column y, rows under a row y). Unequal lengths after the
  * blank ends are trimmed are refused, naming the longer series.
  */
-export function readRelation(yRange: unknown, xRange: unknown, names: { y: string; x: string } = { y: 'y', x: 'x' }): RangeRelation {
-  const y = readSeries(yRange, names.y);
-  const xs = readSeriesSet(xRange, names.x, y.orientation);
-  const [ya, ...xa] = alignAll([y.series, ...xs]);
+export function readRelation(yRange: unknown, xRange: unknown, names: { y: string; x: string } = { y: 'y', x: 'x' }, prep: Preparation = AS_GIVEN): RangeRelation {
+  const y = readSeries(yRange, names.y, { ...prep, fromRow: null, toRow: null, lastRows: null });
+  const xs = readSeriesSet(xRange, names.x, y.orientation, prep);
+  const [ya, ...xa] = cutWindow(alignAll([y.series, ...xs]), prep);
   return { y: ya, xs: xa, orientation: y.orientation };
 }
 
 /** A block: one series per column, lined up by row, named "series 1", "series 2", ... */
-export function readBlock(range: unknown, name = 'the block'): CleanSeries[] {
+export function readBlock(range: unknown, name = 'the block', prep: Preparation = AS_GIVEN): CleanSeries[] {
   const grid = gridOf(range, name);
   const width = widthOf(grid);
   const series: CleanSeries[] = [];
-  for (let j = 0; j < width; j++) series.push(clean(columnCells(grid, j), `series ${j + 1}`, 'column'));
-  return alignAll(series);
+  for (let j = 0; j < width; j++) series.push(clean(columnCells(grid, j), `series ${j + 1}`, 'column', prep));
+  return cutWindow(alignAll(series), prep);
 }
 
 /** Two series lined up by row, the second from a range that must hold exactly one series. */
-export function readPair(yRange: unknown, xRange: unknown, names: { y: string; x: string }, purpose: string): { y: CleanSeries; x: CleanSeries; orientation: Orientation } {
-  const input = readRelation(yRange, xRange, names);
+export function readPair(yRange: unknown, xRange: unknown, names: { y: string; x: string }, purpose: string, prep: Preparation = AS_GIVEN): { y: CleanSeries; x: CleanSeries; orientation: Orientation } {
+  const input = readRelation(yRange, xRange, names, prep);
   if (input.xs.length !== 1) {
     throw new MooringInputError(`${names.x} holds ${input.xs.length} series: ${purpose} pairs ${names.y} with one series; select one ${input.orientation} for ${names.x}.`);
   }

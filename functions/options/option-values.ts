@@ -7,6 +7,7 @@
  */
 import { MooringInputError } from '../../addin/errors';
 import { describeCell, isBlankCell } from '../../addin/series/cell-kinds';
+import { parsePreparation, type Preparation } from '../../addin/series/preparation';
 
 /** True when the argument was left out (null, undefined) or points at a blank cell. */
 export function isOmitted(value: unknown): boolean {
@@ -75,4 +76,12 @@ export function decimalValue(option: string, value: unknown, meaning: string): n
     : typeof value === 'string' && /^\s*[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?\s*$/.test(value) ? Number(value) : NaN;
   if (!Number.isFinite(n)) throw new MooringInputError(`${option} must be a number (${meaning}); got ${shown(value)}.`);
   return n;
+}
+
+/** The last argument of every function that reads prices: how to prepare them (addin/series/preparation.ts). */
+export function prepValue(value: unknown): Preparation {
+  // A reference to one cell may arrive as a 1 x 1 range (the results block points every
+  // formula at its one preparation cell).
+  const single = Array.isArray(value) && value.length === 1 && Array.isArray(value[0]) && value[0].length === 1 ? value[0][0] : value;
+  return parsePreparation(isOmitted(single) ? null : single, 'prep');
 }

@@ -29,6 +29,9 @@ export type Show = (typeof SHOW_WORDS)[number];
 export const HEDGE_WORDS = ['ols', 'reverse-ols', 'tls', 'dols'] as const;
 export type HedgeWord = (typeof HEDGE_WORDS)[number];
 
+/** What MOOR.HEDGE returns: the slope (an elasticity when the prices are in logs) or the units of x to hold per unit of y at the latest prices. */
+export const HEDGE_SHOW_WORDS = ['slope', 'units'] as const;
+
 /** Which lead-lag test: auto (the one valid for the data), f, ty (Toda-Yamamoto) or ecm (error correction). */
 export const LEAD_LAG_METHODS = ['auto', 'f', 'ty', 'ecm'] as const;
 

@@ -15,14 +15,20 @@ export function cellNumber(value: number | null | undefined, what: string, why?:
   return value;
 }
 
-/** Values for a spilled column or row; null (no value at that position) becomes an empty cell. */
-export function spillValues(values: ArrayLike<number | null>, what: string, leadingBlanks = 0): (number | string)[] {
-  const out: (number | string)[] = new Array(leadingBlanks).fill('');
-  for (let i = 0; i < values.length; i++) {
-    const v = values[i];
-    if (v === null) out.push('');
-    else if (Number.isFinite(v)) out.push(v);
-    else throw new Error(`${what} value ${i + 1} came out as ${String(v)}`);
+/**
+ * Values for a spilled column or row placed at their source rows: value k goes to position
+ * rows[k] of the range, and every row the analysis did not use (blanks before the prices, gaps
+ * skipped, rows outside the window) is an empty cell, so the spill lines up with the range it
+ * was read from. null (no value at that row) is an empty cell too.
+ */
+export function spillByRow(values: ArrayLike<number | null>, rows: ArrayLike<number>, what: string): (number | string)[] {
+  const length = rows.length === 0 ? 0 : rows[rows.length - 1] + 1;
+  const out: (number | string)[] = new Array(length).fill('');
+  for (let k = 0; k < values.length; k++) {
+    const v = values[k];
+    if (v === null) continue;
+    if (!Number.isFinite(v)) throw new Error(`${what} value ${k + 1} came out as ${String(v)}`);
+    out[rows[k]] = v;
   }
   return out;
 }

@@ -15,6 +15,21 @@ export interface BlockNote {
   a: string;
   b: string;
   reserved: string[];
+  /**
+   * The analysis the block shows, so a refresh runs the same one: the preparation of the prices
+   * (addin/series/preparation.ts words) and the report's choices. Absent in notes written
+   * before they were recorded (a refresh then uses the defaults).
+   */
+  analysis?: BlockAnalysis;
+}
+
+/** The choices a block was written with. */
+export interface BlockAnalysis {
+  preparation: string;
+  alpha: number;
+  deterministic: string;
+  lagRule: string;
+  johansenCase: string;
 }
 
 /** Longest comment Excel keeps on a name. */
@@ -24,7 +39,11 @@ const KIND = 'mooring-block-1';
 
 /** The note as text, within the limit where it can be. */
 export function encodeBlockNote(note: BlockNote): string {
-  const full = { k: KIND, s: note.sheet, r: note.address, t: note.table, a: note.a, b: note.b, x: note.reserved };
+  const n = note.analysis;
+  const full = {
+    k: KIND, s: note.sheet, r: note.address, t: note.table, a: note.a, b: note.b, x: note.reserved,
+    ...(n ? { p: n.preparation, o: [n.alpha, n.deterministic, n.lagRule, n.johansenCase] } : {}),
+  };
   const tries = [full, { ...full, x: [] as string[] }, ...(note.table ? [{ ...full, x: [] as string[], r: '' }] : [])];
   for (const t of tries) {
     const text = JSON.stringify(t);
@@ -50,5 +69,12 @@ export function decodeBlockNote(text: string | null | undefined): BlockNote | nu
     a: o.a,
     b: o.b,
     reserved: Array.isArray(o.x) ? o.x.filter((v): v is string => typeof v === 'string') : [],
+    ...analysisOf(o),
   };
+}
+
+function analysisOf(o: Record<string, unknown>): { analysis?: BlockAnalysis } {
+  const c = o.o;
+  if (typeof o.p !== 'string' || !Array.isArray(c) || c.length !== 4 || typeof c[0] !== 'number' || !c.slice(1).every((v) => typeof v === 'string')) return {};
+  return { analysis: { preparation: o.p, alpha: c[0], deterministic: c[1] as string, lagRule: c[2] as string, johansenCase: c[3] as string } };
 }

@@ -6,6 +6,7 @@
  * BlockToWrite plus a ChartToAdd; nothing is written here (see plan-block-write.ts).
  */
 import { MooringInputError } from '../../addin/errors';
+import { describePreparation, parsePreparation, type Preparation } from '../../addin/series/preparation';
 import type { PairReport } from '../../addin/report/pair-types';
 import type { DiagnosticReport } from '../../addin/report/report-types';
 import { cellAddress, parseRange, rangeAddress } from '../workbook/a1-address';
@@ -78,6 +79,13 @@ export function buildPairBlock(report: DiagnosticReport, pair: { a: string; b: s
     [COL.value]: { value: report.settings.alpha, format: { numberFormat: NUMBER_FORMAT.level } },
     [COL.how]: { value: 'a p-value below it counts as evidence; write the block again to use another level', format: STYLE.note },
   });
+  const prep = pairPreparation(report, p.a, p.b, region);
+  const prepRow = g.add({
+    [COL.label]: { value: 'Prices prepared as', format: STYLE.label },
+    [COL.value]: { value: describePreparation(prep), format: STYLE.label },
+    [COL.how]: { value: preparationWords(prep, region), format: STYLE.note },
+  });
+  const prepCell = cellAddress({ row: g.anchor.row + prepRow, col: g.anchor.col + COL.value }, true);
 
   // The chart's columns: heads, then one spilling formula each.
   const spillRow = TOP_ROWS.spill;
@@ -91,14 +99,14 @@ export function buildPairBlock(report: DiagnosticReport, pair: { a: string; b: s
   const band = (sign: '+' | '-') => `=IF(ISNUMBER(${spreadCell}#),AVERAGE(${spreadCell}#)${sign}2*STDEV.S(${spreadCell}#),NA())`;
   const spills = [
     { formula: dates ? `=${dates}` : `=ROW(${yRef})`, format: { numberFormat: dates ? NUMBER_FORMAT.date : NUMBER_FORMAT.count } },
-    { formula: `=MOOR.SPREAD(${yRef},${xRef})`, format: { numberFormat: NUMBER_FORMAT.spread } },
+    { formula: `=MOOR.SPREAD(${yRef},${xRef},,${prepCell})`, format: { numberFormat: NUMBER_FORMAT.spread } },
     { formula: band('+'), format: { numberFormat: NUMBER_FORMAT.spread } },
     { formula: band('-'), format: { numberFormat: NUMBER_FORMAT.spread } },
-    { formula: `=MOOR.ZSCORE(${yRef},${xRef})`, format: { numberFormat: NUMBER_FORMAT.statistic } },
+    { formula: `=MOOR.ZSCORE(${yRef},${xRef},,${prepCell})`, format: { numberFormat: NUMBER_FORMAT.statistic } },
   ];
   spills.forEach((cell, k) => g.set(spillRow, COL.chart + k, cell));
 
-  const context: StageContext = { report, pair: p, refs, y, x, zSpill };
+  const context: StageContext = { report, pair: p, refs, y, x, zSpill, prep: prepCell };
   seriesStage(g, context);
   tieStage(g, context);
   lineStage(g, context);
@@ -122,7 +130,10 @@ export function buildPairBlock(report: DiagnosticReport, pair: { a: string; b: s
     name,
     columnWidths: COLUMN_WIDTHS.slice(),
     reserved,
-    note: encodeBlockNote({ sheet: region.sheet, address: region.address, table: region.tableName, a: p.a, b: p.b, reserved }),
+    note: encodeBlockNote({
+      sheet: region.sheet, address: region.address, table: region.tableName, a: p.a, b: p.b, reserved,
+      analysis: { preparation: report.settings.preparation ?? '', alpha: report.settings.alpha, deterministic: report.settings.deterministic, lagRule: report.settings.lagRule, johansenCase: report.settings.johansenCase },
+    }),
   };
   const chart: ChartToAdd = {
     sheet: placement.sheet,
@@ -137,4 +148,41 @@ export function buildPairBlock(report: DiagnosticReport, pair: { a: string; b: s
     name,
   };
   return { block, chart };
+}
+
+/**
+ * The preparation the block's formulas use: the report's own (logs, gaps, window), plus, when
+ * gaps were skipped across more series than the pair, the rows the analysis lost only because
+ * another of its series had a gap there, so the pair's formulas use exactly the report's rows.
+ */
+export function pairPreparation(report: DiagnosticReport, a: string, b: string, region: DataRegion): Preparation {
+  const prep = parsePreparation(report.settings.preparation ?? '');
+  const others = report.series.map((s) => s.name).filter((n) => n !== a && n !== b).map((n) => region.headers.indexOf(n)).filter((j) => j >= 0);
+  if (!prep.skipGaps || others.length === 0) return prep;
+  const ja = region.headers.indexOf(a);
+  const jb = region.headers.indexOf(b);
+  const isPrice = (v: unknown): boolean => typeof v === 'number' && Number.isFinite(v);
+  const skip: number[] = [];
+  region.rows.forEach((row, i) => {
+    if (isPrice(row[ja]) && isPrice(row[jb]) && others.some((j) => !isPrice(row[j]))) skip.push(i + 1);
+  });
+  return skip.length === 0 ? prep : { ...prep, skipRows: [...new Set([...prep.skipRows, ...skip])].sort((m, n) => m - n) };
+}
+
+/** The preparation in plain words beside its cell. */
+function preparationWords(prep: Preparation, region: DataRegion): string {
+  const rowText = (r: number): string => {
+    const d = region.dateColumn;
+    const date = d === null ? null : region.rows[r - 1]?.[d];
+    return `row ${r} of the data${typeof date === 'string' && date.trim() ? ` (${date.trim()})` : ''}`;
+  };
+  const parts = [
+    prep.log ? 'natural logs of the prices' : 'the prices as they are',
+    prep.skipGaps ? 'rows with a blank or text cell left out' : 'a blank or text cell refused',
+  ];
+  if (prep.fromRow !== null) parts.push(`from ${rowText(prep.fromRow)}`);
+  if (prep.toRow !== null) parts.push(`to ${rowText(prep.toRow)}`);
+  if (prep.lastRows !== null) parts.push(`the last ${prep.lastRows} rows`);
+  if (prep.skipRows.length > 0) parts.push(`${prep.skipRows.length} row${prep.skipRows.length === 1 ? '' : 's'} left out because another series of the analysis had a gap there`);
+  return `${parts.join('; ')}. Every formula of this block reads this cell, so it uses the rows the pane used.`;
 }

@@ -29,7 +29,17 @@ export async function refreshBlock(port: WorkbookPort, name: string, options: Di
   const note = decodeBlockNote(found.note ?? null);
   if (!note) throw new MooringInputError(`The name ${name} does not say where its data came from: write the block again from the pane.`, name);
   const region = await sourceOf(port, note);
-  const report = regionReport(region, [note.a, note.b], options);
+  // The analysis the block was written with, unless the caller says otherwise.
+  const recorded: DiagnosticOptions = note.analysis
+    ? {
+        preparation: note.analysis.preparation,
+        alpha: note.analysis.alpha,
+        deterministic: note.analysis.deterministic as DiagnosticOptions['deterministic'],
+        lagRule: note.analysis.lagRule as DiagnosticOptions['lagRule'],
+        johansenCase: note.analysis.johansenCase as DiagnosticOptions['johansenCase'],
+      }
+    : {};
+  const report = regionReport(region, [note.a, note.b], { ...recorded, ...options });
   const old = parseRange(found.address);
   const { block, chart } = buildPairBlock(report, { a: note.a, b: note.b }, region, { sheet: found.sheet, anchor: cellAddress({ row: old.top, col: old.left }) });
   const plan = await planBlockWrite(port, block, chart);

@@ -9,10 +9,16 @@ import { diagnose, type DiagnosticOptions } from '../../addin/report/pairwise-di
 import { prepareDiagnosticInput } from '../../addin/report/prepare-input';
 import type { DiagnosticReport } from '../../addin/report/report-types';
 import { cleanBlock } from '../../addin/series/clean-block';
+import { cutWindow, parsePreparation } from '../../addin/series/preparation';
 import type { DataRegion } from '../workbook/port';
 
-/** The report of the named columns of the region (two or more). */
-export function regionReport(region: DataRegion, names: readonly string[], options: DiagnosticOptions & { skipGaps?: boolean } = {}): DiagnosticReport {
+/**
+ * The report of the named columns of the region (two or more), with the prices prepared as
+ * `options.preparation` says (logs, gaps, window: addin/series/preparation.ts), the same rule
+ * the block's formulas apply to the same cells.
+ */
+export function regionReport(region: DataRegion, names: readonly string[], options: DiagnosticOptions = {}): DiagnosticReport {
+  const prep = parsePreparation(options.preparation ?? '', 'The preparation of the prices');
   const columns = names.map((name) => {
     const j = region.headers.indexOf(name);
     if (j < 0) throw new MooringInputError(`There is no column headed '${name}' in ${region.sheet}!${region.address}: pick one of ${region.headers.join(', ')}.`);
@@ -20,7 +26,7 @@ export function regionReport(region: DataRegion, names: readonly string[], optio
     return region.rows.map((row) => row[j]);
   });
   const sheetRow = (i: number) => `${region.sheet} row ${region.firstDataRow + i}`;
-  const series = cleanBlock(columns, names, { rowLabel: sheetRow, skipGaps: options.skipGaps });
+  const series = cutWindow(cleanBlock(columns, names, { rowLabel: sheetRow, skipGaps: prep.skipGaps, log: prep.log }), prep);
   const d = region.dateColumn;
   const dateOf = (i: number): string | null => {
     if (d === null) return null;
@@ -28,6 +34,5 @@ export function regionReport(region: DataRegion, names: readonly string[], optio
     return typeof v === 'string' && v.trim() !== '' ? v.trim() : null;
   };
   const input = prepareDiagnosticInput(series, { dateOf, source: region.tableName ?? `${region.sheet}!${region.address}` });
-  const { skipGaps: _skip, ...engineOptions } = options;
-  return diagnose(input, engineOptions);
+  return diagnose(input, { ...options, log: prep.log });
 }

@@ -28,6 +28,8 @@ export interface StageContext {
   x: string;
   /** Address of the cell whose z-scores spill (for the latest z-score). */
   zSpill: string;
+  /** Absolute address of the cell holding the preparation every formula reads (logs, gaps, window). */
+  prep: string;
 }
 
 /** A number row: label, the number (formula or fixed value), its reading, and how it was made. */
@@ -61,8 +63,10 @@ function section(g: BlockGrid, title: string): void {
 export function seriesStage(g: BlockGrid, c: StageContext): void {
   const { alpha, deterministic } = c.report.settings;
   section(g, 'Each series on its own');
-  for (const name of [c.pair.a, c.pair.b]) {
-    numberRow(g, `Does ${name} wander? Order of integration`, { formula: `=MOOR.ORDER(${c.refs.column(name)},${alpha},${textLiteral(deterministic)})` },
+  const both = `HSTACK(${c.refs.column(c.pair.a)},${c.refs.column(c.pair.b)})`;
+  for (const [k, name] of [c.pair.a, c.pair.b].entries()) {
+    // Both columns go in so the order is found on the rows the pair shares, as in the pane.
+    numberRow(g, `Does ${name} wander? Order of integration`, { formula: `=INDEX(MOOR.ORDER(${both},${alpha},${textLiteral(deterministic)},${c.prep}),1,${k + 1})` },
       NUMBER_FORMAT.count, orderReading, 'ADF down from the levels, checked by KPSS: 0 settles, 1 wanders, 2 wanders in its changes too');
   }
 }
@@ -72,22 +76,22 @@ export function tieStage(g: BlockGrid, c: StageContext): void {
   const { alpha, deterministic, lagRule } = c.report.settings;
   const { a, b } = c.pair;
   section(g, 'Are they tied together in the long run?');
-  const eg = (y: string, x: string) => `=MOOR.EGTEST(${c.refs.column(y)},${c.refs.column(x)},${textLiteral(deterministic)},${textLiteral(lagRule)})`;
+  const eg = (y: string, x: string) => `=MOOR.EGTEST(${c.refs.column(y)},${c.refs.column(x)},${textLiteral(deterministic)},${textLiteral(lagRule)},"headline",${c.prep})`;
   const tie = (cell: string) => pValueReading(cell, alpha, 'tied', 'no evidence of a tie');
   numberRow(g, `Tied? Engle-Granger, ${a} on ${b} (p-value)`, { formula: eg(a, b) }, NUMBER_FORMAT.pValue, tie,
     `the gap left by the least-squares line of ${a} on ${b} is tested for a pull back; lags by ${lagRule.toUpperCase()}`);
   numberRow(g, `Tied? Engle-Granger, ${b} on ${a} (p-value)`, { formula: eg(b, a) }, NUMBER_FORMAT.pValue, tie,
     'the same test with the roles swapped; the two can disagree in short samples');
   numberRow(g, `Tied? Phillips-Ouliaris, ${c.y} on ${c.x} (p-value)`,
-    { formula: `=MOOR.POTEST(${c.refs.column(c.y)},${c.refs.column(c.x)},${textLiteral(deterministic)})` }, NUMBER_FORMAT.pValue, tie,
+    { formula: `=MOOR.POTEST(${c.refs.column(c.y)},${c.refs.column(c.x)},${textLiteral(deterministic)},"auto","headline",${c.prep})` }, NUMBER_FORMAT.pValue, tie,
     'the same question, correcting for autocorrelation with a long-run variance instead of lags');
   const j = c.pair.cointegration.johansen;
   if (j) {
     const args = `${c.refs.pair(a, b)},${j.lags},${textLiteral(j.case)}`;
-    numberRow(g, 'Tied? Johansen trace test of no relation (p-value)', { formula: `=MOOR.JOHANSEN(${args})` }, NUMBER_FORMAT.pValue,
+    numberRow(g, 'Tied? Johansen trace test of no relation (p-value)', { formula: `=MOOR.JOHANSEN(${args},"headline",${c.prep})` }, NUMBER_FORMAT.pValue,
       (cell) => pValueReading(cell, alpha, 'at least one long-run relation', 'no evidence of a relation'),
       `both series in one model, ${j.lags} lagged change${j.lags === 1 ? '' : 's'}; ${j.caseReason}`);
-    numberRow(g, 'Long-run relations found by Johansen', { formula: `=MOOR.RANK(${args},${alpha})` }, NUMBER_FORMAT.count, rankReading,
+    numberRow(g, 'Long-run relations found by Johansen', { formula: `=MOOR.RANK(${args},${alpha},${c.prep})` }, NUMBER_FORMAT.count, rankReading,
       'the trace test taken step by step at the level above');
   }
 }
@@ -99,16 +103,26 @@ export function lineStage(g: BlockGrid, c: StageContext): void {
   const y = c.refs.column(c.y);
   const x = c.refs.column(c.x);
   section(g, `The long-run line of ${c.y} on ${c.x}, and how its gap closes`);
-  numberRow(g, `Hedge ratio: units of ${c.x} per unit of ${c.y} (least squares)`, { formula: `=MOOR.HEDGE(${y},${x})` }, NUMBER_FORMAT.ratio, null,
-    `${c.y} = intercept + ratio x ${c.x}; the spread beside is what this line leaves over`);
-  numberRow(g, 'Hedge ratio (dynamic OLS)', { formula: `=MOOR.HEDGE(${y},${x},"dols")` }, NUMBER_FORMAT.ratio, null,
-    'with leads and lags of the changes, chosen by AIC: the estimate with sound standard errors for wandering prices');
-  numberRow(g, `Does ${c.y} move back? Speed of adjustment`, { formula: `=MOOR.ECM(${y},${x},"aic")` }, NUMBER_FORMAT.ratio,
+  if (c.report.data.logged) {
+    // In logs the slope is an elasticity; the quantity to hold is sized at the latest prices.
+    numberRow(g, `Elasticity of ${c.y} to ${c.x} (least squares, in logs)`, { formula: `=MOOR.HEDGE(${y},${x},"ols","slope",${c.prep})` }, NUMBER_FORMAT.ratio, null,
+      `ln ${c.y} = intercept + slope x ln ${c.x}: a 1% move in ${c.x} goes with about this many % in ${c.y}; the spread beside is what this line leaves over`);
+    numberRow(g, `Hedge at the latest prices: units of ${c.x} per unit of ${c.y}`, { formula: `=MOOR.HEDGE(${y},${x},"ols","units",${c.prep})` }, NUMBER_FORMAT.ratio, null,
+      'the elasticity times the last price of the first over the last price of the second; it drifts as the prices move');
+    numberRow(g, 'Elasticity (dynamic OLS)', { formula: `=MOOR.HEDGE(${y},${x},"dols","slope",${c.prep})` }, NUMBER_FORMAT.ratio, null,
+      'with leads and lags of the changes, chosen by AIC: the estimate with sound standard errors for wandering prices');
+  } else {
+    numberRow(g, `Hedge ratio: units of ${c.x} per unit of ${c.y} (least squares)`, { formula: `=MOOR.HEDGE(${y},${x},"ols","slope",${c.prep})` }, NUMBER_FORMAT.ratio, null,
+      `${c.y} = intercept + ratio x ${c.x}; the spread beside is what this line leaves over`);
+    numberRow(g, 'Hedge ratio (dynamic OLS)', { formula: `=MOOR.HEDGE(${y},${x},"dols","slope",${c.prep})` }, NUMBER_FORMAT.ratio, null,
+      'with leads and lags of the changes, chosen by AIC: the estimate with sound standard errors for wandering prices');
+  }
+  numberRow(g, `Does ${c.y} move back? Speed of adjustment`, { formula: `=MOOR.ECM(${y},${x},"aic","headline",${c.prep})` }, NUMBER_FORMAT.ratio,
     (cell) => speedReading(cell, c.y), `error-correction model: the share of yesterday's gap ${c.y} closes per ${period}; lags by AIC`);
   const critical = normalQuantile(1 - alpha / 2);
-  numberRow(g, 'Is that pull significant? t-value of the speed', { formula: `=MOOR.ECM(${y},${x},"aic","stat")` }, NUMBER_FORMAT.statistic,
+  numberRow(g, 'Is that pull significant? t-value of the speed', { formula: `=MOOR.ECM(${y},${x},"aic","stat",${c.prep})` }, NUMBER_FORMAT.statistic,
     (cell) => pullReading(cell, critical, alpha), `significant when at or below -${critical.toFixed(2)} (two-sided, normal approximation)`);
-  numberRow(g, 'Does the spread revert? Half-life', { formula: `=MOOR.HALFLIFE(${y},${x})` }, periodsFormat(period),
+  numberRow(g, 'Does the spread revert? Half-life', { formula: `=MOOR.HALFLIFE(${y},${x},${c.prep})` }, periodsFormat(period),
     (cell) => halfLifeReading(cell, period), `${period}s for a gap in the spread to halve, from its AR(1) coefficient`);
   numberRow(g, 'Is the spread stretched now? Latest z-score', { formula: `=INDEX(${c.zSpill}#,ROWS(${c.zSpill}#))` }, NUMBER_FORMAT.statistic,
     stretchReading, 'standard deviations from its mean on the last row, over the whole sample');
@@ -124,7 +138,7 @@ export function leadStage(g: BlockGrid, c: StageContext): void {
   for (const d of [ll.aLeadsB, ll.bLeadsA]) {
     const lags = d.test.lags ?? 1;
     const number = cellForm
-      ? { formula: `=MOOR.GRANGER(${c.refs.column(d.cause)},${c.refs.column(d.effect)},${lags},${textLiteral(cellForm)})` }
+      ? { formula: `=MOOR.GRANGER(${c.refs.column(d.cause)},${c.refs.column(d.effect)},${lags},${textLiteral(cellForm)},"headline",${c.prep})` }
       : { fixed: d.test.pValue };
     const how = cellForm
       ? `F test on the ${cellForm === 'changes' ? 'changes' : 'values'} with ${lags} lag${lags === 1 ? '' : 's'}`

@@ -57,9 +57,13 @@ export function pullReading(cell: string, critical: number, alpha: number): stri
   );
 }
 
-/** A half-life exists only when the spread reverts. */
+/**
+ * A half-life exists only when the spread reverts. The function answers #N/A when there is
+ * none; any other error (a refused input) is not a finding about the spread, so it reads n/a.
+ */
 export function halfLifeReading(cell: string, period: string): string {
-  return `=IF(ISNUMBER(${cell}),${textLiteral(`${YES}: half of a gap closes in about this many ${period}s`)},${textLiteral(`${NO}: the spread does not revert, so no half-life`)})`;
+  return `=IF(ISNUMBER(${cell}),${textLiteral(`${YES}: half of a gap closes in about this many ${period}s`)},` +
+    `IF(ISNA(${cell}),${textLiteral(`${NO}: the spread does not revert, so no half-life`)},${textLiteral(`${NA}: no half-life (see the message on the number)`)}))`;
 }
 
 /** Whether the latest z-score lies beyond the 2-standard-deviation bands. */

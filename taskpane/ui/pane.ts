@@ -63,7 +63,8 @@ export interface PaneHandle {
 
 /** What a prepared input covers, in words, to tell whether the report in hand is of the data on screen. */
 export function coverage(prepared: PreparedData): string {
-  return `${prepared.names.join(', ')} on ${prepared.input.source ?? 'the sheet'}`;
+  const how = prepared.prepText ? ` (${prepared.prepText})` : '';
+  return `${prepared.names.join(', ')} on ${prepared.input.source ?? 'the sheet'}${how}`;
 }
 
 /** Mounts the pane into `root`. */
@@ -142,7 +143,7 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
     if (!s.prepared || s.running) return;
     const prepared = s.prepared;
     const regionRows = prepared.regionRows;
-    const handle = deps.runner.run(prepared.input, { log: s.choice.log, alpha: s.choice.alpha, window: prepared.window, ...s.stage }, (size) => {
+    const handle = deps.runner.run(prepared.input, { log: s.choice.log, alpha: s.choice.alpha, window: prepared.window, preparation: prepared.prepText, ...s.stage }, (size) => {
       if (s.running) s.running.size = size;
       render();
     });

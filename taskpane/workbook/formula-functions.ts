@@ -3,7 +3,7 @@
  * through the very implementations functions/functions.ts registers with Excel (so a test
  * of the block exercises the same code a user's cell runs), and the handful of Excel
  * built-ins the results block uses (IF, ISNUMBER, NA, ABS, AVERAGE, STDEV.S, COUNT, ROWS,
- * ROW, INDEX, HSTACK). Any other name is #NAME?, as in Excel for an unknown function.
+ * ROW, INDEX, HSTACK, ISNA). Any other name is #NAME?, as in Excel for an unknown function.
  */
 import * as registered from '../../functions/functions';
 import {
@@ -93,6 +93,7 @@ const BUILTINS: Record<string, Builtin> = {
       return t instanceof FormulaError ? t : t ? a : b;
     }),
   ISNUMBER: (call) => elementwise([arg(call, 0)], call.read, ([x]) => typeof x === 'number'),
+  ISNA: (call) => elementwise([arg(call, 0)], call.read, ([x]) => x instanceof FormulaError && x.code === '#N/A'),
   NA: () => new FormulaError('#N/A'),
   ABS: (call) =>
     elementwise([arg(call, 0)], call.read, ([x]) => {

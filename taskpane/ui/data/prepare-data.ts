@@ -10,6 +10,7 @@ import type { DiagnosticOptions } from '../../../addin/report/check-input';
 import { prepareDiagnosticInput, type DiagnosticInput } from '../../../addin/report/prepare-input';
 import type { DroppedRow } from '../../../addin/report/report-types';
 import { cleanBlock } from '../../../addin/series/clean-block';
+import { AS_GIVEN, describePreparation, windowPositions, type Preparation } from '../../../addin/series/preparation';
 import type { DataRegion } from '../../workbook/port';
 import { describeColumns } from './columns';
 import { dateCellText } from './excel-date';
@@ -50,6 +51,13 @@ export interface PreparedData {
   outsideWindow: number;
   /** Names of the series, as the headers have them. */
   names: string[];
+  /**
+   * The choices as one preparation (logs, gaps, the window as rows of the region), the value
+   * the results block hands to every formula; its text goes to the engine with the options.
+   */
+  prep: Preparation;
+  /** The preparation in words ("log, skip gaps, from row 260"). */
+  prepText: string;
 }
 
 /** Cleans the chosen columns of the region and cuts the sample window. */
@@ -69,9 +77,17 @@ export function prepareData(region: DataRegion, choice: DataChoice): PreparedDat
     source: `${region.sheet}!${region.address}`,
   });
   const sourceRows = Array.from(block[0].rows);
-  const window = windowOf(choice, sourceRows, dates, first);
-  const start = window?.start ?? 0;
-  const end = window?.end ?? sourceRows.length;
+  const range = windowOf(choice, sourceRows, dates, first);
+  // The window as rows of the region, read back through the one window rule every formula uses.
+  const prep: Preparation = {
+    ...AS_GIVEN,
+    log: choice.log,
+    skipGaps: choice.skipGaps,
+    fromRow: range && range.start > 0 ? sourceRows[range.start] + 1 : null,
+    toRow: range && range.end < sourceRows.length ? sourceRows[range.end - 1] + 1 : null,
+  };
+  const { start, end } = windowPositions(sourceRows, prep, 1);
+  const window = start === 0 && end === sourceRows.length ? undefined : { start, end };
   return {
     input,
     window,
@@ -83,6 +99,8 @@ export function prepareData(region: DataRegion, choice: DataChoice): PreparedDat
     dropped: input.dropped ?? [],
     outsideWindow: sourceRows.length - (end - start),
     names,
+    prep,
+    prepText: describePreparation(prep),
   };
 }
 

@@ -1,0 +1,161 @@
+/**
+ * One analysis, one set of numbers: the pane's run and the results block it writes give the
+ * same number for every quantity both show, under the pane's choices (logs on and off, a
+ * date window, a skipped gap, each lag rule), when written and after 12 rows are appended.
+ *
+ * The pane's side is the engine report made exactly as the pane makes it (prepareData, then
+ * diagnose with the pane's options): every number the pane's steps show is read from that
+ * report. The block's side is what its live MOOR formulas calculate in the in-memory
+ * workbook, through the same implementations Excel calls. Source of the expected values: the
+ * other surface (the check is agreement, 1e-12 relative); the demo data are our own.
+ */
+import { describe, expect, it } from 'vitest';
+import { diagnose } from '../../addin/report/pairwise-diagnostic';
+import type { DiagnosticReport } from '../../addin/report/report-types';
+import { buildPairBlock, type PairBlock } from '../../taskpane/block/pair-block';
+import { planBlockWrite, writePlannedBlock } from '../../taskpane/block/plan-block-write';
+import { prepareData, type DataChoice } from '../../taskpane/ui/data/prepare-data';
+import { loadCsvTable } from '../../taskpane/workbook/demo-workbook';
+import type { MemoryWorkbook } from '../../taskpane/workbook/memory-workbook';
+import type { CellContent, DataRegion } from '../../taskpane/workbook/port';
+import { DEMO_CSV, PAIR, rowOf } from '../pane-workbook/demo-block';
+
+interface Combo {
+  name: string;
+  log: boolean;
+  from: string | null;
+  to: string | null;
+  /** Sheet cells to blank before the run (gaps), when gaps are skipped. */
+  gaps: string[];
+  lagRule: 'aic' | 'bic';
+  /** Extra series selected besides the pair (their gaps drop rows of the pair too). */
+  extra: string[];
+}
+
+const COMBOS: Combo[] = [
+  { name: 'logs on, every row, AIC (the pane\'s defaults)', log: true, from: null, to: null, gaps: [], lagRule: 'aic', extra: [] },
+  { name: 'logs off, BIC', log: false, from: null, to: null, gaps: [], lagRule: 'bic', extra: [] },
+  { name: 'logs on, from a date', log: true, from: '2024-01-02', to: null, gaps: [], lagRule: 'aic', extra: [] },
+  { name: 'logs on, a skipped gap in each series', log: true, from: null, to: null, gaps: ['B120', 'C300'], lagRule: 'aic', extra: [] },
+  { name: 'logs on, from a date, a skipped gap inside the window, BIC', log: true, from: '2023-06-01', to: null, gaps: ['C700'], lagRule: 'bic', extra: [] },
+  { name: 'logs off, a closed window, a skipped gap', log: false, from: '2022-06-01', to: '2024-06-28', gaps: ['B400'], lagRule: 'aic', extra: [] },
+  { name: 'logs on, a third series whose gap drops a row of the pair', log: true, from: null, to: null, gaps: ['D200'], lagRule: 'aic', extra: ['HeavyFuel'] },
+];
+
+/** Twelve business days after the demo's last day, near the pair's line. */
+function twelveRows(region: DataRegion): CellContent[][] {
+  const last = region.rows[region.rows.length - 1];
+  const out: CellContent[][] = [];
+  for (let k = 0; k < 12; k++) {
+    const day = new Date(Date.UTC(2024, 11, 30) + k * 86_400_000);
+    if (day.getUTCDay() === 0 || day.getUTCDay() === 6) continue;
+    out.push([day.toISOString().slice(0, 10), ...last.slice(1).map((v, j) => (typeof v === 'number' ? v * (1 + 0.002 * ((k + j) % 5)) : v))]);
+  }
+  while (out.length < 12) {
+    const prev = out[out.length - 1];
+    const d = new Date(`${prev[0] as string}T00:00:00Z`);
+    d.setUTCDate(d.getUTCDate() + (d.getUTCDay() === 5 ? 3 : 1));
+    out.push([d.toISOString().slice(0, 10), ...prev.slice(1)]);
+  }
+  return out;
+}
+
+/** The pane's run: its data step, then the engine with the options pane.ts passes. */
+function paneReport(region: DataRegion, combo: Combo): DiagnosticReport {
+  const names = [PAIR.a, PAIR.b, ...combo.extra];
+  const choice: DataChoice = {
+    columns: names.map((n) => region.headers.indexOf(n)),
+    log: combo.log,
+    skipGaps: true,
+    from: combo.from,
+    to: combo.to,
+    alpha: 0.05,
+  };
+  const prepared = prepareData(region, choice);
+  return diagnose(prepared.input, {
+    log: choice.log, alpha: choice.alpha, window: prepared.window, preparation: prepared.prepText,
+    deterministic: 'const', lagRule: combo.lagRule, johansenCase: 'auto',
+  });
+}
+
+/** Every number the block and the pane both show, read from the report. */
+function paneNumbers(report: DiagnosticReport): Record<string, number | null> {
+  const p = report.pairs.find((q) => [q.a, q.b].sort().join() === [PAIR.a, PAIR.b].sort().join());
+  if (!p || !p.relation || !p.adjustment || !p.spread) throw new Error('the demo pair should have its relation, adjustment and spread');
+  const order = (name: string) => report.series.find((s) => s.name === name)?.order ?? null;
+  const eg = p.cointegration.engleGranger;
+  const out: Record<string, number | null> = {
+    [`Does ${p.a} wander?`]: order(p.a),
+    [`Does ${p.b} wander?`]: order(p.b),
+    [`Tied? Engle-Granger, ${p.a} on ${p.b}`]: eg.aOnB.pValue,
+    [`Tied? Engle-Granger, ${p.b} on ${p.a}`]: eg.bOnA.pValue,
+    'Tied? Phillips-Ouliaris': p.cointegration.phillipsOuliaris?.pValue ?? null,
+    [`Does ${p.adjustment.ecm.dependent.series} move back?`]: p.adjustment.ecm.dependent.speed,
+    'Is that pull significant?': p.adjustment.ecm.dependent.speed / p.adjustment.ecm.dependent.standardError,
+    'Does the spread revert? Half-life': p.adjustment.spreadAr1.halfLife,
+    'Is the spread stretched now?': p.spread.latestZ,
+  };
+  if (report.data.logged) {
+    out['Elasticity of'] = p.relation.ols.beta;
+    out['Hedge at the latest prices'] = p.relation.ols.hedgeUnits;
+    out['Elasticity (dynamic OLS)'] = p.relation.dynamicOls.beta;
+  } else {
+    out['Hedge ratio: units'] = p.relation.ols.beta;
+    out['Hedge ratio (dynamic OLS)'] = p.relation.dynamicOls.beta;
+  }
+  const j = p.cointegration.johansen;
+  if (j) {
+    out['Tied? Johansen'] = j.trace[0].pValue;
+    out['Long-run relations found by Johansen'] = j.rank.trace;
+  }
+  if (p.leadLag && (p.leadLag.method === 'f-differences' || p.leadLag.method === 'f-levels')) {
+    out[`Does ${p.leadLag.aLeadsB.cause} lead`] = p.leadLag.aLeadsB.test.pValue;
+    out[`Does ${p.leadLag.bLeadsA.cause} lead`] = p.leadLag.bLeadsA.test.pValue;
+  }
+  return out;
+}
+
+async function writeBlock(wb: MemoryWorkbook, report: DiagnosticReport, region: DataRegion): Promise<PairBlock> {
+  const built = buildPairBlock(report, PAIR, region);
+  const outcome = await writePlannedBlock(wb, await planBlockWrite(wb, built.block, built.chart), true);
+  expect(outcome.ok).toBe(true);
+  return built;
+}
+
+function expectSameNumbers(wb: MemoryWorkbook, built: PairBlock, pane: Record<string, number | null>): void {
+  const valueColumn = 'J'; // the demo block is anchored at I1, its numbers in the next column
+  for (const [label, expected] of Object.entries(pane)) {
+    const shown = wb.shownValue('Prices', `${valueColumn}${rowOf(built, label)}`);
+    if (expected === null) {
+      expect(typeof shown, `${label}: the pane has no number, so neither may the block`).not.toBe('number');
+      continue;
+    }
+    expect(typeof shown, `${label}: the block shows ${String(shown)} (${wb.cellAt('Prices', `${valueColumn}${rowOf(built, label)}`).error ?? ''})`).toBe('number');
+    const rel = Math.abs((shown as number) - expected) / Math.max(Math.abs(expected), 1e-300);
+    expect(rel, `${label}: block ${String(shown)} vs pane ${expected}`).toBeLessThan(1e-12);
+  }
+}
+
+describe('the pane and the block it writes show the same numbers', () => {
+  for (const combo of COMBOS) {
+    it(`${combo.name}: when written and after 12 appended rows`, async () => {
+      const wb = loadCsvTable(DEMO_CSV);
+      for (const cell of combo.gaps) wb.setValues('Prices', cell, [['']]);
+      let region = await wb.readTable('QuennelPrices');
+      let report = paneReport(region, combo);
+      const built = await writeBlock(wb, report, region);
+      expectSameNumbers(wb, built, paneNumbers(report));
+      // The block names the preparation its formulas read.
+      const prepCell = `J${rowOf(built, 'Prices prepared as')}`;
+      const prepText = String(wb.shownValue('Prices', prepCell));
+      expect(prepText.startsWith(report.settings.preparation)).toBe(true);
+      if (combo.extra.length > 0) expect(prepText).toMatch(/skip rows? \d+/);
+
+      // Rows arrive: the pane runs again on the grown table; the live block follows by itself.
+      wb.appendRows('QuennelPrices', twelveRows(region));
+      region = await wb.readTable('QuennelPrices');
+      report = paneReport(region, combo);
+      expectSameNumbers(wb, built, paneNumbers(report));
+    }, 60_000);
+  }
+});
