@@ -5,8 +5,16 @@
  * changes in x, so that beta's t-ratio is asymptotically normal once its standard error uses
  * the long-run variance of e instead of its variance (Hamilton 1994, sec. 19.3):
  *   se_HAC(beta) = se_OLS(beta) * lambda / s,
- * lambda^2 the Bartlett (Newey-West) long-run variance of e with the Newey-West (1994)
- * automatic bandwidth, s^2 = SSR / (n - k). p-values are two-sided standard normal.
+ * lambda^2 the Bartlett (Newey-West 1987) long-run variance of e, s^2 = SSR / (n - k). p-values
+ * are two-sided standard normal.
+ *
+ * The bandwidth: 'auto' (the default, and the one estimator every surface shows) is Andrews'
+ * (1991) AR(1) plug-in for the Bartlett kernel (regression/persistent-bandwidth.ts), fitted to
+ * the DOLS residual. That residual is the persistent equilibrium error of the pair (an AR(1)
+ * coefficient near 0.94 on daily prices), and the Newey-West (1994) automatic rule, which
+ * starts from only n^(2/9) autocovariances, picks a bandwidth far too short there, so the
+ * standard error came out too small (0.033 against 0.051 on the demo's tight pair). A whole
+ * number fixes the bandwidth as given.
  *
  * Leads and lags k: 'aic' (default) minimises AIC over k = 0..kmax on the common sample kmax
  * allows, from one QR factorisation (the columns are ordered so each k nests the one
@@ -19,21 +27,22 @@ import { normalCdf } from '../distributions';
 import { MooringInputError } from '../errors';
 import { HouseholderQr } from '../linalg/householder-qr';
 import { gaussianLogLikelihood, leastSquares } from '../regression/least-squares';
-import { bartlettLongRunVariance, neweyWestBandwidth } from '../regression/long-run-variance';
+import { bartlettLongRunVariance } from '../regression/long-run-variance';
+import { persistentBandwidth } from '../regression/persistent-bandwidth';
 
 export interface DynamicOlsOptions {
   /** Leads and lags of Δx on each side: a whole number or 'aic' (default). */
   leadsLags?: number | 'aic';
   /** Largest k the AIC search tries (default floor(T^(1/3)), capped). */
   maxLeadsLags?: number;
-  /** Bartlett bandwidth of the long-run variance: a whole number or 'auto' (Newey-West 1994, default). */
+  /** Bartlett bandwidth of the long-run variance: a whole number or 'auto' (Andrews' AR(1) plug-in on the residual, default). */
   bandwidth?: number | 'auto';
 }
 
 export interface DynamicOlsFit {
   beta: number;
   intercept: number;
-  /** HAC standard error of beta (long-run variance of the residual). */
+  /** HAC standard error of beta (Bartlett long-run variance of the residual). */
   standardError: number;
   tValue: number;
   /** Two-sided standard-normal p-value of beta = 0. */
@@ -44,6 +53,8 @@ export interface DynamicOlsFit {
   leadsLagsRule: 'fixed' | 'aic';
   maxLeadsLags: number | null;
   bandwidth: number;
+  /** How the bandwidth was set: Andrews' AR(1) plug-in ('auto') or as given ('fixed'). */
+  bandwidthRule: 'auto' | 'fixed';
   /** Rows in the regression: T - 1 - 2k. */
   nobs: number;
   residuals: Float64Array;
@@ -55,6 +66,12 @@ const MIN_DEGREES_OF_FREEDOM = 10;
 /** The largest k the data allow: T - 1 - 2k rows must exceed 3 + 2k columns by MIN_DEGREES_OF_FREEDOM. */
 export function largestLeadsLags(T: number): number {
   return Math.floor((T - 4 - MIN_DEGREES_OF_FREEDOM) / 4);
+}
+
+/** The standard error's estimator in words, for every surface that shows it beside the number. */
+export function dynamicOlsStandardErrorText(fit: Pick<DynamicOlsFit, 'bandwidth' | 'bandwidthRule'>): string {
+  const rule = fit.bandwidthRule === 'auto' ? "by Andrews' AR(1) plug-in rule" : 'as given';
+  return `from the residual's long-run variance, Bartlett kernel with ${fit.bandwidth} lags ${rule}`;
 }
 
 /** Default kmax: floor(T^(1/3)), capped at largestLeadsLags(T). */
@@ -127,7 +144,7 @@ export function dynamicOls(y: ArrayLike<number>, x: ArrayLike<number>, options: 
   const e = fit.residuals;
   const bw = options.bandwidth ?? 'auto';
   if (bw !== 'auto' && typeof bw !== 'number') throw new MooringInputError(`Unknown bandwidth '${String(bw)}': use a whole number or auto.`);
-  const bandwidth = bw === 'auto' ? neweyWestBandwidth(e) : bw;
+  const bandwidth = bw === 'auto' ? persistentBandwidth(e).bandwidth : bw;
   const lambda2 = bartlettLongRunVariance(e, bandwidth);
   const olsSe = fit.standardErrors[0];
   // A negative long-run variance cannot arise with the Bartlett kernel (its weights keep it positive semi-definite).
@@ -145,6 +162,7 @@ export function dynamicOls(y: ArrayLike<number>, x: ArrayLike<number>, options: 
     leadsLagsRule: typeof requested === 'number' ? 'fixed' : 'aic',
     maxLeadsLags: kmax,
     bandwidth,
+    bandwidthRule: bw === 'auto' ? 'auto' : 'fixed',
     nobs: fit.nobs,
     residuals: e,
   };

@@ -7,7 +7,11 @@
  * means y falls back when it stands above the relation; x helps when beta alpha_x > 0. Each
  * side's effect on the gap u = y - beta x - ... per period is alpha_y and -beta alpha_x, and
  * the gap's own speed is their sum (its AR(1) coefficient minus 1 ignoring the lag terms).
- * Half-lives: ln 2 / -ln|1 + speed| (spread/half-life.ts).
+ * Half-lives implied by the model: ln 2 / -ln|1 + speed| (spread/half-life.ts), for the combined
+ * speed (ecmHalfLife: both prices adjusting) and for each equation's own (halfLifeAlone: as if
+ * only that price moved). Neither is THE half-life of the pair, which every surface takes from
+ * the spread's own AR(1) (spread/pair-spread.ts); these keep their own names so no surface
+ * shows two different numbers under one name.
  *
  * Inference: given cointegration every regressor is stationary, so the t-ratios are
  * asymptotically standard; p-values are two-sided Student t with the equation's degrees of
@@ -58,9 +62,9 @@ export interface AdjustmentEquation {
   pValue: number;
   /** This equation's effect on the gap per period: alpha for y, -beta alpha for x (negative closes it). */
   gapSpeed: number;
-  /** Half-life of the gap if only this series adjusted, or null. */
-  halfLife: number | null;
-  halfLifeNote?: string;
+  /** Half-life of the gap implied by this equation alone (as if only this series adjusted), or null. */
+  halfLifeAlone: number | null;
+  halfLifeAloneNote?: string;
   /** Every coefficient, the error term first. */
   coefficients: EcmCoefficient[];
   rSquared: number;
@@ -81,8 +85,9 @@ export interface ErrorCorrectionResult {
   x: AdjustmentEquation;
   /** alpha_y - beta alpha_x: how fast the gap closes with both sides adjusting. */
   combinedSpeed: number;
-  halfLife: number | null;
-  halfLifeNote?: string;
+  /** Half-life implied by the error-correction model, both prices adjusting (from combinedSpeed), or null. */
+  ecmHalfLife: number | null;
+  ecmHalfLifeNote?: string;
   verdict: string;
   warnings: string[];
 }
@@ -192,8 +197,8 @@ function adjustmentEquation(series: string, fit: LeastSquaresFit, names: string[
     tValue: coefficients[0].tValue,
     pValue: coefficients[0].pValue,
     gapSpeed,
-    halfLife: life.halfLife,
-    ...(life.note ? { halfLifeNote: life.note } : {}),
+    halfLifeAlone: life.halfLife,
+    ...(life.note ? { halfLifeAloneNote: life.note } : {}),
     coefficients,
     rSquared: fit.rSquared,
   };
@@ -244,21 +249,21 @@ export function errorCorrectionModel(
     y: eqY,
     x: eqX,
     combinedSpeed,
-    halfLife: combined.halfLife,
-    ...(combined.note ? { halfLifeNote: combined.note } : {}),
+    ecmHalfLife: combined.halfLife,
+    ...(combined.note ? { ecmHalfLifeNote: combined.note } : {}),
     verdict: ecmVerdict(eqY, eqX, options.period ?? 'period'),
     warnings,
   };
 }
 
-/** "Crude closes about 6% of a gap to its long-run relation each day: half the gap in about 11 days." plus the other side. */
+/** "Crude closes about 6% of a gap to its long-run relation each day (alone, that would halve the gap in about 11 days)." plus the other side. */
 function ecmVerdict(eqY: AdjustmentEquation, eqX: AdjustmentEquation, period: string): string {
   const side = (eq: AdjustmentEquation, first: boolean): string => {
     const significance = eq.pValue < 0.05 ? '' : `, though not significantly at 5% (${formatPValue(eq.pValue)})`;
     if (eq.gapSpeed >= 0) {
       return `${eq.series} does not move back toward the relation (${formatPValue(eq.pValue)} for its adjustment coefficient ${formatCoefficient(eq.alpha)}).`;
     }
-    const life = eq.halfLife === null ? ` (${eq.halfLifeNote})` : `: half the gap in about ${formatPeriods(eq.halfLife, period)}`;
+    const life = eq.halfLifeAlone === null ? ` (${eq.halfLifeAloneNote})` : ` (alone, that would halve the gap in about ${formatPeriods(eq.halfLifeAlone, period)})`;
     return `${eq.series} closes about ${formatShareClosed(eq.gapSpeed)} of ${first ? 'a gap to its long-run relation' : 'the gap'} each ${period}${life}${significance}.`;
   };
   return `${side(eqY, true)} ${side(eqX, false)}`;

@@ -12,6 +12,10 @@
  * - Dynamic OLS (Stock & Watson 1993): see dynamic-ols.ts; the only one with a valid
  *   standard error.
  *
+ * Each slope is also turned into units of x to hold per unit of y at the latest prices
+ * (hedge-units.ts): the slope itself in prices, slope * P_y / P_x when the series are logs
+ * (where the slope is an elasticity).
+ *
  * Standard errors of the static lines are left out on purpose: when both series wander
  * (are I(1)), the static regression's t-ratio has no standard distribution and its
  * residuals are serially correlated, so a printed standard error would mislead.
@@ -20,7 +24,8 @@ import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import { MooringInputError } from '../errors';
 import { leastSquares } from '../regression/least-squares';
 import { requireAlignedSeries } from './cointegrating-regression';
-import { dynamicOls, type DynamicOlsFit, type DynamicOlsOptions } from './dynamic-ols';
+import { dynamicOls, dynamicOlsStandardErrorText, type DynamicOlsFit, type DynamicOlsOptions } from './dynamic-ols';
+import { hedgeUnits, type HedgeUnits } from './hedge-units';
 import { formatCoefficient } from './wording';
 
 export type HedgeRatioMethod = 'ols' | 'reverse-ols' | 'total-least-squares' | 'dynamic-ols';
@@ -48,6 +53,10 @@ export interface HedgeRatios {
   dynamicOls: HedgeRatio;
   /** The full dynamic-OLS fit (leads and lags chosen, bandwidth, rows). */
   dynamicOlsFit: DynamicOlsFit;
+  /** Each line's slope as units of x to hold per unit of y at the latest prices. */
+  units: { ols: HedgeUnits; reverseOls: HedgeUnits; totalLeastSquares: HedgeUnits; dynamicOls: HedgeUnits };
+  /** Whether the series are natural logs (the slopes are then elasticities). */
+  logged: boolean;
   names: { y: string; x: string };
   verdict: string;
 }
@@ -135,14 +144,24 @@ export function dynamicOlsHedgeRatio(y: ArrayLike<number>, x: ArrayLike<number>,
       standardError: fit.standardError,
       tValue: fit.tValue,
       pValue: fit.pValue,
-      note: `HAC standard error (Bartlett long-run variance, bandwidth ${fit.bandwidth}); p-value two-sided normal`,
+      note: `standard error ${dynamicOlsStandardErrorText(fit)}; p-value two-sided normal`,
     },
     fit,
   };
 }
 
-/** All four hedge ratios of y on x with a one-sentence summary. */
-export function hedgeRatios(y: ArrayLike<number>, x: ArrayLike<number>, options: DynamicOlsOptions = {}, names: { y?: string; x?: string } = {}): HedgeRatios {
+/**
+ * All four hedge ratios of y on x with a one-sentence summary. `names` are the prices' own
+ * names; with `logged` the series are their natural logs, the slopes are elasticities, and
+ * the summary gives the units to hold at the latest prices.
+ */
+export function hedgeRatios(
+  y: ArrayLike<number>,
+  x: ArrayLike<number>,
+  options: DynamicOlsOptions = {},
+  names: { y?: string; x?: string } = {},
+  logged = false,
+): HedgeRatios {
   const resolved = { y: names.y ?? 'y', x: names.x ?? 'x' };
   requirePair(y, x, resolved);
   const dols = dynamicOlsHedgeRatio(y, x, options);
@@ -150,9 +169,12 @@ export function hedgeRatios(y: ArrayLike<number>, x: ArrayLike<number>, options:
   const reverseOls = reverseOlsHedgeRatio(y, x);
   const tls = totalLeastSquaresHedgeRatio(y, x);
   const d = dols.ratio;
-  const verdict =
-    `Hedge about ${formatCoefficient(d.beta)} units of ${resolved.x} per unit of ${resolved.y} ` +
-    `(dynamic OLS, standard error ${formatCoefficient(d.standardError as number)}); ` +
-    `OLS of ${resolved.y} on ${resolved.x} gives ${formatCoefficient(ols.beta)}, the reverse regression ${formatCoefficient(reverseOls.beta)}, the orthogonal line ${formatCoefficient(tls.beta)}.`;
-  return { ols, reverseOls, totalLeastSquares: tls, dynamicOls: d, dynamicOlsFit: dols.fit, names: resolved, verdict };
+  const unitsOf = (r: HedgeRatio): HedgeUnits => hedgeUnits(r.beta, y, x, logged, resolved);
+  const units = { ols: unitsOf(ols), reverseOls: unitsOf(reverseOls), totalLeastSquares: unitsOf(tls), dynamicOls: unitsOf(d) };
+  const se = `standard error ${formatCoefficient(d.standardError as number)} ${dynamicOlsStandardErrorText(dols.fit)}`;
+  const others = `OLS of ${resolved.y} on ${resolved.x} gives ${formatCoefficient(ols.beta)}, the reverse regression ${formatCoefficient(reverseOls.beta)}, the orthogonal line ${formatCoefficient(tls.beta)}.`;
+  const verdict = logged
+    ? `Dynamic OLS of ln ${resolved.y} on ln ${resolved.x}: ${units.dynamicOls.text}; ${se}. In logs, ${others}`
+    : `Hedge about ${formatCoefficient(d.beta)} units of ${resolved.x} per unit of ${resolved.y} (dynamic OLS, ${se}); ${others}`;
+  return { ols, reverseOls, totalLeastSquares: tls, dynamicOls: d, dynamicOlsFit: dols.fit, units, logged, names: resolved, verdict };
 }

@@ -5,7 +5,8 @@
  * (Andrews 1991, eqs. 6.2 and 6.4, Bartlett kernel). The kernel of regression/long-run-variance.ts
  * weights lag i by 1 - i/(L + 1), so S corresponds to L = ceil(S) - 1.
  *
- * Why the report uses it for dynamic OLS: the spread of a cointegrated pair is persistent
+ * Why dynamic OLS uses it (cointegration/dynamic-ols.ts, on every surface): the spread of a
+ * cointegrated pair is persistent
  * (an AR(1) coefficient of 0.94 is a half-life of 12 days), and the Newey-West automatic rule
  * starts from only n^(2/9) autocovariances, so it picks a short bandwidth there and the
  * standard error of beta comes out too small. The plug-in grows with the persistence.

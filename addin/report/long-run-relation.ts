@@ -6,28 +6,22 @@
  * than two standard errors of the difference, sqrt(se1^2 + se2^2), as a sign that the
  * relation moved between the halves.
  *
- * Every dynamic-OLS standard error here takes its long-run variance with Andrews' AR(1)
- * plug-in bandwidth (persistent-bandwidth.ts), which allows for a persistent spread: the
- * leads and lags are chosen first (AIC), then the fit is repeated with that bandwidth.
+ * Every dynamic-OLS standard error here is the engine's one estimator (dynamic-ols.ts: the
+ * long-run variance with Andrews' AR(1) plug-in bandwidth, which allows for a persistent
+ * spread), the same the hedge command shows. Each line's slope is also given as units to hold
+ * at the latest prices (hedge-units.ts): in logs the slope is an elasticity.
  */
-import { dynamicOls, type DynamicOlsFit } from '../cointegration/dynamic-ols';
+import { dynamicOls, dynamicOlsStandardErrorText } from '../cointegration/dynamic-ols';
 import { olsHedgeRatio } from '../cointegration/hedge-ratio';
+import { hedgeUnits } from '../cointegration/hedge-units';
 import { formatCoefficient } from '../cointegration/wording';
 import type { LongRunRelation } from './pair-types';
-import { persistentBandwidth } from './persistent-bandwidth';
 
 /** Fewest observations in each half before the halves are compared. */
 export const HALF_MIN_OBSERVATIONS = 40;
 
 /** Standard errors of the difference beyond which the halves disagree. */
 export const HALVES_LIMIT = 2;
-
-/** Dynamic OLS of y on x, leads and lags by AIC, standard error with the persistent-residual bandwidth. */
-export function persistentDynamicOls(y: Float64Array, x: Float64Array): DynamicOlsFit {
-  const first = dynamicOls(y, x);
-  const { bandwidth } = persistentBandwidth(first.residuals);
-  return dynamicOls(y, x, { leadsLags: first.leadsLags, bandwidth });
-}
 
 /** "ln DockDiesel = 0.4123 + 1.148 ln GateGasoil" (ln only when the values are logs). */
 export function relationText(dependent: string, regressor: string, line: { beta: number; intercept: number }, logged: boolean): string {
@@ -44,7 +38,7 @@ export function longRunRelation(
   context: { logged: boolean; rowLabels: readonly string[]; normalisationReason: string },
 ): LongRunRelation {
   const ols = olsHedgeRatio(y, x);
-  const dols = persistentDynamicOls(y, x);
+  const dols = dynamicOls(y, x);
   const n = y.length;
   const half = Math.floor(n / 2);
   let halves: LongRunRelation['halves'] = null;
@@ -52,8 +46,8 @@ export function longRunRelation(
   if (half < HALF_MIN_OBSERVATIONS) {
     halvesNote = `Each half would hold fewer than ${HALF_MIN_OBSERVATIONS} observations, too few to compare the hedge ratio between them.`;
   } else {
-    const first = persistentDynamicOls(y.subarray(0, half), x.subarray(0, half));
-    const second = persistentDynamicOls(y.subarray(half), x.subarray(half));
+    const first = dynamicOls(y.subarray(0, half), x.subarray(0, half));
+    const second = dynamicOls(y.subarray(half), x.subarray(half));
     const spread = Math.sqrt(first.standardError ** 2 + second.standardError ** 2);
     const differenceInStandardErrors = Math.abs(first.beta - second.beta) / spread;
     halves = {
@@ -64,12 +58,25 @@ export function longRunRelation(
     };
   }
   const dynamicLine = { beta: dols.beta, intercept: dols.intercept };
+  const olsUnits = hedgeUnits(ols.beta, y, x, context.logged, names);
+  const dynamicUnits = hedgeUnits(dols.beta, y, x, context.logged, names);
   return {
     dependent: names.y,
     regressor: names.x,
     normalisationReason: context.normalisationReason,
-    ols: { beta: ols.beta, intercept: ols.intercept },
-    dynamicOls: { ...dynamicLine, standardError: dols.standardError, leadsLags: dols.leadsLags, bandwidth: dols.bandwidth, observations: dols.nobs },
+    slopeMeaning: dynamicUnits.slopeMeaning,
+    latestPrices: { y: dynamicUnits.latestPriceY, x: dynamicUnits.latestPriceX },
+    hedgeText: dynamicUnits.text,
+    ols: { beta: ols.beta, intercept: ols.intercept, hedgeUnits: olsUnits.hedgeUnits },
+    dynamicOls: {
+      ...dynamicLine,
+      hedgeUnits: dynamicUnits.hedgeUnits,
+      standardError: dols.standardError,
+      standardErrorMethod: dynamicOlsStandardErrorText(dols),
+      leadsLags: dols.leadsLags,
+      bandwidth: dols.bandwidth,
+      observations: dols.nobs,
+    },
     text: relationText(names.y, names.x, dynamicLine, context.logged),
     halves,
     halvesNote,

@@ -3,18 +3,18 @@
  *
  * - the error-correction model (errorCorrectionModel): each series' speed of adjustment
  *   toward the relation, lags by AIC (the model offers no other rule);
- * - the spread s = y - intercept - beta x under the static OLS line (the Engle-Granger
- *   residual, the series the test found stationary), its AR(1) half-life (halfLife), and
- *   its z-score over the whole sample and over a trailing window.
+ * - the spread s = y - intercept - beta x on the least-squares line (spread/pair-spread.ts:
+ *   the Engle-Granger residual, the series the test found stationary), its AR(1) half-life,
+ *   which is THE half-life every surface shows, and its z-score over the whole sample and
+ *   over a trailing window. The model's combined half-life keeps its own name (ecmHalfLife).
  */
 import { errorCorrectionModel, type AdjustmentEquation } from '../cointegration/error-correction';
 import { formatCoefficient, formatPeriods, formatShareClosed } from '../cointegration/wording';
 import { pText } from '../causality/causality-wording';
 import type { Deterministic } from '../result';
-import { halfLife } from '../spread/half-life';
-import { spreadSeries } from '../spread/spread-series';
+import { HALF_LIFE_DEFINITION, type PairSpread } from '../spread/pair-spread';
 import { rollingZScore, zScore } from '../spread/z-score';
-import type { AdjustmentReport, AdjustmentSide, LineEstimate, SpreadReport } from './pair-types';
+import type { AdjustmentReport, AdjustmentSide, SpreadReport } from './pair-types';
 import { finiteOrNull } from './test-summary';
 
 function side(eq: AdjustmentEquation, alpha: number): AdjustmentSide {
@@ -34,12 +34,12 @@ function correctorsText(y: AdjustmentSide, x: AdjustmentSide): string {
 export function adjustmentSection(
   y: Float64Array,
   x: Float64Array,
-  spread: Float64Array,
+  spread: PairSpread,
   names: { y: string; x: string },
   options: { alpha: number; deterministic: Deterministic; period: string },
 ): AdjustmentReport {
   const ecm = errorCorrectionModel(y, x, { deterministic: options.deterministic, lags: 'aic', period: options.period }, names);
-  const ar1 = halfLife(spread, options.period);
+  const ar1 = spread.halfLife;
   const dependent = side(ecm.y, options.alpha);
   const regressor = side(ecm.x, options.alpha);
   const closes = ar1.halfLife === null
@@ -52,23 +52,21 @@ export function adjustmentSection(
       dependent,
       regressor,
       combinedSpeed: ecm.combinedSpeed,
-      halfLife: ecm.halfLife,
-      halfLifeNote: ecm.halfLifeNote ?? null,
+      ecmHalfLife: ecm.ecmHalfLife,
+      ecmHalfLifeNote: ecm.ecmHalfLifeNote ?? null,
     },
-    spreadAr1: { phi: ar1.phi, speed: ar1.lambda, halfLife: ar1.halfLife, halfLifeNote: ar1.note ?? null },
+    spreadAr1: { phi: ar1.phi, speed: ar1.lambda, halfLife: ar1.halfLife, halfLifeNote: ar1.note ?? null, definition: HALF_LIFE_DEFINITION },
     verdict: `${closes}; ${correctorsText(dependent, regressor)}.`,
   };
 }
 
-/** The spread under the OLS line: values, z-scores, and where it stands on the last row. */
+/** The spread on the least-squares line: values, z-scores, and where it stands on the last row. */
 export function spreadSection(
-  y: Float64Array,
-  x: Float64Array,
-  line: LineEstimate,
+  spread: PairSpread,
   names: { y: string; x: string },
   context: { rowLabels: readonly string[]; dates: readonly string[] | null; rollingWindow: number; period: string; logged: boolean },
-): { report: SpreadReport; values: Float64Array } {
-  const values = spreadSeries(y, x, line.beta, line.intercept, names);
+): SpreadReport {
+  const { values, line } = spread;
   const z = zScore(values);
   const window = Math.min(context.rollingWindow, values.length);
   const rolling = rollingZScore(values, window);
@@ -81,9 +79,8 @@ export function spreadSection(
   const minus = (v: number): string => `${v < 0 ? '+' : '-'} ${formatCoefficient(Math.abs(v))}`;
   const rollingText = latestRollingZ === null ? '' : `; against the last ${window} ${context.period}s it is ${where(latestRollingZ)} their mean`;
   return {
-    values,
-    report: {
-      definition: `${ln(names.y)} ${minus(line.intercept)} ${minus(line.beta)} x ${ln(names.x)} (the static OLS line, whose residual the Engle-Granger test checks)`,
+      definition: `${ln(names.y)} ${minus(line.intercept)} ${minus(line.beta)} x ${ln(names.x)}, on the least-squares line, whose residual the Engle-Granger test checks (not the dynamic-OLS estimate of the relation)`,
+      line: { beta: line.beta, intercept: line.intercept, method: 'least-squares' },
       mean: z.mean,
       standardDeviation: z.standardDeviation,
       bandUpper: z.mean + 2 * z.standardDeviation,
@@ -96,7 +93,6 @@ export function spreadSection(
       rollingWindow: window,
       values: Array.from(values),
       rollingZ: rolling.map((v) => finiteOrNull(v)),
-      verdict: `On the last row (${date ?? context.rowLabels[last]}) the spread stands ${where(latestZ)} its mean${rollingText}.`,
-    },
+      verdict: `On the last row (${date ?? context.rowLabels[last]}) the spread (on the least-squares line) stands ${where(latestZ)} its mean${rollingText}.`,
   };
 }

@@ -14,6 +14,7 @@ import type { JohansenCase } from '../johansen/johansen';
 import type { Deterministic } from '../result';
 import { johansenSection } from './johansen-choice';
 import { leadLagSection, type OrderFacts } from './lead-lag-section';
+import { pairSpread } from '../spread/pair-spread';
 import { spreadSeries } from '../spread/spread-series';
 import { longRunRelation } from './long-run-relation';
 import { adjustmentSection, spreadSection } from './pair-adjustment';
@@ -84,18 +85,19 @@ export function diagnosePair(a: Float64Array, b: Float64Array, names: { a: strin
   const phillipsOuliaris = attempt('Phillips-Ouliaris test', unavailable, () => phillipsOuliarisSummary(y, x, yx, { alpha, deterministic }));
   const relation = exactFit ? null : attempt('long-run relation', unavailable, () =>
     longRunRelation(y, x, yx, { logged: context.logged, rowLabels: context.rowLabels, normalisationReason }));
-  const line = bFollows ? eg.bOnA : eg.aOnB;
-  const spread = exactFit ? null : attempt('spread', unavailable, () =>
-    spreadSection(y, x, { beta: line.beta, intercept: line.intercept ?? 0 }, yx, {
+  // The one spread of the pair (least-squares line with a constant, whatever the tests' deterministic terms) and its half-life.
+  const pair = exactFit ? null : attempt('spread', unavailable, () => pairSpread(y, x, yx, context.period));
+  const spread = pair === null ? null : attempt('spread', unavailable, () =>
+    spreadSection(pair, yx, {
       rowLabels: context.rowLabels,
       dates: context.dates,
       rollingWindow: context.rollingWindow,
       period: context.period,
       logged: context.logged,
     }));
-  const adjustment = spread === null
+  const adjustment = pair === null || spread === null
     ? null
-    : attempt('error-correction model', unavailable, () => adjustmentSection(y, x, spread.values, yx, { alpha, deterministic, period: context.period }));
+    : attempt('error-correction model', unavailable, () => adjustmentSection(y, x, pair, yx, { alpha, deterministic, period: context.period }));
 
   const orderNumbers = { [names.a]: factsA.order, [names.b]: factsB.order };
   const verdict = cointegrationVerdict({ engleGranger: eg, evidence: eg.evidence, bothIntegrated }, yx.y, yx.x, orderNumbers);
@@ -106,7 +108,7 @@ export function diagnosePair(a: Float64Array, b: Float64Array, names: { a: strin
     leadLag,
     relation,
     adjustment,
-    spread: spread?.report ?? null,
+    spread,
     unavailable,
   };
   return {

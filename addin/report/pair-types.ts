@@ -45,9 +45,16 @@ export interface LongRunRelation {
   regressor: string;
   /** One sentence: why this series is the dependent one. */
   normalisationReason: string;
-  ols: LineEstimate;
-  /** Dynamic OLS; its standard error uses Andrews' plug-in bandwidth (Bartlett lags), which allows for a persistent spread. */
-  dynamicOls: LineEstimate & { standardError: number; leadsLags: number; bandwidth: number; observations: number };
+  /** 'elasticity' when the series are logs (the slope is then not a quantity to hold), else 'units'. */
+  slopeMeaning: 'units' | 'elasticity';
+  /** The last row's prices (exp of the logs when logged), at which hedgeUnits are sized. */
+  latestPrices: { y: number; x: number };
+  /** The dynamic-OLS slope and the units to hold, in words (hedge-units.ts). */
+  hedgeText: string;
+  /** The least-squares line (the one the spread is built on); hedgeUnits = units of the regressor per unit of the dependent at the latest prices. */
+  ols: LineEstimate & { hedgeUnits: number };
+  /** Dynamic OLS: the estimate of the relation. Its standard error is the engine's one estimator (dynamic-ols.ts), described in standardErrorMethod. */
+  dynamicOls: LineEstimate & { hedgeUnits: number; standardError: number; standardErrorMethod: string; leadsLags: number; bandwidth: number; observations: number };
   /** The relation in words: "DockDiesel = 0.4123 + 1.148 GateGasoil" (logs marked). */
   text: string;
   /** The dynamic-OLS beta on each half of the sample; null when the halves are too short. */
@@ -81,23 +88,29 @@ export interface AdjustmentReport {
     regressor: AdjustmentSide;
     /** Speed of the gap with both sides adjusting. */
     combinedSpeed: number;
-    halfLife: number | null;
-    halfLifeNote: string | null;
+    /** Half-life implied by the error-correction model, both prices adjusting: not THE half-life (that is spreadAr1.halfLife). */
+    ecmHalfLife: number | null;
+    ecmHalfLifeNote: string | null;
   };
   spreadAr1: {
     /** AR(1) coefficient of the spread. */
     phi: number;
     speed: number;
+    /** THE half-life of the pair, the same number every surface shows (spread/pair-spread.ts). */
     halfLife: number | null;
     halfLifeNote: string | null;
+    /** How the half-life is found, in words. */
+    definition: string;
   };
   verdict: string;
 }
 
-/** The spread (the Engle-Granger residual of dependent on regressor) and where it stands now. */
+/** The spread (on the least-squares line of dependent on regressor) and where it stands now. */
 export interface SpreadReport {
   /** What the spread is, in words. */
   definition: string;
+  /** The line the spread is built on: the least-squares line (not the dynamic-OLS estimate). */
+  line: LineEstimate & { method: 'least-squares' };
   mean: number;
   standardDeviation: number;
   /** mean + 2 standard deviations and mean - 2 standard deviations: the chart's bands. */

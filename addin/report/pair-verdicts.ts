@@ -39,7 +39,7 @@ export function pairVerdicts(pair: Omit<PairReport, 'verdicts' | 'warnings'>): s
   if (pair.cointegration.cointegrated) {
     const r = pair.relation;
     if (r) {
-      out.push(`Long-run relation: ${r.text} (dynamic OLS; the slope's standard error is ${formatCoefficient(r.dynamicOls.standardError)}).`);
+      out.push(`Long-run relation: ${r.text} (dynamic OLS; the slope's standard error is ${formatCoefficient(r.dynamicOls.standardError)}, from the long-run variance); ${r.hedgeText}.`);
     }
     if (pair.adjustment) out.push(pair.adjustment.verdict);
     if (pair.spread) out.push(pair.spread.verdict);

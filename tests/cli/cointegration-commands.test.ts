@@ -5,6 +5,7 @@ import { errorCorrectionModel } from '../../addin/cointegration/error-correction
 import { hedgeRatios } from '../../addin/cointegration/hedge-ratio';
 import { phillipsOuliaris } from '../../addin/cointegration/phillips-ouliaris';
 import { MOORING_COMMANDS } from '../../addin/cli/commands';
+import { pairSpread } from '../../addin/spread/pair-spread';
 import { autoregressive1, randomWalk, SeededRandom } from '../../addin/random';
 import { type Fixtures, loadFixture } from '../reference/fixtures';
 import { expectOneLineRefusal, runWith } from './cli-harness';
@@ -114,7 +115,10 @@ describe('mooring ecm', () => {
     expect(o.equations.y.alpha).toBe(direct.y.alpha);
     expect(o.equations.x.alpha).toBe(direct.x.alpha);
     expect(o.equations.y.coefficients).toHaveLength(4);
-    expect(o.halfLife).toBe(direct.halfLife);
+    // halfLife is the pair's one half-life (the spread's AR(1)); the model's own carries another name.
+    expect(o.halfLife).toBe(pairSpread(pair.diesel, pair.gasoil, { y: 'Diesel', x: 'Gasoil' }, 'day').halfLife.halfLife);
+    expect(o.ecmHalfLife).toBe(direct.ecmHalfLife);
+    expect(o.equations.y.halfLifeAlone).toBe(direct.y.halfLifeAlone);
     expect(o.verdict).toBe(direct.verdict);
     const r = run('ecm', 'p.csv', '--y', 'Diesel', '--x', 'Gasoil', '--period', 'day');
     expect(r.stdout.split('\n').every((line) => line.length <= 78)).toBe(true);

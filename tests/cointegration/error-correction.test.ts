@@ -33,13 +33,19 @@ describe('error-correction model', () => {
     expect(ecm.beta).toBeCloseTo(1, 1);
   });
 
-  it('gives the half-life ln 2 / -ln(1 + alpha) from the estimated alpha, near the true 11.2 days', () => {
-    expect(ecm.y.halfLife).toBeCloseTo(Math.log(2) / -Math.log(1 + ecm.y.alpha), 12);
-    expect(Math.abs((ecm.y.halfLife as number) - 11.2)).toBeLessThan(4);
+  it('gives the half-life implied by y alone, ln 2 / -ln(1 + alpha) from the estimated alpha, near the true 11.2 days', () => {
+    expect(ecm.y.halfLifeAlone).toBeCloseTo(Math.log(2) / -Math.log(1 + ecm.y.alpha), 12);
+    expect(Math.abs((ecm.y.halfLifeAlone as number) - 11.2)).toBeLessThan(4);
+  });
+
+  it('names its combined half-life ecmHalfLife, ln 2 / -ln(1 + combined speed), and carries no field called halfLife', () => {
+    expect(ecm.ecmHalfLife).toBeCloseTo(Math.log(2) / -Math.log(1 + ecm.combinedSpeed), 12);
+    expect(ecm).not.toHaveProperty('halfLife');
+    expect(ecm.y).not.toHaveProperty('halfLife');
   });
 
   it('says in plain words which side adjusts and how fast', () => {
-    expect(ecm.verdict).toMatch(/^Crude closes about \d(\.\d)?% of a gap to its long-run relation each day: half the gap in about \d+(\.\d)? days\./);
+    expect(ecm.verdict).toMatch(/^Crude closes about \d(\.\d)?% of a gap to its long-run relation each day \(alone, that would halve the gap in about \d+(\.\d)? days\)\./);
     expect(ecm.verdict).toContain('Brent');
   });
 
@@ -134,8 +140,8 @@ describe('error-correction edge cases', () => {
     const ecm = errorCorrectionModel(y, x, { lags: 0 });
     expect(ecm.y.alpha).toBeLessThan(-1);
     expect(ecm.warnings.join(' ')).toContain('overshoots');
-    expect(ecm.y.halfLifeNote).toContain('overshoots');
-    expect(Number.isFinite(ecm.y.halfLife as number)).toBe(true);
+    expect(ecm.y.halfLifeAloneNote).toContain('overshoots');
+    expect(Number.isFinite(ecm.y.halfLifeAlone as number)).toBe(true);
   });
 
   it('says "no adjustment" (null half-life, never a negative or infinite number) for a side whose coefficient points away from the relation', () => {
@@ -145,11 +151,11 @@ describe('error-correction edge cases', () => {
     const ecm = errorCorrectionModel(randomWalk(rng, T), randomWalk(rng, T), { lags: 1 }, { y: 'A', x: 'B' });
     for (const eq of [ecm.y, ecm.x]) {
       if (eq.gapSpeed >= 0) {
-        expect(eq.halfLife).toBeNull();
-        expect(eq.halfLifeNote).toContain('no mean reversion');
+        expect(eq.halfLifeAlone).toBeNull();
+        expect(eq.halfLifeAloneNote).toContain('no mean reversion');
         expect(ecm.verdict).toContain(`${eq.series} does not move back toward the relation`);
       } else {
-        expect(eq.halfLife as number).toBeGreaterThan(0);
+        expect(eq.halfLifeAlone as number).toBeGreaterThan(0);
       }
     }
   });

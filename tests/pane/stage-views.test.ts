@@ -107,7 +107,7 @@ describe('The relation and its pull', () => {
     expect(v.pullVerdict).toMatch(/^The spread closes half its gap in about 12 days/);
     expect(v.relationText).toBe('ln DockDiesel = 0.399 + 1.122 ln GateGasoil');
     expect(v.untiedNote).toBeNull();
-    expect(v.pullFacts.find((f) => f.label === 'Half-life of a gap (the spread alone)')?.value).toBe('11.9 days');
+    expect(v.pullFacts.find((f) => f.label === 'Half-life of the spread (AR(1) of the spread on the plain least-squares line)')?.value).toBe('11.9 days');
     expect(v.lineFacts.find((f) => f.label === 'Held steady across the halves?')?.value).toBe('Yes');
     // In the demo market DockDiesel closes the gap and its leader GateGasoil does not.
     expect(v.pullFacts.find((f) => f.label === 'DockDiesel moves to close the gap?')?.value).toBe('Yes');
@@ -125,7 +125,7 @@ describe('The relation and its pull', () => {
     const z = v.charts!.rollingZ;
     expect(z.lines[0].values).toBe(spread.rollingZ);
     expect(z.lines[1].values[0]).toBe(2);
-    expect(z.title).toBe('Where the spread stands against the last 60 rows');
+    expect(z.title).toBe('Where the spread (plain least-squares line) stands against the last 60 rows');
   });
 
   it('says first that an untied pair has no reason to close its gap', () => {

@@ -1,6 +1,7 @@
 /** `mooring ecm`: the error-correction model of a pair: who closes a gap to the relation, and how fast. */
 import { errorCorrectionModel, type AdjustmentEquation } from '../../cointegration/error-correction';
 import { MooringInputError } from '../../errors';
+import { HALF_LIFE_DEFINITION, pairSpread, SPREAD_LINE_TEXT } from '../../spread/pair-spread';
 import type { Command } from '../command';
 import { countOrWordValue, wholeNumberValue } from '../option-values';
 import { bullet, formatPValue, formatStatistic, heading, labelled } from '../render/format';
@@ -16,8 +17,8 @@ function equationJson(eq: AdjustmentEquation): Record<string, unknown> {
     tValue: eq.tValue,
     pValue: eq.pValue,
     gapSpeed: eq.gapSpeed,
-    halfLife: eq.halfLife,
-    halfLifeNote: eq.halfLifeNote ?? null,
+    halfLifeAlone: eq.halfLifeAlone,
+    halfLifeAloneNote: eq.halfLifeAloneNote ?? null,
     rSquared: eq.rSquared,
     coefficients: eq.coefficients.map((c) => ({ ...c })),
   };
@@ -31,6 +32,8 @@ export const ecmCommand: Command = {
     'Fits the change of each series on yesterday\'s gap to the long-run relation (the residual of --y on --x), ' +
       'lagged changes of both and a constant. A negative coefficient on the gap in the --y equation means --y moves back toward the relation.',
     'Both equations are shown, so you can see which side does the adjusting. By default AIC chooses the lags.',
+    `The half-life is the pair's one half-life, the same number the spread and report commands give: ${HALF_LIFE_DEFINITION}. ` +
+      'The model\'s own half-lives (both prices adjusting, and each price alone) are shown under their own names.',
   ],
   usage: 'mooring ecm <file.csv> --y NAME --x NAME [options]',
   options: [
@@ -52,9 +55,13 @@ export const ecmCommand: Command = {
     const period = context.args.values.get('period')?.trim() || undefined;
     const input = relationFromContext(context, true);
     const names = { y: input.names.y, x: input.names.xs[0] };
-    const result = errorCorrectionModel(input.y.series.values, input.xs[0].series.values, { deterministic, lags, maxLags, period }, names);
+    const y = input.y.series.values;
+    const x = input.xs[0].series.values;
+    const result = errorCorrectionModel(y, x, { deterministic, lags, maxLags, period }, names);
     const unit = period ?? 'period';
-    const halfLifeText = (eq: AdjustmentEquation): string => (eq.halfLife === null ? (eq.gapSpeed >= 0 ? 'no adjustment' : 'gap grows') : `${formatStatistic(eq.halfLife)} ${unit}s`);
+    const spread = pairSpread(y, x, names, unit);
+    const life = spread.halfLife;
+    const halfLifeText = (eq: AdjustmentEquation): string => (eq.halfLifeAlone === null ? (eq.gapSpeed >= 0 ? 'no adjustment' : 'gap grows') : `${formatStatistic(eq.halfLifeAlone)} ${unit}s`);
     const table = plainTable(
       ['equation', 'gap coef.', 'std. error', 't', 'p-value', 'half-life alone'],
       [result.y, result.x].map((eq) => [`change in ${eq.series}`, formatStatistic(eq.alpha), formatStatistic(eq.standardError), formatStatistic(eq.tValue), formatPValue(eq.pValue), halfLifeText(eq)]),
@@ -68,7 +75,9 @@ export const ecmCommand: Command = {
       '',
       ...table,
       '',
-      labelled('Half-life of the gap', result.halfLife === null ? (result.halfLifeNote ?? 'none') : `${formatStatistic(result.halfLife)} ${unit}s with both sides adjusting`),
+      labelled('Half-life', `${life.halfLife === null ? (life.note ?? 'none') : `${formatStatistic(life.halfLife)} ${unit}s`}: ${HALF_LIFE_DEFINITION} ` +
+        `(${names.y} - ${formatStatistic(spread.line.intercept)} - ${formatStatistic(spread.line.beta)} ${names.x})`),
+      labelled('ECM half-life', result.ecmHalfLife === null ? (result.ecmHalfLifeNote ?? 'none') : `${formatStatistic(result.ecmHalfLife)} ${unit}s: implied by the error-correction model, both prices adjusting`),
       labelled('Verdict', result.verdict),
     ];
     if (result.warnings.length > 0) {
@@ -91,8 +100,12 @@ export const ecmCommand: Command = {
         relation: result.relation,
         equations: { y: equationJson(result.y), x: equationJson(result.x) },
         combinedSpeed: result.combinedSpeed,
-        halfLife: result.halfLife,
-        halfLifeNote: result.halfLifeNote ?? null,
+        halfLife: life.halfLife,
+        halfLifeNote: life.note ?? null,
+        halfLifeDefinition: HALF_LIFE_DEFINITION,
+        spreadLine: { ...spread.line, text: SPREAD_LINE_TEXT },
+        ecmHalfLife: result.ecmHalfLife,
+        ecmHalfLifeNote: result.ecmHalfLifeNote ?? null,
         verdict: result.verdict,
         warnings: result.warnings.slice(),
       },

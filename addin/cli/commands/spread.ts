@@ -1,7 +1,8 @@
 /** `mooring spread`: the spread of a pair under a hedge ratio, its half-life and z-scores. */
-import { dynamicOlsHedgeRatio, olsHedgeRatio, reverseOlsHedgeRatio, totalLeastSquaresHedgeRatio } from '../../cointegration/hedge-ratio';
+import { dynamicOlsHedgeRatio, reverseOlsHedgeRatio, totalLeastSquaresHedgeRatio } from '../../cointegration/hedge-ratio';
 import { MooringInputError } from '../../errors';
 import { halfLife } from '../../spread/half-life';
+import { HALF_LIFE_DEFINITION, pairSpread } from '../../spread/pair-spread';
 import { spreadSeries } from '../../spread/spread-series';
 import { rollingZScore, zScore } from '../../spread/z-score';
 import type { Command } from '../command';
@@ -13,7 +14,7 @@ const HEDGE_WORDS = ['ols', 'reverse-ols', 'tls', 'dols'] as const;
 type HedgeWord = (typeof HEDGE_WORDS)[number];
 
 const HEDGE_LABEL: Record<HedgeWord | 'given', string> = {
-  ols: 'OLS of y on x',
+  ols: 'the least-squares line of y on x, the Engle-Granger line',
   'reverse-ols': 'OLS of x on y, turned round',
   tls: 'total least squares',
   dols: 'dynamic OLS',
@@ -36,13 +37,15 @@ export const spreadCommand: Command = {
     'Builds spread = y - intercept - beta x, with beta and the intercept from the hedge estimator you choose (OLS of y on x by default) ' +
       'or as given with --beta and --intercept. Reports how fast the spread returns to its mean (half-life, from a first-order autoregression) ' +
       'and how far it stands from its mean in standard deviations, over the whole sample and, with --window, over a trailing window.',
+    `On the default line the half-life is the pair's one half-life, the same number the ecm and report commands give: ${HALF_LIFE_DEFINITION}. ` +
+      'With another line it is the half-life of that spread, and the output says so.',
     'The JSON output carries every value of the spread and of its z-scores.',
   ],
   usage: 'mooring spread <file.csv> --y NAME --x NAME [options]',
   options: [
     Y_OPTION,
     X_OPTION,
-    { name: 'hedge', value: HEDGE_WORDS.join('|'), help: 'how to estimate beta and the intercept (default ols)' },
+    { name: 'hedge', value: HEDGE_WORDS.join('|'), help: 'how to estimate beta and the intercept (default ols: the least-squares line every other surface builds the spread on)' },
     { name: 'beta', value: 'NUMBER', help: 'use this hedge ratio instead of estimating one' },
     { name: 'intercept', value: 'NUMBER', help: 'with --beta: the intercept to subtract (default 0)' },
     { name: 'window', value: 'N', help: 'also give z-scores over a trailing window of N rows (at least 3)' },
@@ -63,14 +66,20 @@ export const spreadCommand: Command = {
     const names = { y: input.names.y, x: input.names.xs[0] };
 
     const method: HedgeWord | 'given' = givenBeta !== undefined ? 'given' : (hedgeWord ?? 'ols');
+    // The default is the one spread of the pair (pair-spread.ts); another line gives that line's spread.
+    const standard = method === 'ols' ? pairSpread(y, x, names, period) : null;
     const line =
-      method === 'given' ? { beta: givenBeta as number, intercept: givenIntercept ?? 0 }
-      : method === 'ols' ? olsHedgeRatio(y, x)
+      standard ? standard.line
+      : method === 'given' ? { beta: givenBeta as number, intercept: givenIntercept ?? 0 }
       : method === 'reverse-ols' ? reverseOlsHedgeRatio(y, x)
       : method === 'tls' ? totalLeastSquaresHedgeRatio(y, x)
       : dynamicOlsHedgeRatio(y, x).ratio;
-    const values = spreadSeries(y, x, line.beta, line.intercept, names);
-    const life = halfLife(values, period);
+    const values = standard ? standard.values : spreadSeries(y, x, line.beta, line.intercept, names);
+    const life = standard ? standard.halfLife : halfLife(values, period);
+    const definition = standard
+      ? HALF_LIFE_DEFINITION
+      : `ln 2 / -ln(1 + lambda), lambda from the AR(1) regression with a constant of this spread, on ${HEDGE_LABEL[method]} ` +
+        '(not the pair\'s half-life, which uses the least-squares line: leave out --hedge and --beta for it)';
     const z = zScore(values);
     const rolling = window === undefined ? null : rollingZScore(values, window);
 
@@ -80,11 +89,11 @@ export const spreadCommand: Command = {
       heading(`Spread of ${names.y} against ${names.x}`),
       '',
       labelled('Spread', `${names.y} - ${formatStatistic(line.intercept)} - ${formatStatistic(line.beta)} ${names.x}`),
-      labelled('Hedge ratio', `${formatStatistic(line.beta)} (${HEDGE_LABEL[method]})`),
+      labelled('Built on', `${HEDGE_LABEL[method]}: slope ${formatStatistic(line.beta)}${input.y.series.logged ? ' (in logs, an elasticity)' : ''}`),
       labelled('Observations', String(values.length)),
       labelled('Mean', formatStatistic(z.mean)),
       labelled('Standard deviation', formatStatistic(z.standardDeviation)),
-      labelled('Half-life', life.halfLife === null ? (life.note ?? 'none') : `${formatStatistic(life.halfLife)} ${period}s${life.note ? ` (${life.note})` : ''}`),
+      labelled('Half-life', `${life.halfLife === null ? (life.note ?? 'none') : `${formatStatistic(life.halfLife)} ${period}s${life.note ? ` (${life.note})` : ''}`}: ${definition}`),
       labelled('Verdict', life.verdict),
       labelled('Latest value', `${formatStatistic(values[last])}${when}: z-score ${formatStatistic(z.values[last])} over the whole sample` +
         (rolling ? `, ${formatStatistic(rolling[last])} over the last ${window} rows` : '')),
@@ -96,11 +105,13 @@ export const spreadCommand: Command = {
       json: {
         ...relationJson(input),
         hedge: method,
+        lineText: HEDGE_LABEL[method],
         beta: line.beta,
         intercept: line.intercept,
         values,
         halfLife: life.halfLife,
         halfLifeNote: life.note ?? null,
+        halfLifeDefinition: definition,
         lambda: life.lambda,
         verdict: life.verdict,
         mean: z.mean,

@@ -30,9 +30,12 @@ function figure(label: string, value: string): string {
 
 function keyFigures(pair: PairReport, period: string): string {
   const items: string[] = [];
-  if (pair.relation) items.push(figure('Long-run relation', `${pair.relation.text} (s.e. ${formatStatistic(pair.relation.dynamicOls.standardError)})`));
+  if (pair.relation) {
+    items.push(figure('Long-run relation', `${pair.relation.text} (dynamic OLS; s.e. ${formatStatistic(pair.relation.dynamicOls.standardError)}, from the long-run variance)`));
+    items.push(figure(pair.relation.slopeMeaning === 'elasticity' ? 'Units to hold at the latest prices' : 'Units to hold', formatStatistic(pair.relation.dynamicOls.hedgeUnits)));
+  }
   const ar1 = pair.adjustment?.spreadAr1;
-  if (ar1) items.push(figure('Half-life of the spread', ar1.halfLife === null ? (ar1.halfLifeNote ?? 'none') : `${fixed1(ar1.halfLife)} ${period}s`));
+  if (ar1) items.push(figure('Half-life of the spread', ar1.halfLife === null ? (ar1.halfLifeNote ?? 'none') : `${fixed1(ar1.halfLife)} ${period}s (AR(1) of the spread on the least-squares line)`));
   if (pair.spread) items.push(figure(`Spread now (${pair.spread.latestDate ?? pair.spread.latestRow})`, `z = ${formatStatistic(pair.spread.latestZ)}`));
   if (pair.leadLag) items.push(figure('Leader', pair.leadLag.leader ?? (pair.leadLag.pattern === 'both-ways' ? 'feedback both ways' : 'none found')));
   return items.length === 0 ? '' : `<dl class="figures">${items.join('')}</dl>`;
@@ -43,7 +46,7 @@ function charts(pair: PairReport, report: DiagnosticReport): string {
   if (!sp) return '';
   const xLabels = report.data.dates ?? report.data.rowLabels;
   const spread = lineChart({
-    title: `Spread of ${pair.relation?.dependent ?? pair.a} against ${pair.relation?.regressor ?? pair.b}`,
+    title: `Spread of ${pair.relation?.dependent ?? pair.a} against ${pair.relation?.regressor ?? pair.b}, on the least-squares line`,
     width: 860,
     height: 240,
     xLabels,
@@ -74,8 +77,9 @@ function details(pair: PairReport, report: DiagnosticReport): string {
   const out: string[] = [];
   const r = pair.relation;
   if (r) {
-    const lines = [`${r.normalisationReason}`, `Static OLS: beta ${formatStatistic(r.ols.beta)}, intercept ${formatStatistic(r.ols.intercept)}.`,
-      `Dynamic OLS: beta ${formatStatistic(r.dynamicOls.beta)}, standard error ${formatStatistic(r.dynamicOls.standardError)}, ${r.dynamicOls.leadsLags} leads and lags, ${r.dynamicOls.observations} rows.`];
+    const lines = [`${r.normalisationReason}`, `Least-squares line (the spread is built on it): beta ${formatStatistic(r.ols.beta)}, intercept ${formatStatistic(r.ols.intercept)}.`,
+      `Dynamic OLS: beta ${formatStatistic(r.dynamicOls.beta)}, standard error ${formatStatistic(r.dynamicOls.standardError)} ${r.dynamicOls.standardErrorMethod}, ${r.dynamicOls.leadsLags} leads and lags, ${r.dynamicOls.observations} rows.`,
+      `Hedge: ${r.hedgeText}.`];
     if (r.halves) {
       const h = r.halves;
       lines.push(`Halves: ${formatStatistic(h.first.beta)} (${h.first.from} to ${h.first.to}) and ${formatStatistic(h.second.beta)} (${h.second.from} to ${h.second.to}), ` +
@@ -88,8 +92,9 @@ function details(pair: PairReport, report: DiagnosticReport): string {
     const side = (s: typeof adj.ecm.dependent): string[] => [s.series, fixed4(s.speed), fixed4(s.standardError), formatPValue(s.pValue), s.corrects ? 'yes' : 'no'];
     out.push(`<h4>Who closes the gap (error-correction model, ${adj.ecm.lags} lagged change${adj.ecm.lags === 1 ? '' : 's'})</h4>` +
       htmlTable(['series', 'speed', 'std. error', 'p-value', 'closes the gap'], [side(adj.ecm.dependent), side(adj.ecm.regressor)]) +
-      el('p', `Half-life with both sides adjusting: ${adj.ecm.halfLife === null ? (adj.ecm.halfLifeNote ?? 'none') : `${fixed1(adj.ecm.halfLife)} ${report.data.period}s`}; ` +
-        `from the spread's AR(1) (coefficient ${formatStatistic(adj.spreadAr1.phi)}): ${adj.spreadAr1.halfLife === null ? (adj.spreadAr1.halfLifeNote ?? 'none') : `${fixed1(adj.spreadAr1.halfLife)} ${report.data.period}s`}.`, 'note'));
+      el('p', `Half-life: ${adj.spreadAr1.halfLife === null ? (adj.spreadAr1.halfLifeNote ?? 'none') : `${fixed1(adj.spreadAr1.halfLife)} ${report.data.period}s`}, ` +
+        `${adj.spreadAr1.definition} (AR(1) coefficient ${formatStatistic(adj.spreadAr1.phi)}). ` +
+        `Half-life implied by the error-correction model, both prices adjusting: ${adj.ecm.ecmHalfLife === null ? (adj.ecm.ecmHalfLifeNote ?? 'none') : `${fixed1(adj.ecm.ecmHalfLife)} ${report.data.period}s`}.`, 'note'));
   }
   return out.join('\n');
 }

@@ -41,8 +41,9 @@ export function renderPairTerminal(pair: PairReport, report: DiagnosticReport): 
 
   const r = pair.relation;
   if (r) {
-    out.push(labelled('Long-run relation', `${r.text} (dynamic OLS with ${r.dynamicOls.leadsLags} leads and lags; standard error ${formatStatistic(r.dynamicOls.standardError)})`));
-    out.push(labelled('Static OLS line', `beta ${formatStatistic(r.ols.beta)}, intercept ${formatStatistic(r.ols.intercept)}`));
+    out.push(labelled('Long-run relation', `${r.text} (dynamic OLS with ${r.dynamicOls.leadsLags} leads and lags; standard error ${formatStatistic(r.dynamicOls.standardError)} ${r.dynamicOls.standardErrorMethod})`));
+    out.push(labelled('Hedge', r.hedgeText));
+    out.push(labelled('Least-squares line', `beta ${formatStatistic(r.ols.beta)}, intercept ${formatStatistic(r.ols.intercept)} (the spread is built on this line)`));
     out.push(labelled('Written as', r.normalisationReason));
     if (r.halves) {
       const h = r.halves;
@@ -54,8 +55,8 @@ export function renderPairTerminal(pair: PairReport, report: DiagnosticReport): 
   }
   const adj = pair.adjustment;
   if (adj) {
-    out.push(labelled('Half-life', `${periodsText(adj.spreadAr1.halfLife, adj.spreadAr1.halfLifeNote, period)} from the spread's AR(1) (coefficient ${formatStatistic(adj.spreadAr1.phi)}); ` +
-      `${periodsText(adj.ecm.halfLife, adj.ecm.halfLifeNote, period)} from the error-correction model, both sides adjusting`));
+    out.push(labelled('Half-life', `${periodsText(adj.spreadAr1.halfLife, adj.spreadAr1.halfLifeNote, period)}: ${adj.spreadAr1.definition} (AR(1) coefficient ${formatStatistic(adj.spreadAr1.phi)})`));
+    out.push(labelled('ECM half-life', `${periodsText(adj.ecm.ecmHalfLife, adj.ecm.ecmHalfLifeNote, period)}: implied by the error-correction model, both prices adjusting`));
     const side = (s: typeof adj.ecm.dependent): string => `${s.series} ${fixed4(s.speed)} (p ${formatPValue(s.pValue)}${s.corrects ? ', closes the gap' : ''})`;
     out.push(labelled('Speed of adjustment', `${side(adj.ecm.dependent)}; ${side(adj.ecm.regressor)}`));
   }

@@ -62,7 +62,7 @@ export function spreadChart(data: DataSection, spread: SpreadReport): ChartModel
   const flat = (v: number): number[] => spread.values.map(() => v);
   return {
     id: 'spread',
-    title: 'The spread, with bands at 2 standard deviations',
+    title: 'The spread on the plain least-squares line, with bands at 2 standard deviations',
     ...axis,
     lines: [
       { label: 'Spread', values: spread.values, role: 'series' },
@@ -80,7 +80,7 @@ export function rollingZChart(data: DataSection, spread: SpreadReport): ChartMod
   const flat = (v: number): number[] => spread.rollingZ.map(() => v);
   return {
     id: 'rolling-z',
-    title: `Where the spread stands against the last ${spread.rollingWindow} rows`,
+    title: `Where the spread (plain least-squares line) stands against the last ${spread.rollingWindow} rows`,
     ...axis,
     lines: [
       { label: 'Rolling z-score', values: spread.rollingZ, role: 'series' },

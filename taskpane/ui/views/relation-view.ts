@@ -4,6 +4,11 @@
  * squares, whether it held across the halves of the sample, how fast a gap closes (the
  * engine's "closes half its gap in about N days" sentence beside the numbers) and which side
  * does the closing, where the spread stands now, and the spread and rolling z-score charts.
+ *
+ * The headline is the dynamic-OLS line (the estimate with sound standard errors); the spread,
+ * its z-scores and its half-life are built on the least-squares line, and every label here
+ * says so, so the headline and the charts do not seem to disagree. With logs the slope is an
+ * elasticity, and the units to hold at the latest prices stand beside it.
  */
 import type { DiagnosticReport } from '../../../addin/report/report-types';
 import type { PairReport } from '../../../addin/report/pair-types';
@@ -24,6 +29,10 @@ export interface RelationStepView {
   /** Said first when the tests found no tie: the numbers then describe a gap that need not close. */
   untiedNote: string | null;
   relationText: string | null;
+  /** The slope as a hedge: an elasticity and the units to hold at the latest prices (logs), or the units to hold (prices). */
+  hedgeText: string | null;
+  /** Which line the spread, its z-scores and its half-life are built on. */
+  spreadLineNote: string | null;
   normalisationReason: string | null;
   lineFacts: FactView[];
   halvesNote: string | null;
@@ -49,25 +58,32 @@ export function relationStepView(report: DiagnosticReport, pair: PairReport): Re
   const r = pair.relation;
   const a = pair.adjustment;
   const s = pair.spread;
+  const slopeWord = r?.slopeMeaning === 'elasticity' ? 'Elasticity' : 'Hedge ratio';
   const lineFacts: FactView[] = r
     ? [
-        { label: 'Hedge ratio, plain least squares', value: showNumber(r.ols.beta, 4) },
-        { label: 'Hedge ratio, dynamic least squares', value: showNumber(r.dynamicOls.beta, 4) },
-        { label: 'Its standard error', value: showNumber(r.dynamicOls.standardError, 4) },
+        { label: `${slopeWord}, dynamic least squares (the estimate)`, value: showNumber(r.dynamicOls.beta, 4) },
+        { label: 'Its standard error (from the long-run variance of the residual)', value: showNumber(r.dynamicOls.standardError, 4) },
         { label: 'Intercept, dynamic least squares', value: showNumber(r.dynamicOls.intercept, 4) },
+        {
+          label: r.slopeMeaning === 'elasticity'
+            ? `Units of ${r.regressor} to hold per unit of ${r.dependent}, at the latest prices`
+            : `Units of ${r.regressor} to hold per unit of ${r.dependent}`,
+          value: showNumber(r.dynamicOls.hedgeUnits, 4),
+        },
+        { label: `${slopeWord}, plain least squares (the line the spread is built on)`, value: showNumber(r.ols.beta, 4) },
       ]
     : [];
   if (r?.halves) {
     lineFacts.push(
-      { label: `Hedge ratio, ${r.halves.first.from} to ${r.halves.first.to}`, value: showNumber(r.halves.first.beta, 4) },
-      { label: `Hedge ratio, ${r.halves.second.from} to ${r.halves.second.to}`, value: showNumber(r.halves.second.beta, 4) },
+      { label: `${slopeWord}, ${r.halves.first.from} to ${r.halves.first.to}`, value: showNumber(r.halves.first.beta, 4) },
+      { label: `${slopeWord}, ${r.halves.second.from} to ${r.halves.second.to}`, value: showNumber(r.halves.second.beta, 4) },
       { label: 'Held steady across the halves?', value: r.halves.stable ? 'Yes' : 'No: it moved' },
     );
   }
   const pullFacts: FactView[] = a
     ? [
-        { label: 'Half-life of a gap (both sides adjusting)', value: halfLifeText(a.ecm.halfLife, a.ecm.halfLifeNote, period) },
-        { label: 'Half-life of a gap (the spread alone)', value: halfLifeText(a.spreadAr1.halfLife, a.spreadAr1.halfLifeNote, period) },
+        { label: "Half-life of the spread (AR(1) of the spread on the plain least-squares line)", value: halfLifeText(a.spreadAr1.halfLife, a.spreadAr1.halfLifeNote, period) },
+        { label: 'Half-life implied by the error-correction model, both prices adjusting', value: halfLifeText(a.ecm.ecmHalfLife, a.ecm.ecmHalfLifeNote, period) },
         ...[a.ecm.dependent, a.ecm.regressor].flatMap((side) => [
           { label: `${side.series} moves to close the gap?`, value: side.corrects ? 'Yes' : 'No' },
           { label: `${side.series}: speed (p-value)`, value: `${showNumber(side.speed, 4)} (${showPValue(side.pValue)})` },
@@ -76,7 +92,7 @@ export function relationStepView(report: DiagnosticReport, pair: PairReport): Re
     : [];
   if (s) {
     pullFacts.push(
-      { label: `Spread on ${s.latestDate ?? s.latestRow}, in standard deviations`, value: showNumber(s.latestZ, 2) },
+      { label: `Spread (plain least-squares line) on ${s.latestDate ?? s.latestRow}, in standard deviations`, value: showNumber(s.latestZ, 2) },
       { label: `Against the last ${s.rollingWindow} rows`, value: showNumber(s.latestRollingZ, 2) },
     );
   }
@@ -86,6 +102,11 @@ export function relationStepView(report: DiagnosticReport, pair: PairReport): Re
       ? null
       : 'The tests found no long-run tie for this pair, so the line below is only a fit to the past: the gap has no reason to close.',
     relationText: r?.text ?? null,
+    hedgeText: r ? `${r.hedgeText.charAt(0).toUpperCase()}${r.hedgeText.slice(1)}.` : null,
+    spreadLineNote: s
+      ? `The spread, its z-scores and its half-life are built on the plain least-squares line (slope ${showNumber(s.line.beta, 4)}), whose residual the tie tests checked; ` +
+        'the line above is the dynamic least-squares estimate, whose standard error is sound.'
+      : null,
     normalisationReason: r?.normalisationReason ?? null,
     lineFacts,
     halvesNote: r?.halvesNote ?? null,
