@@ -17,6 +17,8 @@ export const PAIR_STATUS = {
   constant: 3,
   /** Not tested: the residual ADF design is singular at every lag (a residual that repeats itself). */
   singular: 4,
+  /** Not tested: the two series do not share an order of integration of 1 or more (series-orders.ts). */
+  setAside: 5,
 } as const;
 
 /** One of the PAIR_STATUS codes. */

@@ -18,6 +18,7 @@ import { halfLifeFromSpeed } from '../spread/half-life';
 import { resolveMaxLag } from '../unitroot/max-lag';
 import { FIELD, PAIR_STATUS, RECORD_SIZE } from './pair-record';
 import { ResidualAdfWorkspace } from './residual-adf-workspace';
+import { canPair } from './series-orders';
 import type { ScreenSettings } from './screen-options';
 import type { ScreenUniverse } from './screen-universe';
 
@@ -37,6 +38,13 @@ export class PairWorkspace {
   /** Tests series i on j (record 2k) and j on i (record 2k + 1) into `out` at record index `first`. */
   testPair(universe: ScreenUniverse, settings: ScreenSettings, i: number, j: number, out: Float64Array, first: number): void {
     const { rows, data } = universe;
+    const base = first * RECORD_SIZE;
+    if (universe.orders && !canPair(universe.orders[i], universe.orders[j])) {
+      out.fill(Number.NaN, base, base + 2 * RECORD_SIZE);
+      out[base + FIELD.status] = PAIR_STATUS.setAside;
+      out[base + RECORD_SIZE + FIELD.status] = PAIR_STATUS.setAside;
+      return;
+    }
     const both = universe.complete[i] === 1 && universe.complete[j] === 1;
     let a: Float64Array;
     let b: Float64Array;
@@ -85,7 +93,6 @@ export class PairWorkspace {
         sbb += (b[t] - meanB) * (b[t] - meanB);
       }
     }
-    const base = first * RECORD_SIZE;
     out.fill(Number.NaN, base, base + 2 * RECORD_SIZE);
     out[base + FIELD.nobs] = T;
     out[base + FIELD.lastRow] = lastRow;

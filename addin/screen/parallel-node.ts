@@ -4,6 +4,10 @@
  * shared result buffer; the answer is then finished exactly as on one thread, so it is the
  * same to the last bit (each pair's numbers depend only on its series and the settings).
  *
+ * Each series' order of integration is decided once, on the main thread, before any pair
+ * (series-orders.ts); the workers receive the orders with the series and skip the pairs the
+ * screen sets aside, exactly as one thread does.
+ *
  * The call is synchronous: the main thread works through chunks itself and then waits on the
  * queue's finished count (Atomics.wait), so the command line keeps its synchronous commands.
  * If a worker cannot start, the main thread simply takes its chunks; a chunk a worker still
@@ -19,6 +23,7 @@ import { drainChunks, finishedChunks, screenJob } from './chunk-queue';
 import { finishScreen, type ScreenResult } from './screen-pairs';
 import { resolveScreenOptions, type ScreenOptions } from './screen-options';
 import { screenUniverse, unorderedPairCount, type NamedSeries } from './screen-universe';
+import { withSeriesOrders } from './series-orders';
 import { MooringInputError } from '../errors';
 
 /** How to spread the work. */
@@ -72,8 +77,8 @@ function readErrors(ports: readonly MessagePort[], errors: string[]): boolean {
 
 /** Screens every pair of the series on several threads; the result equals screenPairs' (see the file comment). */
 export function screenPairsInThreads(series: readonly NamedSeries[], options: ScreenOptions = {}, threading: ThreadOptions = {}): { result: ScreenResult; report: ThreadReport } {
-  const universe = screenUniverse(series);
   const settings = resolveScreenOptions(options);
+  const universe = withSeriesOrders(screenUniverse(series), settings);
   const requested = threading.threads ?? Math.min(availableParallelism(), 16);
   if (!Number.isInteger(requested) || requested < 1 || requested > 64) {
     throw new MooringInputError(`The number of threads must be a whole number from 1 to 64; got ${String(requested)}.`);

@@ -8,16 +8,20 @@
  */
 import { FIELD, PAIR_STATUS, RECORD_SIZE, fieldOrNull } from './pair-record';
 import type { ScreenSettings } from './screen-options';
+import type { SeriesOrder } from './series-orders';
 
 /** One directed pair in the screen's answer: y regressed on x. */
 export interface ScreenPair {
   y: string;
   x: string;
+  /** Order of integration of y and of x (equal, at least 1: the screen ranks no other pair; 3 stands for "above 2"). */
+  orderY: number;
+  orderX: number;
   /** Engle-Granger tau of the residual ADF; null for an exact fit (tau is minus infinity). */
   statistic: number | null;
   /** MacKinnon (1994) p-value, as the single-pair test gives it. */
   pValue: number;
-  /** Benjamini-Hochberg adjusted p-value over every directed pair tested. */
+  /** Benjamini-Hochberg adjusted p-value over every directed pair tested (the ranked family: set-aside pairs are not in it). */
   adjustedPValue: number;
   /** True when the adjusted p-value is at or below the level. */
   discovery: boolean;
@@ -43,9 +47,10 @@ export interface ScreenPair {
 /** The index of the series pair of directed record d: [y, x]. */
 export type DirectedIndex = (d: number) => [number, number];
 
-/** Every tested directed record as a ScreenPair, with its adjusted p-value. */
+/** Every tested directed record as a ScreenPair, with its adjusted p-value and the orders of its two series. */
 export function decodePairs(
   names: readonly string[], records: Float64Array, tested: readonly number[], adjusted: Float64Array, seriesOf: DirectedIndex, settings: ScreenSettings,
+  orders: readonly SeriesOrder[],
 ): ScreenPair[] {
   return tested.map((d, f) => {
     const [yi, xi] = seriesOf(d);
@@ -54,6 +59,8 @@ export function decodePairs(
     const pair: ScreenPair = {
       y: names[yi],
       x: names[xi],
+      orderY: orders[yi].order as number,
+      orderX: orders[xi].order as number,
       statistic: fieldOrNull(records, d, FIELD.tau),
       pValue: at(FIELD.pValue),
       adjustedPValue: adjusted[f],

@@ -7,6 +7,7 @@
  * (two passes, for accuracy), so a pair of complete series needs only its cross product.
  */
 import { MooringInputError } from '../errors';
+import type { SeriesOrder } from './series-orders';
 
 /** One named series as a caller hands it in: numbers, with null or NaN for a gap. */
 export interface NamedSeries {
@@ -27,6 +28,11 @@ export interface ScreenUniverse {
   means: Float64Array;
   /** Sum of squared deviations from the mean of each complete series (NaN for one with gaps). */
   centredSquares: Float64Array;
+  /**
+   * Each series' order of integration (series-orders.ts), once decided: the chunk function then
+   * tests only the pairs whose members share an order of 1 or more. Absent: every pair is tested.
+   */
+  orders?: SeriesOrder[];
 }
 
 /** Checks the series (at least two, unique names, equal lengths, numbers or gaps) and packs them. */

@@ -56,16 +56,26 @@ describe('screen ranking, filters and family', () => {
   });
 
   it('leaves out pairs with too few shared rows, lists them, and keeps them out of the family', () => {
-    const short = universe.series.map((s, j) => ({ name: s.name, values: Array.from(s.values, (v, t) => (j === 0 && t >= 40 ? null : v)) }));
+    // Series 0 has prices on rows 0..149 only, series 1 on rows 110..299 only: 40 shared rows,
+    // while each has enough rows of its own for its order of integration.
+    const short = universe.series.map((s, j) => ({
+      name: s.name,
+      values: Array.from(s.values, (v, t) => ((j === 0 && t >= 150) || (j === 1 && t < 110) ? null : v)),
+    }));
     const result = screenPairs(short, { minObservations: 60 });
-    expect(result.family.size).toBe(56);
-    expect(result.untested).toHaveLength(16);
-    expect(result.untested[0].reason).toBe('only 40 shared rows (the minimum is 60)');
-    expect(result.matrix[0].every((v) => v === null)).toBe(true);
-    expect(result.cautions.join(' ')).toContain('16 directed pairs were not tested');
+    expect(result.orders[0].order).toBe(1);
+    expect(result.orders[1].order).toBe(1);
+    expect(result.untested).toEqual([
+      { y: 'c0m0', x: 'c0m1', reason: 'only 40 shared rows (the minimum is 60)' },
+      { y: 'c0m1', x: 'c0m0', reason: 'only 40 shared rows (the minimum is 60)' },
+    ]);
+    expect(result.family.size).toBe(72 - 2 - result.setAside.length);
+    expect(result.matrix[0][1]).toBeNull();
+    expect(result.matrix[1][0]).toBeNull();
+    expect(result.cautions.join(' ')).toContain('2 directed pairs were not tested');
   });
 
-  it('reports an exact copy up to scale as p = 0 with a note, and a series that never moves as untested', () => {
+  it('reports an exact copy up to scale as p = 0 with a note, and sets aside the pairs of a series that never moves', () => {
     const base = universe.series[6].values;
     const result = screenPairs([
       { name: 'A', values: base },
@@ -76,7 +86,12 @@ describe('screen ranking, filters and family', () => {
     expect(result.pairs[0].pValue).toBe(0);
     expect(result.pairs[0].statistic).toBeNull();
     expect(result.pairs[0].note).toMatch(/exact multiple/);
-    expect(result.untested.map((u) => u.reason)).toEqual(Array(4).fill('one of the series does not move on the shared rows'));
+    expect(result.orders[2]).toEqual({ name: 'Flat', order: null, orderText: null, agree: null, note: 'Flat does not move' });
+    expect(result.untested).toEqual([]);
+    expect(result.setAside.map((u) => [u.y, u.x])).toEqual([['A', 'Flat'], ['Flat', 'A'], ['B', 'Flat'], ['Flat', 'B']]);
+    expect(result.setAside.map((u) => u.reason)).toEqual(
+      Array(4).fill('the order of integration of Flat could not be decided (Flat does not move): a pair needs two wandering series of the same order'),
+    );
   });
 
   it('never carries NaN: every number in the answer is finite or absent', () => {

@@ -5,6 +5,8 @@ import { chunkRanges, screenChunk } from '../../addin/screen/screen-chunk';
 import { finishScreen, screenPairs } from '../../addin/screen/screen-pairs';
 import { resolveScreenOptions } from '../../addin/screen/screen-options';
 import { screenUniverse, unorderedPairAt, unorderedPairCount } from '../../addin/screen/screen-universe';
+import { withSeriesOrders } from '../../addin/screen/series-orders';
+import { SeededRandom, autoregressive1 } from '../../addin/random';
 import { generatedUniverse } from './generated-universe';
 
 /**
@@ -12,9 +14,11 @@ import { generatedUniverse } from './generated-universe';
  * the same bits. Checked here in one thread; the worker pool itself is checked against the
  * built bundle in screen-threads.test.ts.
  */
-const { series } = generatedUniverse(31, { clusters: 2, perCluster: 3, walks: 4, T: 250 });
-const universe = screenUniverse(series);
+// An AR(1) series (coefficient 0.5, unit shocks, seed 31) joins the generated ones, so some pairs are set aside.
+const { series: generated } = generatedUniverse(31, { clusters: 2, perCluster: 3, walks: 4, T: 250 });
+const series = [...generated, { name: 'settles', values: autoregressive1(new SeededRandom(31), 250, 0.5, 1).map((v) => 50 + v) }];
 const settings = resolveScreenOptions({ johansen: true });
+const universe = withSeriesOrders(screenUniverse(series), settings);
 const total = unorderedPairCount(series.length);
 const whole = screenChunk(universe, settings, 0, total);
 
@@ -58,12 +62,22 @@ describe('the pure chunk function', () => {
 });
 
 describe('the shared chunk queue, drained on this thread', () => {
+  it('the universe carries one order per series, and the settling series is set aside', () => {
+    expect(universe.orders?.map((o) => o.order)).toEqual([...generated.map(() => 1), 0]);
+  });
+
   it('fills the shared buffer with the same records as one chunk, and its result equals screenPairs', () => {
     const job = screenJob(universe, settings, 3);
     expect(drainChunks(job)).toBe(job.chunks.length);
     expect(finishedChunks(job)).toBe(job.chunks.length);
     expect(Array.from(new Float64Array(job.results))).toEqual(Array.from(whole));
-    expect(finishScreen(universe, settings, new Float64Array(job.results))).toEqual(screenPairs(series, { johansen: true }));
+    const result = finishScreen(universe, settings, new Float64Array(job.results));
+    expect(result).toEqual(screenPairs(series, { johansen: true }));
+    expect(result.setAside).toHaveLength(2 * generated.length);
+  });
+
+  it('finishing needs the orders the records were made with', () => {
+    expect(() => finishScreen(screenUniverse(series), settings, whole)).toThrow(/carries no orders/);
   });
 
   it('a second drain finds nothing left; a retake reruns taken-but-unfinished chunks with the same numbers', () => {

@@ -27,15 +27,19 @@ describe('mooring screen', () => {
   it('screens every numeric column by default and leaves the text column out', () => {
     expect(json.series).toEqual(['c0m0', 'c0m1', 'c0m2', 'w0', 'w1']);
     expect(json.leftOut).toEqual(['Ticker']);
-    expect(json.family.size).toBe(20);
-    expect(json.pairs).toHaveLength(20);
+    // The unit-root tests call the walk w0 settled (order 0) on these 200 rows: its 8 directed pairs are set aside.
+    expect(json.orders.map((o: { order: number }) => o.order)).toEqual([1, 1, 1, 0, 1]);
+    expect(json.setAside).toHaveLength(8);
+    expect(json.family.size).toBe(12);
+    expect(json.pairs).toHaveLength(12);
   });
 
   it('gives each pair the fields y, x, statistic, pValue, adjustedPValue, beta, halfLife, zscore, and the chance sentence', () => {
     for (const p of json.pairs) {
-      for (const key of ['y', 'x', 'statistic', 'pValue', 'adjustedPValue', 'beta', 'halfLife', 'zscore']) expect(p).toHaveProperty(key);
+      for (const key of ['y', 'x', 'orderY', 'orderX', 'statistic', 'pValue', 'adjustedPValue', 'beta', 'halfLife', 'zscore']) expect(p).toHaveProperty(key);
     }
-    expect(json.chanceSentence).toMatch(/^Of 20 directed pairs tested at 5%, .* about 1 would pass by chance alone/);
+    expect(json.chanceSentence).toMatch(/^Of 12 directed pairs tested at 5%, .* about 1 would pass by chance alone/);
+    for (const p of json.setAside) for (const key of ['y', 'x', 'orderY', 'orderX', 'reason']) expect(p).toHaveProperty(key);
     expect(json.pairs.slice(0, 6).every((p: { y: string; x: string }) => p.y.startsWith('c0') && p.x.startsWith('c0'))).toBe(true);
   });
 
@@ -54,8 +58,10 @@ describe('mooring screen', () => {
     expect(some.pairs.every((p: { halfLife: number | null }) => p.halfLife !== null && p.halfLife <= 5)).toBe(true);
     expect(some.chanceSentence).toContain('tested at 1%');
     const strict = JSON.parse(run('--min-obs', '150', '--json').stdout);
-    expect(strict.untested).toHaveLength(8);
-    expect(strict.family.size).toBe(12);
+    // w1 shares 140 rows with each c0 series (6 directed pairs untested); its pairs with w0 are set aside already.
+    expect(strict.untested).toHaveLength(6);
+    expect(strict.setAside).toHaveLength(8);
+    expect(strict.family.size).toBe(6);
   });
 
   it('with --johansen adds the trace rank of each pair', () => {
@@ -67,9 +73,10 @@ describe('mooring screen', () => {
     const out = run('--top', '3');
     expect(out.code).toBe(0);
     expect(out.stdout).toContain('Pair screen of 5 series');
-    expect(out.stdout).toContain('Of 20 directed pairs tested at 5%');
+    expect(out.stdout).toContain('Of 12 directed pairs tested at 5%');
     expect(out.stdout).toMatch(/\n\s+1 c0m\d on c0m\d/);
-    expect(out.stdout).toContain('... 17 more pairs');
+    expect(out.stdout).toContain('... 9 more pairs');
+    expect(out.stdout).toMatch(/Set aside\s+8 directed pairs, not ranked/);
     expect(out.stdout).toContain('Keep in mind');
   });
 

@@ -7,6 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { MooringInputError } from '../../addin/errors';
 import { screenPairsInThreads } from '../../addin/screen/parallel-node';
 import { screenPairs } from '../../addin/screen/screen-pairs';
+import { SeededRandom, autoregressive1 } from '../../addin/random';
 import { generatedUniverse } from './generated-universe';
 
 /**
@@ -44,6 +45,14 @@ describe('screen on worker threads (built worker dist/cli/screen-worker.js)', ()
     expect(report.note).toBeDefined();
   });
 
+  it('with a series that settles (an AR(1), coefficient 0.5, seed 42): its pairs are set aside on the threads as on one thread', () => {
+    const settled = [...series, { name: 'settles', values: autoregressive1(new SeededRandom(42), 300, 0.5, 1).map((v) => 20 + v) }];
+    const { result, report } = screenPairsInThreads(settled, {}, { threads: 3, workerFile: WORKER, workPerThread: 1 });
+    expect(report.workersStarted).toBe(2);
+    expect(result.setAside).toHaveLength(2 * series.length);
+    expect(result).toEqual(screenPairs(settled));
+  });
+
   it('uses no more threads than the work keeps busy (pairs x rows per thread), and says so', () => {
     const small = screenPairsInThreads(series.slice(0, 4), {}, { threads: 8, workerFile: WORKER });
     expect(small.report.threads).toBe(1);
@@ -79,6 +88,8 @@ describe('mooring screen in the built bundle: --threads 2 answers as --threads 1
     const { threads: _a, ...restOne } = one;
     const { threads: _b, ...restTwo } = two;
     expect(restTwo).toEqual(restOne);
-    expect((restOne.pairs as unknown[]).length).toBe(46 * 45);
+    // Every directed pair is ranked or set aside (a walk the unit-root tests call settled takes its pairs out of the ranking).
+    expect((restOne.pairs as unknown[]).length + (restOne.setAside as unknown[]).length).toBe(46 * 45);
+    expect((restOne.pairs as unknown[]).length).toBeGreaterThan(0.8 * 46 * 45);
   });
 });

@@ -1,6 +1,7 @@
 /**
- * `mooring screen`: every pair of the file's series (or of --series A,B,...) tested for
- * cointegration both ways round, ranked by evidence, with Benjamini-Hochberg adjusted
+ * `mooring screen`: every pair of the file's series (or of --series A,B,...) whose two series
+ * wander with the same order tested for cointegration both ways round, ranked by evidence
+ * (the other pairs listed apart, with the reason), with Benjamini-Hochberg adjusted
  * p-values and the sentence on how many would pass by chance alone. Each column is cleaned on
  * its own and each pair tested on the rows both have, so a series that starts later still
  * pairs with the others.
@@ -81,6 +82,7 @@ function terminalReport(result: ScreenResult, top: number, leftOut: string[], th
     '',
     labelled('Series', result.names.join(', ')),
     ...(leftOut.length ? [labelled('Left out', `${leftOut.join(', ')} (not numeric)`)] : []),
+    labelled('Orders', result.orders.map((o) => `${o.name} ${o.orderText ?? 'undecided'}`).join(', ')),
     labelled('Tested', `${result.family.size} directed pairs (Engle-Granger, constant, lags by the rule)`),
     labelled('Adjustment', `Benjamini-Hochberg over ${result.family.description}`),
     labelled('Threads', threads),
@@ -91,6 +93,13 @@ function terminalReport(result: ScreenResult, top: number, leftOut: string[], th
     ...shown.map((p, i) => pairLine(i + 1, p, width)),
   ];
   if (result.pairs.length > shown.length) out.push(`  ... ${result.pairs.length - shown.length} more pairs (--top N shows more; --json lists all)`);
+  if (result.setAside.length > 0) {
+    out.push(
+      '',
+      labelled('Set aside', `${result.setAside.length} directed pairs, not ranked: a pair needs two wandering series of the same order (--json lists them under setAside)`),
+      ...result.setAsideSummary.map((line) => bullet(line)),
+    );
+  }
   if (result.untested.length > 0) out.push('', labelled('Not tested', `${result.untested.length} directed pairs; --json lists them with the reason`));
   out.push('', ...result.cautions.map((c) => bullet(c)));
   return out.join('\n');
@@ -101,15 +110,18 @@ export const screenCommand: Command = {
   name: 'screen',
   summary: 'every pair of many series tested for cointegration, ranked, with false-discovery control',
   description: [
-    'Runs the Engle-Granger test on every pair of series, both ways round, with the defaults of mooring eg, and ranks the pairs by p-value. ' +
+    'Decides each series\' order of integration once (as mooring order and the report do, at --alpha with a constant), then runs the Engle-Granger test ' +
+      'on every pair of series that wander with the same order, both ways round, with the defaults of mooring eg, and ranks the pairs by p-value. ' +
       'Each pair also gets its hedge ratio, the half-life of its spread and the spread\'s latest z-score.',
+    'A pair with a series that settles around its own mean (order 0), or whose two series wander with different orders, cannot share a long-run path: ' +
+      'it is set aside with the reason, and is not counted in the adjustment.',
     'Testing many pairs turns up some that pass by chance alone: the report says how many, and gives each pair a p-value adjusted ' +
       'for the false-discovery rate (Benjamini-Hochberg, over every directed pair tested). Treat a passing pair as a candidate to check, not a finding.',
     'By default every numeric column is screened; each pair uses the rows where both series have a price.',
   ],
   usage: 'mooring screen <file.csv> [--series A,B,...] [options]',
   options: [
-    { name: 'alpha', value: 'LEVEL', help: 'level for the chance sentence and the discoveries (default 0.05)' },
+    { name: 'alpha', value: 'LEVEL', help: 'level for the orders of integration, the chance sentence and the discoveries (default 0.05)' },
     { name: 'min-half-life', value: 'ROWS', help: 'show only pairs whose spread half-life is at least this' },
     { name: 'max-half-life', value: 'ROWS', help: 'show only pairs whose spread half-life is at most this' },
     { name: 'min-obs', value: 'N', help: 'test only pairs with at least N shared rows (default 20)' },
@@ -143,6 +155,8 @@ export const screenCommand: Command = {
         series: result.names,
         leftOut,
         alpha: result.alpha,
+        orders: result.orders,
+        orderTests: result.orderTests,
         family: result.family,
         rawPasses: result.rawPasses,
         expectedByChance: result.expectedByChance,
@@ -151,6 +165,8 @@ export const screenCommand: Command = {
         pairs: result.pairs.map((p) => ({ ...p, lastLine: context.table.lines[p.lastRow], lastDate: dates?.[p.lastRow]?.trim() || null })),
         matrix: result.matrix,
         adjustedMatrix: result.adjustedMatrix,
+        setAside: result.setAside,
+        setAsideSummary: result.setAsideSummary,
         untested: result.untested,
         screenCautions: result.cautions,
         threads: report,
