@@ -5,6 +5,10 @@
  */
 
 /** Deterministic terms in a regression: none, a constant, or a constant and a linear trend. */
+import type { PValueBound } from './p-value-bound';
+
+export type { PValueBound } from './p-value-bound';
+
 export type Deterministic = 'none' | 'const' | 'trend';
 
 export const DETERMINISTIC_WORDS: readonly Deterministic[] = ['none', 'const', 'trend'];
@@ -35,8 +39,15 @@ export interface TestResult {
   statistic: number;
   /** p-value, or null when no valid p-value exists (then pValueNote says why). */
   pValue: number | null;
-  /** Set when the p-value is bounded rather than exact (e.g. "beyond the table: below 0.01") or missing. */
+  /** Set when the p-value is bounded rather than exact (e.g. "below 0.01: the statistic lies beyond the table's last column") or missing. */
   pValueNote?: string;
+  /**
+   * Set by a test that reads its p-value off a table when the statistic lies beyond the
+   * table's ends: pValue is then the table's end probability and the truth lies 'below' or
+   * 'above' it. Absent or null when the p-value is exact. Renderers print it as "< 0.01"
+   * through formatBoundedPValue (addin/p-value-bound.ts).
+   */
+  pValueBound?: PValueBound;
   /** Critical values by level, keys like "1%", "5%", "10%". */
   critical: Record<string, number>;
   /** Which tail rejects: "lower" (statistic below the critical value) or "upper". */
@@ -60,9 +71,13 @@ export interface TestResult {
   details: ResultDetail[];
 }
 
-/** True when the result rejects its null at the given level (by the p-value where there is one). */
+/**
+ * True when the result rejects its null at the given level (by the p-value where there is one).
+ * A p-value bounded from below at exactly alpha (KPSS "below 0.01" at the 1% level) rejects:
+ * the true p-value is smaller.
+ */
 export function rejects(result: TestResult, alpha: number): boolean | null {
-  if (result.pValue !== null) return result.pValue < alpha;
+  if (result.pValue !== null) return result.pValue < alpha || (result.pValueBound === 'below' && result.pValue <= alpha);
   const key = `${Math.round(alpha * 1000) / 10}%`;
   const cv = result.critical[key];
   if (cv === undefined) return null;

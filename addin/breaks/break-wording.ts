@@ -2,6 +2,7 @@
  * Plain words for the break tests: numbers inside sentences, the shift each model allows,
  * and the verdicts a trader reads first.
  */
+import { pValueBoundText } from '../p-value-bound';
 import type { BreakLocation } from './break-location';
 
 /** Four significant digits, trailing zeros dropped: -5.386, 0.0063. */
@@ -10,11 +11,11 @@ export function formatNumber(v: number): string {
   return String(Number(v.toPrecision(4)));
 }
 
-/** "p = 0.031", "p < 0.001", or "p at most 0.00001" when the table's end was reached. */
+/** "p = 0.031", "p < 0.001", or "p < 0.00001" / "p > 0.999" when the table's end was reached. */
 export function formatBreakPValue(p: number | null, beyond: 'below' | 'above' | null): string {
   if (p === null) return 'no p-value';
-  if (beyond === 'below') return `p below ${p}`;
-  if (beyond === 'above') return `p above ${p}`;
+  const bound = pValueBoundText(p, beyond);
+  if (bound !== null) return `p ${bound}`;
   if (p < 0.001) return 'p < 0.001';
   return `p = ${Number(p.toPrecision(2))}`;
 }

@@ -15,6 +15,7 @@
  * the p-value is held at 0.00001 or 0.999 beyond the table, with a note).
  */
 import { MooringInputError } from '../errors';
+import { pValueBoundNote } from '../p-value-bound';
 import type { ResultDetail, TestResult } from '../result';
 import { leastSquares } from '../regression/least-squares';
 import { zivotAndrewsCritical, zivotAndrewsPValue, type ZivotAndrewsModel } from '../tables/zivot-andrews-table';
@@ -97,7 +98,7 @@ export function zivotAndrewsTest(series: ArrayLike<number>, options: ZivotAndrew
   const warnings: string[] = [];
   let pValueNote: string | undefined;
   if (table.beyondTable) {
-    pValueNote = `beyond the table: the p-value is ${table.beyondTable} ${table.pValue}`;
+    pValueNote = pValueBoundNote(table.pValue, table.beyondTable);
     warnings.push(`The statistic lies beyond the simulated table: the true p-value is ${table.beyondTable} the ${table.pValue} reported.`);
   }
   if (model === 'slope' && table.pValue < 0.005) {
@@ -149,7 +150,7 @@ export function zivotAndrewsTest(series: ArrayLike<number>, options: ZivotAndrew
     statisticName: 'min t',
     statistic,
     pValue: table.pValue,
-    ...(pValueNote ? { pValueNote } : {}),
+    ...(pValueNote ? { pValueNote, pValueBound: table.beyondTable } : {}),
     critical: { ...critical },
     rejectTail: 'lower',
     lags,

@@ -2,6 +2,7 @@
  * Numbers inside the engine's plain-words verdicts. Renderers format the result fields
  * themselves; these are only for the sentences the engine writes.
  */
+import { pValueBoundText, type PValueBound } from '../p-value-bound';
 
 /** Four significant digits, trailing zeros dropped: 1.023, 0.0612, 13.51. */
 export function formatCoefficient(v: number): string {
@@ -9,8 +10,13 @@ export function formatCoefficient(v: number): string {
   return String(Number(v.toPrecision(4)));
 }
 
-/** A p-value for a sentence: "p = 0.031", "p < 0.001", or "no p-value" when none exists. */
-export function formatPValue(p: number | null): string {
+/**
+ * A p-value for a sentence: "p = 0.031", "p < 0.001", or "no p-value" when none exists; a
+ * bounded one (a table's end) as "p < 0.01" or "p > 0.10".
+ */
+export function formatPValue(p: number | null, bound?: PValueBound): string {
+  const bounded = pValueBoundText(p, bound);
+  if (bounded !== null) return `p ${bounded}`;
   if (p === null) return 'no p-value';
   if (p < 0.001) return 'p < 0.001';
   return `p = ${Number(p.toPrecision(2))}`;

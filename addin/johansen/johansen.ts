@@ -104,7 +104,7 @@ export function johansenTest(block: ArrayLike<number>[], options: JohansenOption
     const raw = kind === 'trace' ? -n * logs.slice(r).reduce((a, b) => a + b, 0) : -n * logs[r];
     const statistic = factor * raw;
     const { critical, source } = rankCriticalValues(kind, caseName, m - r);
-    const { pValue, note } = rankPValue(statistic, kind, caseName, m - r);
+    const { pValue, bound, note } = rankPValue(statistic, kind, caseName, m - r);
     const details: ResultDetail[] = [
       { key: 'case', label: 'Deterministic case', value: `${caseName} (${JOHANSEN_CASE_LABEL[caseName]})` },
       { key: 'eigenvalue', label: `Eigenvalue ${r + 1}`, value: eigenvalues[r] },
@@ -121,7 +121,7 @@ export function johansenTest(block: ArrayLike<number>[], options: JohansenOption
       statisticName: kind === 'trace' ? 'trace' : 'lambda-max',
       statistic,
       pValue,
-      ...(note === undefined ? {} : { pValueNote: note }),
+      ...(note === undefined ? {} : { pValueNote: note, pValueBound: bound }),
       critical,
       rejectTail: 'upper',
       lags,

@@ -9,6 +9,7 @@
  * value can have a simulated p-value a little either side of the level; the rank choice
  * goes by the p-value.
  */
+import { pValueBoundNote, type PValueBound } from '../p-value-bound';
 import { publishedJohansenCritical } from '../tables/johansen-published';
 import type { JohansenCase, JohansenStatisticKind } from './deterministic-case';
 import { johansenCriticalValues, johansenPValue } from './johansen-pvalue';
@@ -35,14 +36,12 @@ export function rankCriticalValues(kind: JohansenStatisticKind, caseName: Johans
 }
 
 /**
- * The asymptotic p-value of a rank statistic (upper tail) from the simulated table, with a
- * note in words when the statistic lies beyond the table's ends so the value is a bound.
+ * The asymptotic p-value of a rank statistic (upper tail) from the simulated table; beyond the
+ * table's ends the value is the table's end probability and `bound` says which side the truth
+ * lies on, with the note in words.
  */
-export function rankPValue(statistic: number, kind: JohansenStatisticKind, caseName: JohansenCase, nMinusR: number): { pValue: number; note?: string } {
+export function rankPValue(statistic: number, kind: JohansenStatisticKind, caseName: JohansenCase, nMinusR: number): { pValue: number; bound: PValueBound; note?: string } {
   const { pValue, beyondTable } = johansenPValue(statistic, kind, caseName, nMinusR);
-  if (beyondTable === null) return { pValue };
-  const note = beyondTable === 'below'
-    ? `beyond the table: the p-value is below ${pValue}`
-    : `beyond the table: the p-value is above ${pValue}`;
-  return { pValue, note };
+  if (beyondTable === null) return { pValue, bound: null };
+  return { pValue, bound: beyondTable, note: pValueBoundNote(pValue, beyondTable) };
 }

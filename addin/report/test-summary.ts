@@ -5,7 +5,7 @@
  * passes through JSON, a Web Worker message or the pane unchanged. A statistic that is not a
  * finite number (an exact fit gives minus infinity) becomes null with a note saying why.
  */
-import { rejects, type TestResult } from '../result';
+import { rejects, type PValueBound, type TestResult } from '../result';
 
 /** One test, summarised for the report. */
 export interface TestSummary {
@@ -18,6 +18,8 @@ export interface TestSummary {
   statisticNote: string | null;
   pValue: number | null;
   pValueNote: string | null;
+  /** 'below' or 'above' when pValue is a table's end and only a bound ("< 0.01"); null when exact. */
+  pValueBound: PValueBound;
   /** Critical values by level ("1%", "5%", "10%"); non-finite entries are left out. */
   critical: Record<string, number>;
   rejectTail: 'lower' | 'upper';
@@ -53,6 +55,7 @@ export function summariseTest(result: TestResult, alpha: number): TestSummary {
       : null,
     pValue: finiteOrNull(result.pValue),
     pValueNote: result.pValueNote ?? null,
+    pValueBound: result.pValueBound ?? null,
     critical,
     rejectTail: result.rejectTail,
     rejects: rejects(result, alpha),

@@ -4,9 +4,11 @@
  * mean (or from a constant and trend t = 1..n); S_t their partial sums;
  *   eta = sum S_t^2 / (n^2 lambda^2), lambda^2 the Bartlett long-run variance of e.
  * Large values reject. p-value: linear interpolation in the KPSS (1992) Table 1 upper-tail
- * points (10, 5, 2.5, 1%), held at the ends with a "beyond the table" note, never clipped silently.
+ * points (10, 5, 2.5, 1%), held at the ends and marked as a bound (pValueBound, "below 0.01" or
+ * "above 0.10"), never clipped silently.
  */
 import { MooringInputError } from '../errors';
+import { pValueBoundNote, pValueBoundText } from '../p-value-bound';
 import type { TestResult } from '../result';
 import { leastSquares } from '../regression/least-squares';
 import { bartlettLongRunVariance, neweyWestBandwidth } from '../regression/long-run-variance';
@@ -58,10 +60,11 @@ export function kpssTest(series: ArrayLike<number>, options: KpssOptions = {}, n
   const statistic = sumSquares / (n * n) / lrv;
   const table = kpssPValue(statistic, deterministic);
   const warnings: string[] = [];
-  let pValueNote: string | undefined;
-  if (table.beyondTable === 'below') pValueNote = 'beyond the table: the p-value is below 0.01';
-  if (table.beyondTable === 'above') pValueNote = 'beyond the table: the p-value is above 0.10';
-  if (pValueNote) warnings.push(`The statistic lies outside the published table; ${pValueNote}.`);
+  const pValueBound = table.beyondTable;
+  const pValueNote = pValueBound === null ? undefined : pValueBoundNote(table.pValue, pValueBound);
+  if (pValueBound !== null) {
+    warnings.push(`The statistic lies outside the published table (it spans p-values 0.01 to 0.10), so the p-value is only known to be ${pValueBoundText(table.pValue, pValueBound)}.`);
+  }
   const { nullHypothesis, alternative } = stationarityHypotheses(name, deterministic);
   return {
     test: 'KPSS',
@@ -70,6 +73,7 @@ export function kpssTest(series: ArrayLike<number>, options: KpssOptions = {}, n
     statistic,
     pValue: table.pValue,
     pValueNote,
+    pValueBound,
     critical: { ...kpssCriticalValues(deterministic) },
     rejectTail: 'upper',
     lags: null,

@@ -12,7 +12,7 @@
 import type { ResultRow } from './result-rows';
 
 /** Keys shown first on the card, under the title. */
-const SUMMARY_KEYS = ['verdict', 'statistic', 'pValue', 'pValueNote', 'decision5'];
+const SUMMARY_KEYS = ['verdict', 'statistic', 'pValue', 'pValueReads', 'pValueNote', 'decision5'];
 /** Keys that say how the test was run. */
 const SETUP_KEYS = ['nullHypothesis', 'alternative', 'lags', 'lagRule', 'bandwidth', 'observations', 'deterministic'];
 

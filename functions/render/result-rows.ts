@@ -5,9 +5,11 @@
  * these rows out; neither formats a field of its own, and nothing here computes a statistic.
  *
  * Values a cell cannot hold are written in words (an infinite statistic as "minus infinity",
- * a missing p-value as "not available" with its note). A NaN is never passed off as a value:
+ * a missing p-value as "not available" with its note; a p-value that is only a bound keeps its
+ * number, with a "p-value reads" row saying "< 0.01"). A NaN is never passed off as a value:
  * it means a fault upstream and is refused.
  */
+import { pValueBoundText } from '../../addin/p-value-bound';
 import { DETERMINISTIC_LABEL, rejects, type ResultDetail, type TestResult } from '../../addin/result';
 
 /** A cell value the table and the card can hold. */
@@ -75,6 +77,9 @@ export function resultRows(result: TestResult, extras: RowExtras = {}): ResultRo
   add('alternative', 'Alternative', result.alternative);
   add('statistic', `Statistic (${result.statisticName})`, result.statistic);
   add('pValue', 'p-value', result.pValue ?? 'not available');
+  // A bound read off a table's end: the p-value cell keeps the end number (Excel compares
+  // numbers), and this row says how to read it.
+  add('pValueReads', 'p-value reads', pValueBoundText(result.pValue, result.pValueBound));
   add('pValueNote', 'About the p-value', result.pValueNote);
   const levels = Object.keys(result.critical).sort((a, b) => parseFloat(a) - parseFloat(b));
   for (const level of levels) add(criticalKey(level), `Critical value at ${level}`, result.critical[level]);

@@ -8,6 +8,7 @@
  * Every answer is a matrix (a 1 x 1 one for a single number), so the functions that take
  * `show` are declared with a matrix result and can spill.
  */
+import { formatBoundedPValue, type PValueBound } from '../../addin/p-value-bound';
 import type { TestResult } from '../../addin/result';
 import { optionWord } from '../options/option-values';
 import { SHOW_WORDS, type Show } from '../options/option-words';
@@ -20,13 +21,20 @@ import { tableOf } from './result-table';
 export interface Answer {
   result: TestResult;
   extras?: RowExtras;
-  /** The headline number, what it is called, and why it is missing when it is. */
-  headline: { value: number | null; name: string; missing?: string };
+  /**
+   * The headline number, what it is called, why it is missing when it is, and its bound when
+   * it is a p-value read off a table's end (the cell keeps the number; the card's text says "< 0.01").
+   */
+  headline: { value: number | null; name: string; missing?: string; bound?: PValueBound };
 }
 
 /** An Answer whose headline is the test's p-value. */
 export function testAnswer(result: TestResult, extras?: RowExtras): Answer {
-  return { result, extras, headline: { value: result.pValue, name: 'The p-value', missing: result.pValueNote ? `The p-value is ${result.pValueNote}.` : undefined } };
+  return {
+    result,
+    extras,
+    headline: { value: result.pValue, name: 'The p-value', missing: result.pValueNote ? `The p-value is ${result.pValueNote}.` : undefined, bound: result.pValueBound },
+  };
 }
 
 function shortNumber(v: number): string {
@@ -45,7 +53,8 @@ export function showAnswer(answer: Answer, show: unknown, cards: () => boolean =
   const rows = resultRows(result, answer.extras);
   if (choice === 'card' && cards()) {
     const h = answer.headline.value;
-    const text = `${result.test}: ${h === null ? `${result.statisticName} ${shortNumber(result.statistic)}` : `${answer.headline.name.replace(/^The /, '')} ${shortNumber(h)}`}`;
+    const headline = h === null ? '' : formatBoundedPValue(h, answer.headline.bound, shortNumber);
+    const text = `${result.test}: ${h === null ? `${result.statisticName} ${shortNumber(result.statistic)}` : `${answer.headline.name.replace(/^The /, '')} ${headline}`}`;
     return [[resultCard(rows, text)]];
   }
   return tableOf(rows);

@@ -7,7 +7,8 @@ import { kpssTest } from '../../addin/unitroot/kpss';
  * tests/reference/make_fixtures.py. Statistic to 1e-8 relative, the automatic bandwidth exactly,
  * p-values to 1e-10 inside the table. The "legacy" bandwidth is the reference library's own
  * fixed-number rule; we pass the number it used. Outside the table the reference library clamps
- * to 0.01 / 0.10; we hold at the same ends and say so (pValueNote), checked here too.
+ * to 0.01 / 0.10; we hold at the same ends and say so (pValueNote, and pValueBound 'below' at
+ * 0.01, 'above' at 0.10), checked here too.
  */
 interface KpssCase {
   series: string;
@@ -35,6 +36,8 @@ describe('KPSS against the reference library (statsmodels kpss)', () => {
       expect(Math.abs(r.statistic - c.statistic) / c.statistic).toBeLessThan(1e-8);
       expect(r.pValue as number).toBeCloseTo(c.pValue, 10);
       expect(r.pValueNote !== undefined).toBe(c.pValueBeyondTable);
+      // statsmodels clamps to 0.01 when the truth is smaller and to 0.10 when it is larger
+      expect(r.pValueBound).toBe(c.pValueBeyondTable ? (c.pValue === 0.01 ? 'below' : 'above') : null);
       expect(r.critical).toEqual(c.critical);
     });
   }

@@ -51,13 +51,14 @@ export const johansenCommand: Command = {
         `r <= ${r}`,
         formatStatistic(result.eigenvalues[r]),
         formatStatistic(t.statistic),
-        formatPValue(t.pValue),
+        formatPValue(t.pValue, t.pValueBound),
         formatStatistic(t.critical['5%']),
         formatStatistic(m.statistic),
-        formatPValue(m.pValue),
+        formatPValue(m.pValue, m.pValueBound),
         formatStatistic(m.critical['5%']),
       ];
     });
+    const bounded = [...result.trace, ...result.maxEigen].some((t) => t.pValueBound);
     const relations = result.beta[0].map((_, j) => `  relation ${j + 1}: ` + labels.map((name, i) => `${formatStatistic(result.beta[i][j])} ${name}`).join(' + '));
     const terminal = [
       heading(`Johansen rank test of ${labels.join(', ')}`),
@@ -69,6 +70,7 @@ export const johansenCommand: Command = {
       labelled('Rank (max-eigenvalue)', String(result.rank.maxEigen)),
       '',
       ...plainTable(['H0', 'eigenvalue', 'trace', 'p', '5% crit', 'max-eig', 'p', '5% crit'], rows),
+      ...(bounded ? ['', bullet('A p-value shown as "< 0.001" or "> 0.999" is a bound: the statistic lies beyond the simulated table, which gives p-values from 0.001 to 0.999.')] : []),
       '',
       'Relations (each column of beta, first series = 1):',
       ...relations,
@@ -93,6 +95,10 @@ export const johansenCommand: Command = {
         maxEigenCritical: result.maxEigen.map((t) => critical(t.critical)),
         tracePValue: result.trace.map((t) => finiteOrNull(t.pValue)),
         maxEigenPValue: result.maxEigen.map((t) => finiteOrNull(t.pValue)),
+        tracePValueNote: result.trace.map((t) => t.pValueNote ?? null),
+        maxEigenPValueNote: result.maxEigen.map((t) => t.pValueNote ?? null),
+        tracePValueBound: result.trace.map((t) => t.pValueBound ?? null),
+        maxEigenPValueBound: result.maxEigen.map((t) => t.pValueBound ?? null),
         rank: result.rank.trace,
         rankByMaxEigen: result.rank.maxEigen,
         beta: result.beta,

@@ -49,7 +49,7 @@ function seriesPart(report: DiagnosticReport): string {
   });
   const step = (s: DiagnosticReport['series'][number], d: number, t: 'adf' | 'kpss'): string => {
     const found = s.steps.find((x) => x.differences === d);
-    return found ? formatPValue(found[t].pValue) : '-';
+    return found ? formatPValue(found[t].pValue, found[t].pValueBound) : '-';
   };
   const table = htmlTable(
     ['series', 'order', 'ADF p, levels', 'ADF p, changes', 'KPSS p, levels', 'KPSS p, changes', 'ADF and KPSS'],
@@ -72,7 +72,7 @@ function systemPart(report: DiagnosticReport): string {
     parts.push(htmlTable(['null hypothesis', 'trace', 'p-value', 'decision'], j.trace.map((t, r) => [
       r === 0 ? 'no long-run relation' : `at most ${r}`,
       t.statistic === null ? '-' : t.statistic.toFixed(2),
-      formatPValue(t.pValue),
+      formatPValue(t.pValue, t.pValueBound),
       t.rejects === null ? 'no decision' : t.rejects ? 'rejects' : 'does not reject',
     ]), [0, 3]), el('p', `${j.caseReason} ${j.lagsReason}`, 'note'));
   }

@@ -19,7 +19,7 @@ export function dataLine(report: DiagnosticReport): string {
 function seriesTable(series: readonly SeriesReport[]): string[] {
   const cell = (s: SeriesReport, d: number, test: 'adf' | 'kpss'): string => {
     const step = s.steps.find((x) => x.differences === d);
-    return step ? formatPValue(step[test].pValue) : '-';
+    return step ? formatPValue(step[test].pValue, step[test].pValueBound) : '-';
   };
   return textTable(
     ['series', 'order', 'ADF p, levels', 'ADF p, changes', 'KPSS p, levels', 'KPSS p, changes', 'ADF and KPSS'],

@@ -3,6 +3,8 @@
  * p-values, word wrapping, and label-value lines of a report.
  */
 
+import { formatBoundedPValue, type PValueBound } from '../../p-value-bound';
+
 /** Width of a terminal report line. */
 export const REPORT_WIDTH = 78;
 
@@ -17,11 +19,16 @@ export function formatStatistic(x: number | null | undefined): string {
   return x.toFixed(4);
 }
 
-/** A p-value to four decimals, "< 0.0001" below that, "not available" when missing. */
-export function formatPValue(p: number | null | undefined): string {
-  if (p === null || p === undefined || !Number.isFinite(p)) return 'not available';
-  if (p < 0.0001) return '< 0.0001';
-  return p.toFixed(4);
+/**
+ * A p-value to four decimals, "< 0.0001" below that, "not available" when missing; a bounded
+ * p-value (a table's end) as its bound, "< 0.01" or "> 0.10".
+ */
+export function formatPValue(p: number | null | undefined, bound?: PValueBound): string {
+  return formatBoundedPValue(p, bound, (x) => {
+    if (x === null || x === undefined || !Number.isFinite(x)) return 'not available';
+    if (x < 0.0001) return '< 0.0001';
+    return x.toFixed(4);
+  });
 }
 
 /**

@@ -7,7 +7,7 @@ import { formatPValue, formatStatistic } from './format';
 export function testCells(test: string, which: string, t: TestSummary): string[] {
   const statistic = t.statistic === null ? (t.statisticNote ?? 'not available') : formatStatistic(t.statistic);
   const decision = t.rejects === null ? 'no decision' : t.rejects ? 'rejects' : 'does not reject';
-  return [test, which, statistic, formatPValue(t.pValue), decision];
+  return [test, which, statistic, formatPValue(t.pValue, t.pValueBound), decision];
 }
 
 function directionRows(d: LeadLagDirectionSummary): string[][] {

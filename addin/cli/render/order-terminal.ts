@@ -21,10 +21,10 @@ function stepCells(step: OrderStep): string[] {
   return [
     DIFFERENCE_WORDS[step.differences] ?? `${step.differences} differences`,
     formatStatistic(step.adf.statistic),
-    formatPValue(step.adf.pValue),
+    formatPValue(step.adf.pValue, step.adf.pValueBound),
     step.adfRejects ? 'yes' : 'no',
     formatStatistic(step.kpss.statistic),
-    formatPValue(step.kpss.pValue),
+    formatPValue(step.kpss.pValue, step.kpss.pValueBound),
     step.kpssRejects ? 'yes' : 'no',
   ];
 }

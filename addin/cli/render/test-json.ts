@@ -1,6 +1,7 @@
 /**
  * The JSON object for any TestResult. Field names are a contract with scripts that read
- * them: statistic, pValue, lags, nobs, critical, bandwidth, test, nullHypothesis,
+ * them: statistic, pValue (with pValueNote and pValueBound, 'below' or 'above' when the p-value is
+ * only a bound read off a table's end), lags, nobs, critical, bandwidth, test, nullHypothesis,
  * deterministic, warnings, details (an object by key). Fields may be added, never renamed.
  * Numbers that are not finite become null, so the object always parses.
  */
@@ -25,6 +26,7 @@ export function testResultJson(result: TestResult): Record<string, unknown> {
     statistic: finiteOrNull(result.statistic),
     pValue: finiteOrNull(result.pValue),
     pValueNote: result.pValueNote ?? null,
+    pValueBound: result.pValueBound ?? null,
     critical,
     rejectTail: result.rejectTail,
     rejectsAt5: rejects(result, READING_LEVEL),

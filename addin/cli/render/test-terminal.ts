@@ -3,6 +3,7 @@
  * plain-words reading at the 5% level, then the settings and hypotheses, the test's own
  * details and its warnings. Generic over TestResult, so every test prints through it.
  */
+import { pValueBoundReason } from '../../p-value-bound';
 import { rejects, DETERMINISTIC_LABEL, type TestResult } from '../../result';
 import { bullet, formatDetail, formatPValue, formatStatistic, heading, labelled } from './format';
 
@@ -36,8 +37,9 @@ export function criticalLine(critical: Record<string, number>): string {
 export function renderTestTerminal(result: TestResult): string {
   const out: string[] = [heading(result.title), ''];
   out.push(labelled(`Statistic (${result.statisticName})`, formatStatistic(result.statistic)));
-  const pNote = result.pValueNote ? ` (${result.pValueNote})` : '';
-  out.push(labelled('p-value', `${formatPValue(result.pValue)}${pNote}`));
+  const bound = result.pValueBound ?? null;
+  const pNote = bound !== null ? ` (${pValueBoundReason(bound)})` : result.pValueNote ? ` (${result.pValueNote})` : '';
+  out.push(labelled('p-value', `${formatPValue(result.pValue, bound)}${pNote}`));
   out.push(labelled('Reading', readingAt5(result)));
   out.push('');
   out.push(labelled('Critical values', criticalLine(result.critical)));

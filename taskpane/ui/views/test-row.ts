@@ -23,7 +23,7 @@ export function testRow(label: string, test: TestSummary): TestRowView {
   return {
     label,
     statistic: showNumber(test.statistic),
-    pValue: showPValue(test.pValue),
+    pValue: showPValue(test.pValue, test.pValueBound),
     decision,
     note: notes.length > 0 ? notes.join('; ') : null,
   };
