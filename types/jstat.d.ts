@@ -13,6 +13,8 @@ declare module 'jstat' {
     studentt: Continuous1;
     centralF: Continuous2;
     chisquare: Continuous1;
+    /** Regularized incomplete beta I_x(a, b). */
+    ibeta(x: number, a: number, b: number): number;
     jStat?: JStatStatic;
   }
   const jStat: JStatStatic;

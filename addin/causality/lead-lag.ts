@@ -16,6 +16,17 @@ import { directionLeads, grangerTest, type CausalityDirection } from './granger-
 /** 'auto' picks the valid test; 'f', 'ty' and 'ecm' ask for the F test, Toda-Yamamoto or the error-correction form. */
 export type LeadLagMethod = 'auto' | 'f' | 'ty' | 'ecm';
 
+/**
+ * Which data the F test runs on: 'auto' lets the orders of integration decide (the changes when
+ * both series are I(1), else the values); 'levels' is Granger's F test on the values as given
+ * (the textbook test, whatever the series do); 'changes' the F test on their first differences.
+ * 'levels' and 'changes' ask for the F test, so they go with method 'auto' or 'f' only.
+ */
+export type LeadLagData = 'auto' | 'levels' | 'changes';
+
+/** The data words leadLag accepts. */
+export const LEAD_LAG_DATA: readonly LeadLagData[] = ['auto', 'levels', 'changes'];
+
 /** Options of leadLag. */
 export interface LeadLagOptions {
   /** Level for the verdict and the unit-root tests (default 0.05). */
@@ -24,6 +35,8 @@ export interface LeadLagOptions {
   lags?: LagChoice;
   maxLags?: number;
   method?: LeadLagMethod;
+  /** Which data the F test uses (default 'auto'); 'levels' or 'changes' ask for the F test on them. */
+  data?: LeadLagData;
   /** Orders of integration of [a, b]; found by ADF and KPSS when left out. */
   orders?: readonly [OrderEvidence, OrderEvidence];
   /** Whether a and b are cointegrated (e.g. from Engle-Granger or Johansen); unknown when left out. */
@@ -45,6 +58,12 @@ export interface LeadLagResult {
   names: [string, string];
   alpha: number;
   method: CausalityMethod;
+  /**
+   * The data the headline test ran on: 'levels' for the F test on the values and Toda-Yamamoto
+   * (a VAR in levels), 'changes' for the F test on changes and the error-correction form (changes
+   * on lagged changes and the lagged gap).
+   */
+  data: 'levels' | 'changes';
   why: string;
   alsoValid: CausalityMethod[];
   orders: { a: OrderEvidence; b: OrderEvidence; source: 'given' | 'tested' | 'not needed' };
@@ -81,8 +100,45 @@ function orderFacts(pair: readonly Float64Array[], names: readonly [string, stri
   return { a: orderEvidence(ra), b: orderEvidence(rb), source: 'tested', extraLags: Math.max(cautiousOrder(ra), cautiousOrder(rb)) };
 }
 
+/** The data a method runs on, for the record (see LeadLagResult.data). */
+export function dataOfMethod(method: CausalityMethod): 'levels' | 'changes' {
+  return method === 'f-levels' || method === 'toda-yamamoto' ? 'levels' : 'changes';
+}
+
+/** The F test on the data asked for, with the reason and any caution the orders call for. */
+function fTestOn(data: 'levels' | 'changes', facts: OrderFacts, cointegrated: boolean | undefined): CausalityChoice & { caution?: string } {
+  if (data === 'levels') {
+    const stationary = facts.a === 0 && facts.b === 0;
+    return {
+      method: 'f-levels',
+      why: 'The F test on the values as given was asked for.',
+      alsoValid: ['toda-yamamoto'],
+      caution: stationary
+        ? undefined
+        : 'The F test on the values is valid only for stationary series; these series are not both known to be stationary, so its p-values can be far too small. Toda-Yamamoto is valid here.',
+    };
+  }
+  const caution =
+    cointegrated === true
+      ? 'The pair is cointegrated: the F test on changes ignores the pull back to the equilibrium and can miss a long-run lead; the error-correction form covers it.'
+      : facts.a === 2 || facts.b === 2
+        ? 'At least one series still wanders after one difference (I(2)), so the F test on its changes is not valid; Toda-Yamamoto is.'
+        : facts.a === 0 && facts.b === 0
+          ? 'Both series are stationary already: their changes are differenced once too often, which can hide a lead that the F test on the values would find.'
+          : undefined;
+  return { method: 'f-differences', why: 'The F test on the changes was asked for.', alsoValid: ['toda-yamamoto'], caution };
+}
+
 /** The method actually run for a requested one, with the reason and any caution. */
-function requestedChoice(method: LeadLagMethod, facts: OrderFacts, cointegrated: boolean | undefined): CausalityChoice & { caution?: string } {
+function requestedChoice(method: LeadLagMethod, data: LeadLagData, facts: OrderFacts, cointegrated: boolean | undefined): CausalityChoice & { caution?: string } {
+  if (data !== 'auto') {
+    if (method === 'ty' || method === 'ecm') {
+      throw new MooringInputError(
+        `The data choice '${data}' is for the F test: ${method === 'ty' ? 'Toda-Yamamoto always runs on the values as given' : 'the error-correction form always uses the changes and the gap'}. Leave the data at auto, or ask for the F test.`,
+      );
+    }
+    return fTestOn(data, facts, cointegrated);
+  }
   if (method === 'auto') return chooseCausalityTest({ orderCause: facts.a, orderEffect: facts.b, cointegrated });
   if (method === 'ty') {
     return { method: 'toda-yamamoto', why: 'Toda-Yamamoto was asked for; it is valid whatever the orders of integration and the cointegration status.', alsoValid: [] };
@@ -138,10 +194,14 @@ export function leadLag(a: ArrayLike<number>, b: ArrayLike<number>, options: Lea
   if (!LEAD_LAG_METHODS.includes(method)) {
     throw new MooringInputError(`Unknown method '${String(method)}': use one of ${LEAD_LAG_METHODS.join(', ')}.`);
   }
+  const data = options.data ?? 'auto';
+  if (!LEAD_LAG_DATA.includes(data)) {
+    throw new MooringInputError(`Unknown data choice '${String(data)}': use one of ${LEAD_LAG_DATA.join(', ')}.`);
+  }
   if (names[0] === names[1]) throw new MooringInputError(`Both series are called '${names[0]}': give them different names.`);
   const pair = checkedBlock([a, b], names);
   const facts = orderFacts(pair, names, options, alpha, method !== 'ecm');
-  const choice = requestedChoice(method, facts, options.cointegrated);
+  const choice = requestedChoice(method, data, facts, options.cointegrated);
 
   const run = (m: CausalityMethod, forward: boolean): LeadLagDirection => {
     const [cause, effect] = forward ? [pair[0], pair[1]] : [pair[1], pair[0]];
@@ -177,6 +237,7 @@ export function leadLag(a: ArrayLike<number>, b: ArrayLike<number>, options: Lea
     names: [names[0], names[1]],
     alpha,
     method: choice.method,
+    data: dataOfMethod(choice.method),
     why: choice.why,
     alsoValid: choice.alsoValid,
     orders: { a: facts.a, b: facts.b, source: facts.source },

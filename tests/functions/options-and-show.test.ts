@@ -60,7 +60,7 @@ describe('wrong option words through every function list the allowed ones', () =
     ['SPREAD beta', () => moor.spread(Y, X, 'one'), /beta must be a number/],
     ['ZSCORE window', () => moor.zscore(Y, X, 1), /window must be a whole number of rows in the trailing window, 3 or more/],
     ['ECM lags', () => moor.ecm(Y, X, 'bic'), /lags must be a whole number of lagged changes \(0 or more\) or one of aic; got 'bic'/],
-    ['GRANGER method', () => moor.granger(X, Y, null, 'toda'), /method must be one of auto, f, ty, ecm; got 'toda'/],
+    ['GRANGER method', () => moor.granger(X, Y, null, 'toda'), /method must be one of auto, f, levels, changes, ty, ecm; got 'toda'/],
     ['GRANGER lags', () => moor.granger(X, Y, 0), /lags must be a whole number of lags \(1 or more\) or one of aic, bic; got the number 0/],
     ['VARLAGS criterion', () => moor.varlags(block([Y.map((r) => r[0]), X.map((r) => r[0])]), 'sic'), /criterion must be one of aic, bic, hq, fpe; got 'sic'/],
   ];

@@ -202,8 +202,8 @@ def check_johansen():
           f"(K = 0 pairs dy[t] with y[t]); levelLagOne uses y[t-1]; {len(doc['cases'])} cases")
 
 
-def check_granger():
-    doc, s = load("granger")
+def check_granger(name="granger"):
+    doc, s = load(name)
     c = doc["cases"][0]
     r = grangercausalitytests(np.column_stack([s[c["effect"]], s[c["cause"]]]), maxlag=4, verbose=False)
     same(f"granger {c['cause']} -> {c['effect']}: fresh call",
@@ -219,7 +219,11 @@ def check_granger():
             ssr_u = np.sum(ols(y, np.column_stack(own + other + [np.ones(T - L)]))[1] ** 2)
             f = (ssr_r - ssr_u) / L / (ssr_u / (T - L - 2 * L - 1))
             assert abs(f - x["fStatistic"]) < 1e-8 * max(1, f), (c["cause"], L)
-    print("ok  granger: each lag order on its own sample of T - p rows, re-derived")
+    print(f"ok  {name}: each lag order on its own sample of T - p rows, re-derived")
+
+
+def check_granger_levels():
+    check_granger("granger-levels")
 
 
 def check_var_select():
@@ -293,7 +297,7 @@ def check_zivot_andrews():
 
 
 if __name__ == "__main__":
-    for check in (check_adf, check_kpss, check_ols, check_coint, check_johansen, check_granger,
+    for check in (check_adf, check_kpss, check_ols, check_coint, check_johansen, check_granger, check_granger_levels,
                   check_var_select, check_var_wald, check_zivot_andrews):
         check()
     print("all fixture checks passed")

@@ -6,12 +6,12 @@ import { type FixtureFile, type FixtureName, type Fixtures, fixtureSeries, loadF
 // statsmodels 0.13.5 that the engine's tests rely on.
 
 const NAMES: FixtureName[] = [
-  'adf', 'kpss', 'ols-longley', 'coint', 'johansen', 'granger', 'var-select', 'var-wald', 'zivot-andrews',
+  'adf', 'kpss', 'ols-longley', 'coint', 'johansen', 'granger', 'granger-levels', 'var-select', 'var-wald', 'zivot-andrews',
 ];
 
 // Case counts follow from the README's grid (e.g. adf: 21 series x 3 terms x 9 lag settings).
 const CASE_COUNTS: Record<FixtureName, number> = {
-  adf: 567, kpss: 210, 'ols-longley': 1, coint: 84, johansen: 30, granger: 4, 'var-select': 3,
+  adf: 567, kpss: 210, 'ols-longley': 1, coint: 84, johansen: 30, granger: 4, 'granger-levels': 2, 'var-select': 3,
   'var-wald': 12, 'zivot-andrews': 27,
 };
 
@@ -21,7 +21,7 @@ const LENGTHS: Record<string, number> = {
   trend_stationary_300: 300, i2_200: 200, pair_x: 300, pair_y: 300, triple_y: 300, triple_x1: 300,
   triple_x2: 300, indep_a: 300, indep_b: 300, sys3_y1: 300, sys4_y4: 300, var2_x: 400, var2_y: 400,
   za_rw_250: 250, za_level_break_250: 250, za_slope_break_250: 250, macro_log_realgdp: 203,
-  macro_infl: 202, macro_realint: 202, macro_tbilrate: 203, macro_dlog_realgdp: 202, dk_lrm: 55,
+  macro_infl: 202, macro_realint: 202, macro_tbilrate: 203, macro_realgdp: 203, macro_realcons: 203, macro_dlog_realgdp: 202, dk_lrm: 55,
   dk_ide: 55, longley_TOTEMP: 16,
 };
 
@@ -94,13 +94,14 @@ describe('reference fixtures (statsmodels 0.13.5)', () => {
     }
   });
 
-  it('granger: lag order p uses T - p rows and F has (p, T - 3p - 1) degrees of freedom', () => {
-    const file = load('granger');
-    for (const c of file.cases) {
-      const T = fixtureSeries(file, c.effect).length;
-      for (const l of c.lags) {
-        expect(l.nobs).toBe(T - l.lag);
-        expect([l.dfNum, l.dfDenom]).toEqual([l.lag, T - 3 * l.lag - 1]);
+  it('granger and granger-levels: lag order p uses T - p rows and F has (p, T - 3p - 1) degrees of freedom', () => {
+    for (const file of [load('granger'), load('granger-levels')]) {
+      for (const c of file.cases) {
+        const T = fixtureSeries(file, c.effect).length;
+        for (const l of c.lags) {
+          expect(l.nobs).toBe(T - l.lag);
+          expect([l.dfNum, l.dfDenom]).toEqual([l.lag, T - 3 * l.lag - 1]);
+        }
       }
     }
   });

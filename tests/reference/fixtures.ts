@@ -179,6 +179,14 @@ export interface GrangerCase {
   lags: GrangerLag[];
 }
 
+/** A Granger case on series read from a CSV file of tests/reference/data, with the columns they came from. */
+export interface GrangerLevelsCase extends GrangerCase {
+  /** The file, from the repository root: "tests/reference/data/macrodata.csv". */
+  file: string;
+  /** The file's columns of the cause and the effect, as given (no logs, no differences). */
+  columns: { cause: string; effect: string };
+}
+
 export interface VarSelectCase {
   series: string[];
   maxLags: number;
@@ -238,6 +246,7 @@ export interface Fixtures {
   coint: FixtureFile<CointCase>;
   johansen: FixtureFile<JohansenCase>;
   granger: FixtureFile<GrangerCase>;
+  'granger-levels': FixtureFile<GrangerLevelsCase>;
   'var-select': FixtureFile<VarSelectCase>;
   'var-wald': FixtureFile<VarWaldCase>;
   'zivot-andrews': FixtureFile<ZivotAndrewsCase>;

@@ -55,6 +55,7 @@ def main():
     emit("coint", cointegration.coint_cases(series), ["y", "x"], extra=sim_seeds)
     emit("johansen", cointegration.johansen_cases(series), ["series"], extra=sim_seeds)
     emit("granger", causality.granger_cases(series), ["effect", "cause"], extra=sim_seeds)
+    emit("granger-levels", causality.granger_level_cases(series), ["effect", "cause"])
     emit("var-select", causality.var_select_cases(series), ["series"], extra=sim_seeds)
     emit("var-wald", causality.var_wald_cases(series), ["series"], extra=sim_seeds)
     emit("zivot-andrews", unit_root.zivot_andrews_cases(series, ZA_SERIES), ["series"],

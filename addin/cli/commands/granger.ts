@@ -1,10 +1,11 @@
 /**
  * `mooring granger`: does --cause lead --effect? The lead-lag test valid for the pair (leadLag):
  * by default the orders of integration (ADF and KPSS) and --cointegrated choose between the F test
- * on values or changes, Toda-Yamamoto and the error-correction form; --method asks for one.
+ * on values or changes, Toda-Yamamoto and the error-correction form; --method asks for one, and
+ * --data levels|changes asks for the F test on the values as given or on their changes.
  * The headline is the --cause -> --effect direction; the reverse direction is summarised too.
  */
-import { leadLag, type LeadLagMethod } from '../../causality/lead-lag';
+import { LEAD_LAG_DATA, leadLag, type LeadLagMethod } from '../../causality/lead-lag';
 import type { LeadLagDirection } from '../../causality/lead-lag';
 import type { TestResult } from '../../result';
 import { MooringInputError } from '../../errors';
@@ -60,6 +61,9 @@ export const grangerCommand: Command = {
       'the error-correction form for a cointegrated pair, and Toda-Yamamoto when the orders differ or are uncertain.',
     '--method f, ty or ecm asks for the F test, Toda-Yamamoto or the error-correction form instead. The reverse direction is run too and summarised. ' +
       'A lead is evidence about past data, not a forecast or trading advice.',
+    '--data says which data the F test uses: auto (the default) runs it on the changes when both series wander (I(1)) and on the values otherwise; ' +
+      'levels is the plain F test on the values as given, to reproduce a textbook or a colleague\'s number (on wandering prices its p-values ' +
+      'can be far too small, and the output says so); changes forces first differences. The JSON field data says which were used.',
   ],
   usage: 'mooring granger <file.csv> --cause NAME --effect NAME [options]',
   options: [
@@ -68,10 +72,15 @@ export const grangerCommand: Command = {
     { name: 'lags', value: 'N|aic|bic', help: 'lags of both series, or the VAR criterion that picks them (default aic; at least 1)' },
     { name: 'max-lags', value: 'N', help: 'largest lag the criterion may pick (default 12 (n/100)^(1/4), capped by the sample)' },
     { name: 'method', value: 'auto|f|ty|ecm', help: 'which test: auto (the valid one, default), f, ty (Toda-Yamamoto) or ecm (error correction)' },
+    { name: 'data', value: 'auto|levels|changes', help: 'data of the F test: auto (changes when both series wander, default), levels (the values as given) or changes' },
     { name: 'cointegrated', value: 'yes|no', help: 'whether the pair is cointegrated (e.g. from mooring eg); unknown when left out' },
     { name: 'alpha', value: 'LEVEL', help: 'level of the verdict and the unit-root tests, such as 0.05 (the default) or 1%' },
   ],
-  examples: ['mooring granger prices.csv --cause Gasoil --effect Diesel --log', 'mooring granger prices.csv --cause Gasoil --effect Diesel --method ty --lags 2 --json'],
+  examples: [
+    'mooring granger prices.csv --cause Gasoil --effect Diesel --log',
+    'mooring granger prices.csv --cause Gasoil --effect Diesel --method ty --lags 2 --json',
+    'mooring granger prices.csv --cause Gasoil --effect Diesel --method f --data levels --lags 4',
+  ],
   run(context) {
     if (context.common.series !== undefined) {
       throw new MooringInputError('granger works on a pair: name its series with --cause and --effect instead of --series.');
@@ -90,6 +99,7 @@ export const grangerCommand: Command = {
       throw new MooringInputError(`--max-lags applies only with --lags aic or bic; with --lags ${lags} leave it out.`);
     }
     const method: LeadLagMethod = choiceValue('method', context.args.values.get('method'), METHOD_WORDS) ?? 'auto';
+    const data = choiceValue('data', context.args.values.get('data'), LEAD_LAG_DATA) ?? 'auto';
     const coint = choiceValue('cointegrated', context.args.values.get('cointegrated'), YES_NO);
     const alpha = levelValue('alpha', context.args.values.get('alpha')) ?? 0.05;
     const [x, y] = blockFromContext(context, [cause, effect]);
@@ -98,6 +108,7 @@ export const grangerCommand: Command = {
       lags,
       maxLags,
       method,
+      data,
       cointegrated: coint === undefined ? undefined : coint === 'yes',
     }, [x.label, y.label]);
     const main = result.aLeadsB;
@@ -121,6 +132,8 @@ export const grangerCommand: Command = {
         ...testResultJson(main.test),
         ...directionJson(main),
         method: result.method,
+        data: result.data,
+        dataRequested: data,
         why: result.why,
         alsoValid: result.alsoValid,
         orders: result.orders,

@@ -10,6 +10,14 @@ GRANGER_PAIRS = [
     ("macro_dlog_realgdp", "macro_dlog_realcons"), ("macro_dlog_realcons", "macro_dlog_realgdp"),
 ]
 
+# (cause, effect) pairs of wandering levels, as given in data/macrodata.csv (no logs, no
+# differences): the plain F test on the values, whatever the series do. Each pair names the
+# file's columns too, so the command line can be run on the file itself.
+GRANGER_LEVEL_PAIRS = [
+    ("macro_realgdp", "macro_realcons"), ("macro_realcons", "macro_realgdp"),
+]
+MACRO_COLUMNS = {"macro_realgdp": "realgdp", "macro_realcons": "realcons"}
+
 VAR_SELECT_SYSTEMS = [
     (["var2_x", "var2_y"], 8),
     (["macro_dlog_realgdp", "macro_dlog_realcons"], 8),
@@ -24,9 +32,9 @@ def _col(series, i):
     return np.asarray(series[i], dtype=float)
 
 
-def granger_cases(series):
+def granger_cases(series, pairs=GRANGER_PAIRS):
     cases = []
-    for cause, effect in GRANGER_PAIRS:
+    for cause, effect in pairs:
         data = np.column_stack([_col(series, effect), _col(series, cause)])
         res = grangercausalitytests(data, maxlag=4, verbose=False)
         per_lag = []
@@ -44,6 +52,15 @@ def granger_cases(series):
                 "ssrRestricted": restricted.ssr, "ssrUnrestricted": unrestricted.ssr,
             })
         cases.append({"cause": cause, "effect": effect, "lags": per_lag})
+    return cases
+
+
+def granger_level_cases(series):
+    """grangercausalitytests on the macro levels as given, with the CSV columns they came from."""
+    cases = granger_cases(series, GRANGER_LEVEL_PAIRS)
+    for c in cases:
+        c["file"] = "tests/reference/data/macrodata.csv"
+        c["columns"] = {"cause": MACRO_COLUMNS[c["cause"]], "effect": MACRO_COLUMNS[c["effect"]]}
     return cases
 
 

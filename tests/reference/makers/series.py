@@ -138,6 +138,9 @@ def dataset_series():
     s["macro_tbilrate"] = col["tbilrate"]
     s["macro_dlog_realgdp"] = np.diff(np.log(col["realgdp"]))
     s["macro_dlog_realcons"] = np.diff(np.log(col["realcons"]))
+    # The levels as the file gives them, for the plain F test on the values as given.
+    s["macro_realgdp"] = col["realgdp"]
+    s["macro_realcons"] = col["realcons"]
     # The Danish file starts with a UTF-8 byte-order mark; utf-8-sig strips it.
     danish = _read_csv("danish-money-demand.csv", "utf-8-sig")
     assert list(danish[0].keys())[0] == "period", "BOM not stripped from the Danish header"
