@@ -79,7 +79,7 @@ export function spreadSection(
   const minus = (v: number): string => `${v < 0 ? '+' : '-'} ${formatCoefficient(Math.abs(v))}`;
   const rollingText = latestRollingZ === null ? '' : `; against the last ${window} ${context.period}s it is ${where(latestRollingZ)} their mean`;
   return {
-      definition: `${ln(names.y)} ${minus(line.intercept)} ${minus(line.beta)} x ${ln(names.x)}, on the least-squares line, whose residual the Engle-Granger test checks (not the dynamic-OLS estimate of the relation)`,
+      definition: `${ln(names.y)} ${minus(line.intercept)} ${minus(line.beta)} x ${ln(names.x)}, on the least-squares line with a constant, the Engle-Granger line (not the dynamic-OLS estimate of the relation)`,
       line: { beta: line.beta, intercept: line.intercept, method: 'least-squares' },
       mean: z.mean,
       standardDeviation: z.standardDeviation,

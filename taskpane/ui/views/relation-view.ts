@@ -104,7 +104,7 @@ export function relationStepView(report: DiagnosticReport, pair: PairReport): Re
     relationText: r?.text ?? null,
     hedgeText: r ? `${r.hedgeText.charAt(0).toUpperCase()}${r.hedgeText.slice(1)}.` : null,
     spreadLineNote: s
-      ? `The spread, its z-scores and its half-life are built on the plain least-squares line (slope ${showNumber(s.line.beta, 4)}), whose residual the tie tests checked; ` +
+      ? `The spread, its z-scores and its half-life are built on the plain least-squares line with a constant (slope ${showNumber(s.line.beta, 4)}); ` +
         'the line above is the dynamic least-squares estimate, whose standard error is sound.'
       : null,
     normalisationReason: r?.normalisationReason ?? null,
