@@ -54,7 +54,8 @@ export async function openPreview(): Promise<PreviewSession> {
   const server = (await startPreviewServer({ port: 0 })) as { url: string; close(): Promise<void> };
   const browser = await launchBrowser(found).catch(async (e: Error) => {
     await server.close();
-    throw new Error(`The ${found.source} browser ${found.executablePath} did not start: ${e.message}`);
+    const hint = found.source === 'packaged' ? ' (the packaged Chromium needs the system library libnss3: on Debian or Ubuntu, apt-get install libnss3)' : '';
+    throw new Error(`The ${found.source} browser ${found.executablePath} did not start${hint}: ${e.message}`);
   });
   console.info(`End-to-end browser: ${found.source} ${found.executablePath} (version ${browser.version()})`);
   const page = await browser.newPage({ viewport: { width: 340, height: 900 } });

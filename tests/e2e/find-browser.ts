@@ -27,8 +27,12 @@ export interface FoundBrowser {
 /** Where a machine keeps the inputs that decide the search. */
 export interface SearchPlace {
   platform: NodeJS.Platform;
+  arch: string;
   env: NodeJS.ProcessEnv;
 }
+
+/** This machine. */
+export const THIS_MACHINE: SearchPlace = { platform: process.platform, arch: process.arch, env: process.env };
 
 /** The package whose tarball carries a Chromium binary. */
 export const PACKAGED_BROWSER = '@sparticuz/chromium';
@@ -118,8 +122,8 @@ function untar(archive: Buffer, into: string): void {
  * the packaged Open Sans everywhere. Null when the package is absent or the platform is not
  * the one its binary is built for.
  */
-export async function unpackPackagedBrowser(): Promise<FoundBrowser | null> {
-  if (process.platform !== 'linux' || process.arch !== 'x64') return null;
+export async function unpackPackagedBrowser(place: SearchPlace): Promise<FoundBrowser | null> {
+  if (place.platform !== 'linux' || place.arch !== 'x64') return null;
   const files = packagedBrowserFiles();
   if (!files) return null;
   const dir = join(CACHE, `chromium-${files.version}`);
@@ -146,7 +150,7 @@ export async function unpackPackagedBrowser(): Promise<FoundBrowser | null> {
     writeFileSync(`${fontsConf}.${process.pid}.partial`, conf);
     renameSync(`${fontsConf}.${process.pid}.partial`, fontsConf);
   }
-  return { executablePath, source: 'packaged', env: { FONTCONFIG_FILE: fontsConf, ...plainLocale(process.env) } };
+  return { executablePath, source: 'packaged', env: { FONTCONFIG_FILE: fontsConf, ...plainLocale(place.env) } };
 }
 
 /**
@@ -161,15 +165,15 @@ export function plainLocale(env: NodeJS.ProcessEnv): Record<string, string> {
 }
 
 /** The three steps in order; throws, naming what was tried, when no browser is found. */
-export async function findBrowser(place: SearchPlace = { platform: process.platform, env: process.env }): Promise<FoundBrowser> {
+export async function findBrowser(place: SearchPlace = THIS_MACHINE): Promise<FoundBrowser> {
   const installed = findInstalledBrowser(place);
   if (installed) return installed;
-  const packaged = await unpackPackagedBrowser();
+  const packaged = await unpackPackagedBrowser(place);
   if (packaged) return packaged;
   const where = place.env.MOORING_BROWSER?.trim() === 'packaged' ? 'MOORING_BROWSER=packaged asked for the packaged one only' : `none of ${installedCandidates(place).length} usual install paths holds Chromium, Chrome or Edge`;
   throw new Error(
     `No browser for the end-to-end tests: ${where}, and ${PACKAGED_BROWSER} ` +
-      (process.platform === 'linux' && process.arch === 'x64' ? 'is not installed (run npm ci).' : `carries a Linux x64 build only (this is ${process.platform} ${process.arch}).`) +
+      (place.platform === 'linux' && place.arch === 'x64' ? 'is not installed (run npm ci).' : `carries a Linux x64 build only (this is ${place.platform} ${place.arch}).`) +
       ' Install Chrome, Edge or Chromium, or set MOORING_BROWSER to a browser executable.',
   );
 }
