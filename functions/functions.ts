@@ -1,28 +1,11 @@
-// The Excel-facing surface of Mooring: every custom function the add-in registers.
-//
-// How the metadata is made. At build time custom-functions-metadata-plugin reads the
-// JSDoc of the files listed in FUNCTION_SOURCES (webpack.config.js; today only this
-// file) and writes functions.json from it: each `@customfunction` becomes one entry,
-// its id and name from the tag, its parameter and result types from the TypeScript
-// signature. The plugin then appends `CustomFunctions.associate("ID", name)` for each
-// entry to the end of the same file, naming the function as declared here, and the
-// build wraps those calls in a guard so the bundle also loads where Office is absent.
-//
-// So the JSDoc and the declaration must sit in a scanned file, but the work need not:
-// each function here is a thin, documented wrapper whose body calls into its own
-// module (./version.ts for MOOR.VERSION; the engine in addin/ for the analyses).
-// To add a function: write its implementation in a module, then declare a wrapper
-// below with `@customfunction ID`, a description, `@param` lines, `@returns` and
-// `@helpurl https://localhost:3000/docs/functions.md#<anchor>`. Only a new file
-// holding `@customfunction` tags needs adding to FUNCTION_SOURCES.
+// Every custom function the add-in registers. The build's metadata plugin turns each
+// `@customfunction` JSDoc below into an entry of functions.json (types from the signature) and
+// appends the associate calls; each wrapper is thin, its work in ./analyses or ./version.ts.
 
-// Types for CustomFunctions.Error, .Invocation and friends (tsconfig lists only node and office-js).
 /// <reference types="custom-functions-runtime" />
 
-// Every function below takes its ranges as `any[][]` and its options as `any`, so blanks,
-// text and error values reach the shared cleaner and option parser untouched (see
-// cells/range-input.ts), and each body runs inside answer(), which maps every refusal to a
-// cell error once (cells/answer.ts). Optional arguments arrive as null when left out.
+// Ranges are `any[][]` and options `any`, so blanks, text and errors reach the shared cleaner
+// untouched (cells/range-input.ts); answer() maps every refusal to a cell error once.
 
 import { answer } from './cells/answer';
 import { egCell, poCell } from './analyses/cointegration-cells';
@@ -78,8 +61,8 @@ export function kpss(series: any[][], deterministic?: any, bandwidth?: any, show
 
 /**
  * Phillips-Perron test: a unit-root test that corrects for autocorrelation with a long-run variance instead of lags.
- * @customfunction PPTEST
- * @helpurl https://localhost:3000/docs/functions.md#pptest
+ * @customfunction PHILLIPSPERRON
+ * @helpurl https://localhost:3000/docs/functions.md#phillipsperron
  * @param series Prices: one column or one row. Blank cells at the ends are skipped.
  * @param [deterministic] Terms in the test regression: none, const or trend. Default const.
  * @param [bandwidth] Kernel lags of the long-run variance: a whole number, or auto (Newey-West). Default auto.
@@ -87,7 +70,7 @@ export function kpss(series: any[][], deterministic?: any, bandwidth?: any, show
  * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The p-value, the statistic, a labelled table or a card.
  */
-export function pptest(series: any[][], deterministic?: any, bandwidth?: any, show?: any, prep?: any): any[][] {
+export function phillipsperron(series: any[][], deterministic?: any, bandwidth?: any, show?: any, prep?: any): any[][] {
   return answer(() => ppCell(series, deterministic, bandwidth, show, prep));
 }
 
@@ -95,20 +78,20 @@ export function pptest(series: any[][], deterministic?: any, bandwidth?: any, sh
  * Order of integration: 0 if the series is stationary, 1 if its changes are, 2 if its changes of changes are.
  * @customfunction ORDER
  * @helpurl https://localhost:3000/docs/functions.md#order
- * @param series Prices: one column or one row. Blank cells at the ends are skipped.
+ * @param series Prices: one column or one row; or several columns, one series each, for one order per column on the rows they share.
  * @param [alpha] Significance level of each step, such as 0.05 or 5%. Default 0.05.
  * @param [deterministic] Terms in the level tests: none, const or trend. Default const.
  * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
- * @returns 0, 1 or 2, or the text "above 2".
+ * @returns 0, 1 or 2, or the text "above 2"; a row of them for several columns.
  */
-export function order(series: any[][], alpha?: any, deterministic?: any, prep?: any): any {
+export function order(series: any[][], alpha?: any, deterministic?: any, prep?: any): any[][] {
   return answer(() => orderCell(series, alpha, deterministic, prep));
 }
 
 /**
  * Engle-Granger test: is y tied to x in the long run (cointegrated)? A small p-value says the gap between them reverts.
- * @customfunction EGTEST
- * @helpurl https://localhost:3000/docs/functions.md#egtest
+ * @customfunction ENGLEGRANGER
+ * @helpurl https://localhost:3000/docs/functions.md#englegranger
  * @param y Prices of the series on the left of the relation: one column or one row.
  * @param x Prices of the other series: one or more columns (rows for a row y), on the same rows as y.
  * @param [deterministic] Terms in the relation: none, const or trend. Default const.
@@ -117,14 +100,14 @@ export function order(series: any[][], alpha?: any, deterministic?: any, prep?: 
  * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The p-value, the statistic, a labelled table or a card.
  */
-export function egtest(y: any[][], x: any[][], deterministic?: any, lags?: any, show?: any, prep?: any): any[][] {
+export function englegranger(y: any[][], x: any[][], deterministic?: any, lags?: any, show?: any, prep?: any): any[][] {
   return answer(() => egCell(y, x, deterministic, lags, show, prep));
 }
 
 /**
  * Phillips-Ouliaris test: cointegration of y with x, correcting the residual test with a long-run variance.
- * @customfunction POTEST
- * @helpurl https://localhost:3000/docs/functions.md#potest
+ * @customfunction PHILLIPSOULIARIS
+ * @helpurl https://localhost:3000/docs/functions.md#phillipsouliaris
  * @param y Prices of the series on the left of the relation: one column or one row.
  * @param x Prices of the other series: one or more columns (rows for a row y), on the same rows as y.
  * @param [deterministic] Terms in the relation: none, const or trend. Default const.
@@ -133,7 +116,7 @@ export function egtest(y: any[][], x: any[][], deterministic?: any, lags?: any, 
  * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The p-value, the statistic, a labelled table or a card.
  */
-export function potest(y: any[][], x: any[][], deterministic?: any, bandwidth?: any, show?: any, prep?: any): any[][] {
+export function phillipsouliaris(y: any[][], x: any[][], deterministic?: any, bandwidth?: any, show?: any, prep?: any): any[][] {
   return answer(() => poCell(y, x, deterministic, bandwidth, show, prep));
 }
 
@@ -174,9 +157,9 @@ export function rank(block: any[][], lags?: any, deterministic?: any, alpha?: an
  * @param y Prices of the series you hold: one column or one row.
  * @param x Prices of the hedge: one column (or row), on the same rows as y.
  * @param [method] ols (y on x), reverse-ols (x on y, turned round), tls (orthogonal) or dols (dynamic OLS). Default ols.
- * @param [show] slope (the line's slope; with logs an elasticity) or units (units of x to hold per unit of y at the latest prices). Default slope.
+ * @param [show] slope (an elasticity with logs) or units (units of x to hold per unit of y at latest prices). Default slope.
  * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
- * @returns The hedge ratio beta.
+ * @returns The hedge ratio beta (with show units, the units of x to hold).
  */
 export function hedge(y: any[][], x: any[][], method?: any, show?: any, prep?: any): number {
   return answer(() => hedgeCell(y, x, method, show, prep));
@@ -245,7 +228,7 @@ export function ecm(y: any[][], x: any[][], lags?: any, show?: any, prep?: any):
  * @param cause The series that may lead: one column or one row.
  * @param effect The series that may follow, on the same rows as cause.
  * @param [lags] Lags of both series: a whole number of 1 or more, or aic or bic to choose. Default aic.
- * @param [method] auto (the test valid for the data), f (F test on the data the orders call for), levels (F test on the values as given), changes (F test on their changes), ty (Toda-Yamamoto) or ecm (error correction). Default auto.
+ * @param [method] auto (the valid test), f, levels (F on the values as given), changes (F on their changes), ty or ecm. Default auto.
  * @param [show] What to return: headline (the p-value), stat, all (a labelled table) or card. Default headline.
  * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns The p-value, the statistic, a labelled table or a card.
@@ -269,16 +252,17 @@ export function varlags(block: any[][], criterion?: any, maxlags?: any, prep?: a
 }
 
 /**
- * Pair screen: each series' order of integration first, then every pair of series that wander with the same order tested both ways round, p-values adjusted for the number tested, ranked; the other pairs are listed after the ranking with the reason.
+ * Pair screen: every pair of series wandering with the same order, tested both ways, p-values adjusted for the number tested, ranked.
  * @customfunction SCREEN
  * @helpurl https://localhost:3000/docs/functions.md#screen
- * @param block Prices of 2 or more series, one column each, on the same rows. A first row of text names the series: select the header row too, or use Table1[#All] for a table; without it they are series 1, 2, ... from the left.
+ * @param block Prices, one column per series. A first row of text names them: select the header too, or use Table1[#All].
  * @param [alpha] Level for the adjusted p-values and the chance count, such as 0.05 or 5%. Default 0.05.
  * @param [show] list (ranked pairs), matrix (the p-values, y by row, x by column) or adjusted (the same, adjusted). Default list.
- * @returns A table with a header, ending with how many pairs would pass by chance alone.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
+ * @returns The ranked pairs (then those set aside, with why), ending with how many would pass by chance alone.
  */
-export function screen(block: any[][], alpha?: any, show?: any): any[][] {
-  return answer(() => screenCell(block, alpha, show));
+export function screen(block: any[][], alpha?: any, show?: any, prep?: any): any[][] {
+  return answer(() => screenCell(block, alpha, show, prep));
 }
 
 /**

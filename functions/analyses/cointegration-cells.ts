@@ -1,5 +1,5 @@
 /**
- * MOOR.EGTEST and MOOR.POTEST: y and one or more x series from ranges lined up by row, the
+ * MOOR.ENGLEGRANGER and MOOR.PHILLIPSOULIARIS: y and one or more x series from ranges lined up by row, the
  * residual-based cointegration test, and `show`.
  */
 import { engleGranger } from '../../addin/cointegration/engle-granger';

@@ -2,7 +2,7 @@
  * MOOR.ROLLING: how a pair's long-run relation moves through time. Over rolling windows of
  * `window` rows, ending on the last row and every `step` rows before it, the engine refits the
  * Engle-Granger test, the hedge ratio and the half-life of each window's spread; each window's
- * numbers are those of MOOR.EGTEST, MOOR.HEDGE and MOOR.HALFLIFE on that window's rows.
+ * numbers are those of MOOR.ENGLEGRANGER, MOOR.HEDGE and MOOR.HALFLIFE on that window's rows.
  */
 import { MooringInputError } from '../../addin/errors';
 import { rollingRelation } from '../../addin/stability/rolling-relation';

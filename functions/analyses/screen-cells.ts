@@ -16,7 +16,7 @@
 import { screenPairs } from '../../addin/screen/screen-pairs';
 import { cellKind } from '../../addin/series/cell-kinds';
 import { readBlock } from '../cells/range-input';
-import { levelValue, optionWord } from '../options/option-values';
+import { levelValue, optionWord, prepValue } from '../options/option-values';
 import { SCREEN_SHOW_WORDS } from '../options/option-words';
 import { screenGrid, screenList } from '../render/screen-table';
 
@@ -30,11 +30,11 @@ export function blockHeader(block: unknown): { names: (string | null)[] | null; 
   return { names, body: [first.map(() => null), ...block.slice(1)] };
 }
 
-export function screenCell(block: unknown, alpha: unknown, show: unknown): (number | string)[][] {
+export function screenCell(block: unknown, alpha: unknown, show: unknown, prep?: unknown): (number | string)[][] {
   const level = levelValue('alpha', alpha, 0.05);
   const choice = optionWord('show', show, SCREEN_SHOW_WORDS, 'list');
   const { names, body } = blockHeader(block);
-  const series = readBlock(body);
+  const series = readBlock(body, 'the block', prepValue(prep));
   const result = screenPairs(series.map((s, j) => ({ name: names?.[j] ?? s.name, values: s.values })), { alpha: level });
   return choice === 'list' ? screenList(result) : screenGrid(result, choice === 'adjusted');
 }

@@ -40,7 +40,7 @@ export function ppCell(series: unknown, deterministic: unknown, bandwidth: unkno
 }
 
 /** The order of integration: 0, 1 or 2, or the text "above 2". */
-export function orderCell(series: unknown, alpha: unknown, deterministic: unknown, prep?: unknown): number | string | (number | string)[][] {
+export function orderCell(series: unknown, alpha: unknown, deterministic: unknown, prep?: unknown): (number | string)[][] {
   const level = levelValue('alpha', alpha, 0.05);
   const det = optionWord('deterministic', deterministic, DETERMINISTIC_WORDS, 'const');
   const how = prepValue(prep);
@@ -51,5 +51,5 @@ export function orderCell(series: unknown, alpha: unknown, deterministic: unknow
   }
   const input = readSeries(series, NAME, how);
   const result = integrationOrder(input.series.values, { alpha: level, deterministic: det }, NAME);
-  return result.order;
+  return [[result.order]];
 }

@@ -76,14 +76,14 @@ export function tieStage(g: BlockGrid, c: StageContext): void {
   const { alpha, deterministic, lagRule } = c.report.settings;
   const { a, b } = c.pair;
   section(g, 'Are they tied together in the long run?');
-  const eg = (y: string, x: string) => `=MOOR.EGTEST(${c.refs.column(y)},${c.refs.column(x)},${textLiteral(deterministic)},${textLiteral(lagRule)},"headline",${c.prep})`;
+  const eg = (y: string, x: string) => `=MOOR.ENGLEGRANGER(${c.refs.column(y)},${c.refs.column(x)},${textLiteral(deterministic)},${textLiteral(lagRule)},"headline",${c.prep})`;
   const tie = (cell: string) => pValueReading(cell, alpha, 'tied', 'no evidence of a tie');
   numberRow(g, `Tied? Engle-Granger, ${a} on ${b} (p-value)`, { formula: eg(a, b) }, NUMBER_FORMAT.pValue, tie,
     `the gap left by the least-squares line of ${a} on ${b} is tested for a pull back; lags by ${lagRule.toUpperCase()}`);
   numberRow(g, `Tied? Engle-Granger, ${b} on ${a} (p-value)`, { formula: eg(b, a) }, NUMBER_FORMAT.pValue, tie,
     'the same test with the roles swapped; the two can disagree in short samples');
   numberRow(g, `Tied? Phillips-Ouliaris, ${c.y} on ${c.x} (p-value)`,
-    { formula: `=MOOR.POTEST(${c.refs.column(c.y)},${c.refs.column(c.x)},${textLiteral(deterministic)},"auto","headline",${c.prep})` }, NUMBER_FORMAT.pValue, tie,
+    { formula: `=MOOR.PHILLIPSOULIARIS(${c.refs.column(c.y)},${c.refs.column(c.x)},${textLiteral(deterministic)},"auto","headline",${c.prep})` }, NUMBER_FORMAT.pValue, tie,
     'the same question, correcting for autocorrelation with a long-run variance instead of lags');
   const j = c.pair.cointegration.johansen;
   if (j) {

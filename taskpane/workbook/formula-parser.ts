@@ -4,7 +4,7 @@
  * range references with optional sheet ('My sheet'!$B$2:$B$781), the spill operator (J3#),
  * structured references to a table column or a run of columns (Prices[GateGasoil],
  * Prices[[Gate gasoil]], Prices[[A]:[B]], with ' escaping [ ] # and '), function calls
- * (MOOR.EGTEST(...), IF(...)), unary minus, + - * / & and the six comparisons.
+ * (MOOR.ENGLEGRANGER(...), IF(...)), unary minus, + - * / & and the six comparisons.
  *
  * Anything else is refused with a FormulaSyntaxError naming the place, so a test can never
  * pass on a formula that real Excel would read differently without anyone noticing.

@@ -2,7 +2,7 @@
  * Benchmarks of the Excel functions, called exactly as Excel calls them: ranges as rows of
  * cells (2,500-row columns of prices), options as cell values or null when left out, each
  * call through the function layer (range reader, option parser, engine, renderer, error
- * mapping). Targets: 200 formulas (50 each of MOOR.ADF, MOOR.EGTEST, MOOR.GRANGER and
+ * mapping). Targets: 200 formulas (50 each of MOOR.ADF, MOOR.ENGLEGRANGER, MOOR.GRANGER and
  * MOOR.HALFLIFE) within 0.5 s in all; a whole-column reference (1,048,576 cells, 2,500 used)
  * at most 20 ms slower than the used range alone. Wired into `npm run bench` by
  * tests/bench/run-bench.ts; speed is never asserted in a test.
@@ -10,7 +10,7 @@
 import { SeededRandom, autoregressive1, randomWalk } from '../../addin/random';
 import { CellError } from '../../functions/cells/cell-error';
 import { timeIt, type Timing } from '../../addin/bench/timing';
-import { adf, egtest, granger, halflife } from '../../functions/functions';
+import { adf, englegranger, granger, halflife } from '../../functions/functions';
 
 const ROWS = 2_500;
 const SHEET_ROWS = 1_048_576;
@@ -53,7 +53,7 @@ function twoHundredFormulas(columns: unknown[][][]): () => void {
       const a = columns[k];
       const b = columns[k + 1];
       formula(() => adf(a, null, null, null));
-      formula(() => egtest(a, b, null, null, null));
+      formula(() => englegranger(a, b, null, null, null));
       formula(() => granger(b, a, null, null, null));
       formula(() => halflife(a, b));
     }
@@ -72,7 +72,7 @@ export function benchFunctions(): Timing[] {
   const values = columns[0].map((row) => row[0] as number);
   const whole = columnOf(values, SHEET_ROWS);
   const used = columns[0];
-  const formulas = timeIt('functions: 200 formulas (50 each ADF, EGTEST, GRANGER, HALFLIFE) over 2,500-row columns', twoHundredFormulas(columns), { runs: 5, warmup: 1, targetMs: 500 });
+  const formulas = timeIt('functions: 200 formulas (50 each ADF, ENGLEGRANGER, GRANGER, HALFLIFE) over 2,500-row columns', twoHundredFormulas(columns), { runs: 5, warmup: 1, targetMs: 500 });
   const usedRange = timeIt('functions: MOOR.ADF on the used range (2,500 cells)', () => adf(used), { runs: 30 });
   const wholeColumn = timeIt('functions: MOOR.ADF on a whole column (1,048,576 cells, 2,500 used)', () => adf(whole), { runs: 30 });
   const extra = Math.round((wholeColumn.medianMs - usedRange.medianMs) * 1000) / 1000;
@@ -86,7 +86,7 @@ export function benchFunctions(): Timing[] {
   };
   const parts = [
     timeIt('functions: 50 x MOOR.ADF (default lags: AIC search)', fiftyOf(columns, (a) => adf(a)), { runs: 5, warmup: 1 }),
-    timeIt('functions: 50 x MOOR.EGTEST (default lags: AIC search)', fiftyOf(columns, (a, b) => egtest(a, b)), { runs: 5, warmup: 1 }),
+    timeIt('functions: 50 x MOOR.ENGLEGRANGER (default lags: AIC search)', fiftyOf(columns, (a, b) => englegranger(a, b)), { runs: 5, warmup: 1 }),
     timeIt('functions: 50 x MOOR.GRANGER (method auto, lags by AIC)', fiftyOf(columns, (a, b) => granger(b, a)), { runs: 3, warmup: 1 }),
     timeIt('functions: 50 x MOOR.HALFLIFE (Engle-Granger spread)', fiftyOf(columns, (a, b) => halflife(a, b)), { runs: 5, warmup: 1 }),
   ];

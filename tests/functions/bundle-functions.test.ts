@@ -40,8 +40,8 @@ describe('dist/functions.js under a stand-in custom-functions runtime', () => {
     expect(Math.abs(answer[0][0] - adfCase.pValue)).toBeLessThan(1e-6);
   });
 
-  it('registers MOOR.EGTEST and it matches the coint.json fixture', () => {
-    const answer = fns.get('EGTEST')!(column(fixtureSeries(coint, egCase.y)), column(fixtureSeries(coint, egCase.x[0])), null, null, null) as number[][];
+  it('registers MOOR.ENGLEGRANGER and it matches the coint.json fixture', () => {
+    const answer = fns.get('ENGLEGRANGER')!(column(fixtureSeries(coint, egCase.y)), column(fixtureSeries(coint, egCase.x[0])), null, null, null) as number[][];
     expect(Math.abs(answer[0][0] - egCase.pValue)).toBeLessThan(1e-6);
   });
 

@@ -1,11 +1,11 @@
 /**
- * MOOR.EGTEST, MOOR.POTEST, MOOR.HEDGE, MOOR.SPREAD, MOOR.ZSCORE, MOOR.HALFLIFE and MOOR.ECM
+ * MOOR.ENGLEGRANGER, MOOR.PHILLIPSOULIARIS, MOOR.HEDGE, MOOR.SPREAD, MOOR.ZSCORE, MOOR.HALFLIFE and MOOR.ECM
  * called with cell ranges. Reference: statsmodels 0.13.5 coint (tests/reference/fixtures/
  * coint.json): statistic 1e-8 relative, p-value 1e-6, step-1 coefficients and residual sum of
  * squares 1e-8 relative. Where no fixture exists the check states its source.
  */
 import { describe, expect, it } from 'vitest';
-import { ecm, egtest, halflife, hedge, potest, spread, zscore } from '../../functions/functions';
+import { ecm, englegranger, halflife, hedge, phillipsouliaris, spread, zscore } from '../../functions/functions';
 import { errorCorrectionModel } from '../../addin/cointegration/error-correction';
 import { fixtureSeries, loadFixture, type Fixtures } from '../reference/fixtures';
 import { block, cellErrorOf, column, only, row, tableValue } from './cell-shapes';
@@ -15,7 +15,7 @@ const relative = (a: number, b: number) => Math.abs(a - b) / Math.max(Math.abs(b
 const cellsOf = (id: string) => fixtureSeries(coint, id);
 const xRange = (ids: readonly string[]) => block(ids.map(cellsOf));
 
-describe('MOOR.EGTEST against statsmodels coint (coint.json)', () => {
+describe('MOOR.ENGLEGRANGER against statsmodels coint (coint.json)', () => {
   it(`reaches all ${coint.cases.length} cases: every deterministic option, lag rule and a fixed lag`, () => {
     expect(new Set(coint.cases.map((c) => `${c.deterministic}/${c.lags}`)).size).toBe(12);
   });
@@ -23,14 +23,14 @@ describe('MOOR.EGTEST against statsmodels coint (coint.json)', () => {
     it(`${c.y} on ${c.x.join(' + ')}, ${c.deterministic}, lags=${c.lags}: p = ${c.pValue.toPrecision(4)}`, () => {
       const y = column(cellsOf(c.y));
       const x = xRange(c.x);
-      expect(Math.abs((only(egtest(y, x, c.deterministic, c.lags)) as number) - c.pValue)).toBeLessThan(1e-6);
-      expect(relative(only(egtest(y, x, c.deterministic, c.lags, 'stat')) as number, c.statistic)).toBeLessThan(1e-8);
+      expect(Math.abs((only(englegranger(y, x, c.deterministic, c.lags)) as number) - c.pValue)).toBeLessThan(1e-6);
+      expect(relative(only(englegranger(y, x, c.deterministic, c.lags, 'stat')) as number, c.statistic)).toBeLessThan(1e-8);
     });
   }
 
   it('the table carries the step-1 coefficients, critical values and a verdict', () => {
     const c = coint.cases.find((k) => k.x.length === 2 && k.deterministic === 'const' && k.lags === 'aic')!;
-    const table = egtest(column(cellsOf(c.y)), xRange(c.x), 'const', 'aic', 'all');
+    const table = englegranger(column(cellsOf(c.y)), xRange(c.x), 'const', 'aic', 'all');
     expect(relative(tableValue(table, 'Coefficient on x (column 1)') as number, c.beta[0])).toBeLessThan(1e-8);
     expect(relative(tableValue(table, 'Coefficient on x (column 2)') as number, c.beta[1])).toBeLessThan(1e-8);
     expect(relative(tableValue(table, 'Intercept') as number, c.intercept as number)).toBeLessThan(1e-8);
@@ -42,25 +42,25 @@ describe('MOOR.EGTEST against statsmodels coint (coint.json)', () => {
   it('rows laid out across the sheet give the same answer as columns', () => {
     const c = coint.cases.find((k) => k.x.length === 2 && k.lags === 'bic' && k.deterministic === 'trend')!;
     const xRows = c.x.map((id) => cellsOf(id));
-    const p = only(egtest(row(cellsOf(c.y)), xRows, 'trend', 'bic')) as number;
+    const p = only(englegranger(row(cellsOf(c.y)), xRows, 'trend', 'bic')) as number;
     expect(Math.abs(p - c.pValue)).toBeLessThan(1e-6);
   });
 });
 
-describe('MOOR.POTEST', () => {
+describe('MOOR.PHILLIPSOULIARIS', () => {
   // Phillips & Ouliaris (1990): with bandwidth 0 Z-t is the Dickey-Fuller t of the residual
   // with no lagged changes, the Engle-Granger statistic at lags 0, with the same tables.
   for (const c of coint.cases.filter((k) => k.lags === 'aic')) {
     it(`at bandwidth 0 equals Engle-Granger at lag 0: ${c.y} on ${c.x.join(' + ')}, ${c.deterministic}`, () => {
       const y = column(cellsOf(c.y));
       const x = xRange(c.x);
-      expect(relative(only(potest(y, x, c.deterministic, 0, 'stat')) as number, only(egtest(y, x, c.deterministic, 0, 'stat')) as number)).toBeLessThan(1e-10);
-      expect(only(potest(y, x, c.deterministic, 0))).toBeCloseTo(only(egtest(y, x, c.deterministic, 0)) as number, 12);
+      expect(relative(only(phillipsouliaris(y, x, c.deterministic, 0, 'stat')) as number, only(englegranger(y, x, c.deterministic, 0, 'stat')) as number)).toBeLessThan(1e-10);
+      expect(only(phillipsouliaris(y, x, c.deterministic, 0))).toBeCloseTo(only(englegranger(y, x, c.deterministic, 0)) as number, 12);
     });
   }
   it('its table gives Z-alpha beside Z-t, and the step-1 coefficients of the fixture', () => {
     const c = coint.cases.find((k) => k.y === 'pair_y' && k.deterministic === 'const')!;
-    const table = potest(column(cellsOf(c.y)), column(cellsOf(c.x[0])), 'const', 'auto', 'all');
+    const table = phillipsouliaris(column(cellsOf(c.y)), column(cellsOf(c.x[0])), 'const', 'auto', 'all');
     expect(typeof tableValue(table, 'Z-alpha (normalised bias)')).toBe('number');
     expect(relative(tableValue(table, 'Coefficient on x') as number, c.beta[0])).toBeLessThan(1e-8);
   });

@@ -19,10 +19,10 @@ type Range = unknown[][];
 const CALLS: Record<string, (y: Range, x: Range) => unknown> = {
   ADF: (y) => moor.adf(y, null, null, 'all'),
   KPSS: (y) => moor.kpss(y, null, null, 'all'),
-  PPTEST: (y) => moor.pptest(y, null, null, 'all'),
+  PHILLIPSPERRON: (y) => moor.phillipsperron(y, null, null, 'all'),
   ORDER: (y) => moor.order(y),
-  EGTEST: (y, x) => moor.egtest(y, x, null, null, 'all'),
-  POTEST: (y, x) => moor.potest(y, x, null, null, 'all'),
+  ENGLEGRANGER: (y, x) => moor.englegranger(y, x, null, null, 'all'),
+  PHILLIPSOULIARIS: (y, x) => moor.phillipsouliaris(y, x, null, null, 'all'),
   JOHANSEN: (y, x) => moor.johansen(sideBySide(y, x), null, null, 'all'),
   RANK: (y, x) => moor.rank(sideBySide(y, x)),
   HEDGE: (y, x) => moor.hedge(y, x, 'dols'),
@@ -78,7 +78,7 @@ for (const [name, call] of Object.entries(CALLS)) {
     }
 
     const inside = 36;
-    const where = name === 'GRANGER' ? 'effect row 37 of its range' : ['JOHANSEN', 'RANK', 'VARLAGS', 'SCREEN'].includes(name) ? 'series 1 row 37 of its range' : /^(ADF|KPSS|PPTEST|ORDER)$/.test(name) ? 'the series row 37 of its range' : 'y row 37 of its range';
+    const where = name === 'GRANGER' ? 'effect row 37 of its range' : ['JOHANSEN', 'RANK', 'VARLAGS', 'SCREEN'].includes(name) ? 'series 1 row 37 of its range' : /^(ADF|KPSS|PHILLIPSPERRON|ORDER)$/.test(name) ? 'the series row 37 of its range' : 'y row 37 of its range';
     const cases: [string, unknown, RegExp][] = [
       ['text', 'n/a', /is text 'n\/a'/],
       ['a blank as ""', '', /is blank/],
@@ -114,7 +114,7 @@ describe('blanks and zeros', () => {
 
 describe('two-series functions line ranges up by row', () => {
   it('unequal lengths after trimming are refused, naming the longer series and by how much', () => {
-    const message = cellErrorOf(() => moor.egtest(column(Y), column(X.slice(0, 290))), '#VALUE!');
+    const message = cellErrorOf(() => moor.englegranger(column(Y), column(X.slice(0, 290))), '#VALUE!');
     expect(message).toMatch(/y has 300 values and x has 290: y is longer than x by 10/);
   });
   it('equal lengths starting on different rows are refused', () => {

@@ -22,7 +22,7 @@ describe('docs/functions.md', () => {
       expect(page).toContain(`### MOOR.${f.name}`);
       for (const p of f.parameters) expect(page).toContain(`| \`${p.name}\` |`);
     }
-    expect(page).toContain('=MOOR.EGTEST(y, x, [deterministic], [lags], [show])');
+    expect(page).toContain('=MOOR.ENGLEGRANGER(y, x, [deterministic], [lags], [show], [prep])');
   });
 
   it('is served with the add-in where the help links point (the build copies docs/*.md to dist/docs/)', () => {

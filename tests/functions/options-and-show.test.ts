@@ -52,9 +52,9 @@ describe('wrong option words through every function list the allowed ones', () =
     ['ADF deterministic', () => moor.adf(Y, 'quadratic'), /deterministic must be one of none, const, trend; got 'quadratic'/],
     ['ADF lags', () => moor.adf(Y, null, 'hq'), /lags must be a whole number of lagged changes \(0 or more\) or one of aic, bic, tstat; got 'hq'/],
     ['KPSS deterministic', () => moor.kpss(Y, 'none'), /deterministic must be one of const, trend; got 'none'/],
-    ['PPTEST bandwidth', () => moor.pptest(Y, null, 'nw'), /bandwidth must be a whole number of kernel lags \(0 or more\) or one of auto/],
+    ['PHILLIPSPERRON bandwidth', () => moor.phillipsperron(Y, null, 'nw'), /bandwidth must be a whole number of kernel lags \(0 or more\) or one of auto/],
     ['ORDER alpha', () => moor.order(Y, 5), /alpha must be a level between 0 and 0.5/],
-    ['EGTEST show', () => moor.egtest(Y, X, null, null, 'everything'), /show must be one of headline, stat, all, card; got 'everything'/],
+    ['ENGLEGRANGER show', () => moor.englegranger(Y, X, null, null, 'everything'), /show must be one of headline, stat, all, card; got 'everything'/],
     ['JOHANSEN case', () => moor.johansen(block([Y.map((r) => r[0]), X.map((r) => r[0])]), 1, 'const'), /deterministic must be one of none, restricted-constant, constant, restricted-trend, trend; got 'const'/],
     ['HEDGE method', () => moor.hedge(Y, X, 'ols-reverse'), /method must be one of ols, reverse-ols, tls, dols; got 'ols-reverse'/],
     ['SPREAD beta', () => moor.spread(Y, X, 'one'), /beta must be a number/],
@@ -74,9 +74,9 @@ describe('wrong option words through every function list the allowed ones', () =
 
 describe('show', () => {
   it('headline is the p-value, stat the statistic, both 1 x 1', () => {
-    const table = moor.egtest(Y, X, null, null, 'all');
-    expect(only(moor.egtest(Y, X))).toBe(tableValue(table, 'p-value'));
-    expect(only(moor.egtest(Y, X, null, null, 'STAT'))).toBe(tableValue(table, 'Statistic (tau)'));
+    const table = moor.englegranger(Y, X, null, null, 'all');
+    expect(only(moor.englegranger(Y, X))).toBe(tableValue(table, 'p-value'));
+    expect(only(moor.englegranger(Y, X, null, null, 'STAT'))).toBe(tableValue(table, 'Statistic (tau)'));
   });
 
   it('"all" is a two-column table of labels and values, in plain words, ending with the caution', () => {
@@ -92,7 +92,7 @@ describe('show', () => {
   it('every test function\'s "all" table goes through the one renderer (the same rows as resultTable)', () => {
     const values = fixtureSeries(coint, 'pair_y');
     expect(moor.adf(column(values), 'trend', 2, 'all')).toEqual(resultTable(adfTest(values, { deterministic: 'trend', lags: 2 }, 'the series')));
-    for (const table of [moor.kpss(Y, null, null, 'all'), moor.pptest(Y, null, null, 'all'), moor.potest(Y, X, null, null, 'all'), moor.ecm(Y, X, null, 'all'), moor.granger(X, Y, 2, null, 'all')]) {
+    for (const table of [moor.kpss(Y, null, null, 'all'), moor.phillipsperron(Y, null, null, 'all'), moor.phillipsouliaris(Y, X, null, null, 'all'), moor.ecm(Y, X, null, 'all'), moor.granger(X, Y, 2, null, 'all')]) {
       expect((table as unknown[][]).at(-1)).toEqual(['Caution', CAUTION]);
       expect((table as unknown[][])[0][0]).toBe('Test');
     }
@@ -108,15 +108,15 @@ describe('show', () => {
   it('an infinite statistic is written in words in the table and gives #N/A as a single number', () => {
     const x = fixtureSeries(coint, 'pair_x');
     const copy = column(x.map((v) => 3 * v + 1));
-    expect(tableValue(moor.egtest(copy, column(x), null, null, 'all'), 'Statistic (tau)')).toBe('minus infinity');
-    expect(cellErrorOf(() => moor.egtest(copy, column(x), null, null, 'stat'), '#N/A')).toMatch(/minus infinity.*exact combination/);
+    expect(tableValue(moor.englegranger(copy, column(x), null, null, 'all'), 'Statistic (tau)')).toBe('minus infinity');
+    expect(cellErrorOf(() => moor.englegranger(copy, column(x), null, null, 'stat'), '#N/A')).toMatch(/minus infinity.*exact combination/);
   });
 
   it('a p-value with no published table gives #N/A with the reason', () => {
     // Seven random walks (seed 7): y plus seven xs is N = 8, beyond MacKinnon's (1994) six.
     const rng = new SeededRandom(7);
     const xs = block(Array.from({ length: 7 }, () => Array.from(randomWalk(rng, 300))));
-    expect(cellErrorOf(() => moor.egtest(Y, xs), '#N/A')).toMatch(/no published p-value surface above 6 variables/);
+    expect(cellErrorOf(() => moor.englegranger(Y, xs), '#N/A')).toMatch(/no published p-value surface above 6 variables/);
   });
 });
 

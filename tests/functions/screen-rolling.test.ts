@@ -1,8 +1,8 @@
 /**
  * MOOR.SCREEN and MOOR.ROLLING called with cell ranges. The evidence is agreement with the
  * engine and with the single-pair functions: every screened p-value equals screenPairs' and
- * MOOR.EGTEST's on the same two columns (1e-10 absolute), and each rolling window equals
- * MOOR.EGTEST, MOOR.HEDGE and MOOR.HALFLIFE run on that window's rows (p-value 1e-10 absolute,
+ * MOOR.ENGLEGRANGER's on the same two columns (1e-10 absolute), and each rolling window equals
+ * MOOR.ENGLEGRANGER, MOOR.HEDGE and MOOR.HALFLIFE run on that window's rows (p-value 1e-10 absolute,
  * hedge ratio 1e-10 and half-life 1e-9 relative, the engine's own tolerances).
  *
  * Universe: seed 20240611, 250 rows, 5 series; series 1 and 2 share one random-walk trend
@@ -11,7 +11,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { screenPairs } from '../../addin/screen/screen-pairs';
-import { egtest, halflife, hedge, rolling, screen } from '../../functions/functions';
+import { englegranger, halflife, hedge, rolling, screen } from '../../functions/functions';
 import { SCREEN_LIST_HEADER } from '../../functions/render/screen-table';
 import { generatedUniverse } from '../screen/generated-universe';
 import { block, cellErrorOf, column, only, row } from './cell-shapes';
@@ -22,7 +22,7 @@ const columns = universe.series.map((s) => Array.from(s.values));
 const range = block(columns);
 const names = columns.map((_, j) => `series ${j + 1}`);
 const engine = screenPairs(columns.map((values, j) => ({ name: names[j], values })), { alpha: 0.05 });
-const egP = (yi: number, xi: number) => only(egtest(column(columns[yi]), column(columns[xi]))) as number;
+const egP = (yi: number, xi: number) => only(englegranger(column(columns[yi]), column(columns[xi]))) as number;
 const relative = (a: number, b: number) => Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
 
 /** Every cell is a finite number or text: a spill never holds NaN, an infinity or a missing value. */
@@ -45,7 +45,7 @@ describe('MOOR.SCREEN, list (the default)', () => {
     expectCellsOnly(list);
   });
 
-  it('each row is the engine\'s ranked pair, and its p-value is MOOR.EGTEST\'s on the same two columns (1e-10)', () => {
+  it('each row is the engine\'s ranked pair, and its p-value is MOOR.ENGLEGRANGER\'s on the same two columns (1e-10)', () => {
     const body = list.slice(1, -1);
     body.forEach((r, k) => {
       const p = engine.pairs[k];
@@ -98,7 +98,7 @@ describe('MOOR.SCREEN, matrix and adjusted', () => {
     expect(String(adjusted[0][0])).toMatch(/^adjusted p-value/);
   });
 
-  it('the diagonal is blank; cell (y, x) is MOOR.EGTEST of y on x (1e-10) and the engine\'s adjusted p-value, never below the raw one', () => {
+  it('the diagonal is blank; cell (y, x) is MOOR.ENGLEGRANGER of y on x (1e-10) and the engine\'s adjusted p-value, never below the raw one', () => {
     for (let i = 0; i < 5; i++) {
       for (let j = 0; j < 5; j++) {
         const p = raw[i + 1][j + 1];
@@ -158,17 +158,17 @@ describe('MOOR.ROLLING', () => {
     expectCellsOnly(table);
   });
 
-  it('the last window equals MOOR.EGTEST, MOOR.HEDGE and MOOR.HALFLIFE on the last `window` rows', () => {
+  it('the last window equals MOOR.ENGLEGRANGER, MOOR.HEDGE and MOOR.HALFLIFE on the last `window` rows', () => {
     const last = table[table.length - 1];
-    expect(Math.abs((last[1] as number) - (only(egtest(rowsOf(y, T), rowsOf(x, T))) as number))).toBeLessThan(1e-10);
+    expect(Math.abs((last[1] as number) - (only(englegranger(rowsOf(y, T), rowsOf(x, T))) as number))).toBeLessThan(1e-10);
     expect(relative(last[2] as number, hedge(rowsOf(y, T), rowsOf(x, T)))).toBeLessThan(1e-10);
     expect(relative(last[3] as number, halflife(rowsOf(y, T), rowsOf(x, T)))).toBeLessThan(1e-9);
   });
 
-  it('every other window equals MOOR.EGTEST on its own rows too (1e-10)', () => {
+  it('every other window equals MOOR.ENGLEGRANGER on its own rows too (1e-10)', () => {
     for (const r of table.slice(1)) {
       const end = r[0] as number;
-      expect(Math.abs((r[1] as number) - (only(egtest(rowsOf(y, end), rowsOf(x, end))) as number)), `window ending at row ${end}`).toBeLessThan(1e-10);
+      expect(Math.abs((r[1] as number) - (only(englegranger(rowsOf(y, end), rowsOf(x, end))) as number)), `window ending at row ${end}`).toBeLessThan(1e-10);
     }
   });
 

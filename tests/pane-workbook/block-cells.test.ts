@@ -48,16 +48,16 @@ describe('the demo block', () => {
 
   it('points every number at the table by structured reference, with the report\'s settings', () => {
     const r = (label: string) => formula(`J${rowOf(demo.built, label)}`);
-    expect(r('Does GateGasoil wander?')).toBe('=MOOR.ORDER(QuennelPrices[GateGasoil],0.05,"const")');
-    expect(r('Tied? Engle-Granger, GateGasoil on DockDiesel')).toBe('=MOOR.EGTEST(QuennelPrices[GateGasoil],QuennelPrices[DockDiesel],"const","aic")');
-    expect(r('Tied? Engle-Granger, DockDiesel on GateGasoil')).toBe('=MOOR.EGTEST(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"const","aic")');
-    expect(r('Tied? Phillips-Ouliaris')).toBe('=MOOR.POTEST(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"const")');
-    expect(r('Tied? Johansen')).toBe('=MOOR.JOHANSEN(QuennelPrices[[GateGasoil]:[DockDiesel]],1,"restricted-constant")');
-    expect(r('Long-run relations found')).toBe('=MOOR.RANK(QuennelPrices[[GateGasoil]:[DockDiesel]],1,"restricted-constant",0.05)');
-    expect(r('Hedge ratio: units')).toBe('=MOOR.HEDGE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil])');
-    expect(r('Hedge ratio (dynamic OLS)')).toBe('=MOOR.HEDGE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"dols")');
-    expect(r('Does DockDiesel move back?')).toBe('=MOOR.ECM(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"aic")');
-    expect(r('Does the spread revert?')).toBe('=MOOR.HALFLIFE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil])');
+    expect(r('Does GateGasoil wander?')).toBe('=INDEX(MOOR.ORDER(HSTACK(QuennelPrices[GateGasoil],QuennelPrices[DockDiesel]),0.05,"const",$J$5),1,1)');
+    expect(r('Tied? Engle-Granger, GateGasoil on DockDiesel')).toBe('=MOOR.ENGLEGRANGER(QuennelPrices[GateGasoil],QuennelPrices[DockDiesel],"const","aic","headline",$J$5)');
+    expect(r('Tied? Engle-Granger, DockDiesel on GateGasoil')).toBe('=MOOR.ENGLEGRANGER(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"const","aic","headline",$J$5)');
+    expect(r('Tied? Phillips-Ouliaris')).toBe('=MOOR.PHILLIPSOULIARIS(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"const","auto","headline",$J$5)');
+    expect(r('Tied? Johansen')).toBe('=MOOR.JOHANSEN(QuennelPrices[[GateGasoil]:[DockDiesel]],1,"restricted-constant","headline",$J$5)');
+    expect(r('Long-run relations found')).toBe('=MOOR.RANK(QuennelPrices[[GateGasoil]:[DockDiesel]],1,"restricted-constant",0.05,$J$5)');
+    expect(r('Hedge ratio: units')).toBe('=MOOR.HEDGE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"ols","slope",$J$5)');
+    expect(r('Hedge ratio (dynamic OLS)')).toBe('=MOOR.HEDGE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"dols","slope",$J$5)');
+    expect(r('Does DockDiesel move back?')).toBe('=MOOR.ECM(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"aic","headline",$J$5)');
+    expect(r('Does the spread revert?')).toBe('=MOOR.HALFLIFE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],$J$5)');
     expect(r('Is the spread stretched now?')).toBe('=INDEX(R3#,ROWS(R3#))');
   });
 
@@ -109,13 +109,13 @@ describe('the demo block', () => {
   });
 
   it('spills the spread, its bands and z-scores down one row per data row, and charts them', () => {
-    expect(formula('O3')).toBe('=MOOR.SPREAD(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil])');
+    expect(formula('O3')).toBe('=MOOR.SPREAD(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],,$J$5)');
     expect(formula('P3')).toBe('=IF(ISNUMBER(O3#),AVERAGE(O3#)+2*STDEV.S(O3#),NA())');
     const p = demo.report.pairs[0];
     expect(shown('O782')).toBeCloseTo(p.spread!.latest, 12);
     expect(shown('N782')).toBe('2024-12-27');
     expect(shown('O783')).toBeNull();
-    expect(demo.built.block.reserved).toEqual(['N38:R782']);
+    expect(demo.built.block.reserved).toEqual(['N39:R782']);
     expect(demo.wb.charts).toHaveLength(1);
     const chart = demo.wb.charts[0];
     expect(chart.name).toBe('Mooring_GateGasoil_DockDiesel');

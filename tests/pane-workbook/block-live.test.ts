@@ -117,7 +117,7 @@ describe('a block over a plain range', () => {
     const report = regionReport(region, [PAIR.a, PAIR.b]);
     const { block } = buildPairBlock(report, PAIR, region);
     const eg = block.cells.find((r) => String(r[0]?.value).startsWith('Tied? Engle-Granger, DockDiesel'))!;
-    expect(eg[1].formula).toBe('=MOOR.EGTEST(Prices!$D$3:$D$782,Prices!$C$3:$C$782,"const","aic")');
+    expect(eg[1].formula).toBe('=MOOR.ENGLEGRANGER(Prices!$D$3:$D$782,Prices!$C$3:$C$782,"const","aic","headline",$K$6)');
     expect(block.cells[1][0].value).toMatch(/fixed range/);
   });
 

@@ -79,7 +79,7 @@ describe('text from cells stays text', () => {
     expect(wb.shownValue('Prices', 'I1')).toMatch(/^<b>x<\/b> and =SUM\(A1\): 780 rows/);
     expect(wb.cellAt('Prices', 'I1').stored?.formula).toBeUndefined();
     const eg = built.block.cells.find((r) => String(r[0].value).startsWith('Tied? Engle-Granger, <b>x</b> on =SUM(A1)'))!;
-    expect(eg[1].formula).toBe('=MOOR.EGTEST(QuennelPrices[[<b>x</b>]],QuennelPrices[[=SUM(A1)]],"const","aic")');
+    expect(eg[1].formula).toBe('=MOOR.ENGLEGRANGER(QuennelPrices[[<b>x</b>]],QuennelPrices[[=SUM(A1)]],"const","aic","headline",$J$5)');
     const row = built.block.cells.indexOf(eg) + 1;
     expect(typeof wb.shownValue('Prices', `J${row}`)).toBe('number');
     expect(wb.shownValue('Prices', `K${row}`)).toMatch(/^(yes|no): /);
