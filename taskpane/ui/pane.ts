@@ -63,7 +63,7 @@ export interface PaneHandle {
 
 /** What a prepared input covers, in words, to tell whether the report in hand is of the data on screen. */
 export function coverage(prepared: PreparedData): string {
-  const how = prepared.prepText ? ` (${prepared.prepText})` : '';
+  const how = prepared.prepText ? `, prepared as "${prepared.prepText}"` : '';
   return `${prepared.names.join(', ')} on ${prepared.input.source ?? 'the sheet'}${how}`;
 }
 

@@ -188,7 +188,7 @@ describe('the pane in a browser', () => {
     await page.waitForSelector('[data-role="notice"]:has-text("cancelled")');
     expect(await page.locator('[data-role="notice"]').textContent()).toBe('The diagnosis was cancelled: nothing changed. Run it again when you are ready.');
     expect((await state()).observations).toBe(792);
-    expect(await page.locator('[data-role="stale"]').textContent()).toBe('Steps 2 to 6 still show the last run (GateGasoil, DockDiesel on Prices!A1:G793) until you run the diagnosis again.');
+    expect(await page.locator('[data-role="stale"]').textContent()).toBe('Steps 2 to 6 still show the last run (GateGasoil, DockDiesel on Prices!A1:G793, prepared as "log, skip gaps") until you run the diagnosis again.');
     // The pane works on after a cancel: the next step still opens on the last report.
     await page.keyboard.press('Alt+ArrowRight');
     expect(await title()).toBe('2. How each series moves');
