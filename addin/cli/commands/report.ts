@@ -10,6 +10,7 @@
 import { writeFileSync } from 'node:fs';
 import { decimalTextValue } from '../../series/cell-kinds';
 import { csvBlock, seriesNames } from '../../csv/csv-series';
+import { AS_GIVEN, describePreparation } from '../../series/preparation';
 import type { CsvTable } from '../../csv/read-csv';
 import { MooringInputError } from '../../errors';
 import { JOHANSEN_CASES, type JohansenCase } from '../../johansen/deterministic-case';
@@ -80,7 +81,8 @@ function runReport(context: CommandContext): { terminal: string; json: Record<st
   const block = csvBlock(table, names, { log: context.common.log, skipGaps: context.common.skipGaps });
   const dates = table.dateIndex >= 0 ? table.columns[table.dateIndex] : null;
   const input = prepareDiagnosticInput(block, { dateOf: (i) => dates?.[i]?.trim() || null, source: file === '-' ? 'standard input' : file });
-  const report = diagnose(input, { log: context.common.log, alpha, lagRule, johansenCase, deterministic, rollingWindow, period });
+  const preparation = describePreparation({ ...AS_GIVEN, log: context.common.log, skipGaps: context.common.skipGaps });
+  const report = diagnose(input, { log: context.common.log, alpha, lagRule, johansenCase, deterministic, rollingWindow, period, preparation });
   if (out !== undefined) writeHtml(out, renderDiagnosticHtml(report));
   const leftOutLine = leftOut.length > 0 ? `\n\n  Left out (not columns of numbers): ${leftOut.join(', ')}` : '';
   return {

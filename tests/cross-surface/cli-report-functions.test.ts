@@ -1,0 +1,144 @@
+/**
+ * One analysis, one set of numbers, across the command line's single commands, `report
+ * --json` and the MOOR functions called directly on the same cells: for logs on and off, a
+ * skipped gap and each lag rule, every quantity the surfaces share is the same number (1e-12
+ * relative). Source of the expected values: the other surfaces (the check is agreement); the
+ * data are the demo's, made by our own seeded generator (addin/demo).
+ */
+import { describe, expect, it } from 'vitest';
+import { MOORING_COMMANDS } from '../../addin/cli/commands';
+import * as moor from '../../functions/functions';
+import { runWith } from '../cli/cli-harness';
+import { DEMO_CSV } from '../pane-workbook/demo-block';
+
+const A = 'GateGasoil';
+const B = 'DockDiesel';
+const FILE = 'prices.csv';
+
+interface Combo {
+  name: string;
+  log: boolean;
+  /** 1-based data rows of the CSV whose cell in column A is made blank. */
+  gapsInA: number[];
+  lagRule: 'aic' | 'bic';
+}
+
+const COMBOS: Combo[] = [
+  { name: 'logs, AIC', log: true, gapsInA: [], lagRule: 'aic' },
+  { name: 'prices, BIC', log: false, gapsInA: [], lagRule: 'bic' },
+  { name: 'logs, two skipped gaps, BIC', log: true, gapsInA: [40, 333], lagRule: 'bic' },
+];
+
+function csvWithGaps(gaps: number[]): string {
+  const lines = DEMO_CSV.trimEnd().split('\n');
+  const col = lines[0].split(',').indexOf(A);
+  for (const r of gaps) {
+    const cells = lines[r].split(',');
+    cells[col] = '';
+    lines[r] = cells.join(',');
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+/** A column of the CSV as Excel hands a range to a custom function: one cell per row, blanks null. */
+function columnCells(csv: string, name: string): (number | null)[][] {
+  const lines = csv.trimEnd().split('\n');
+  const j = lines[0].split(',').indexOf(name);
+  return lines.slice(1).map((line) => {
+    const cell = line.split(',')[j];
+    return [cell === '' ? null : Number(cell)];
+  });
+}
+
+function json(csv: string, argv: string[]): Record<string, any> {
+  const run = runWith(MOORING_COMMANDS, [...argv, FILE, '--json'], { [FILE]: csv });
+  expect(run.stderr, argv.join(' ')).toBe('');
+  expect(run.code).toBe(0);
+  return JSON.parse(run.stdout);
+}
+
+function same(label: string, values: (number | null | undefined)[]): void {
+  const [first, ...rest] = values;
+  expect(typeof first, `${label}: ${JSON.stringify(values)}`).toBe('number');
+  for (const v of rest) {
+    expect(typeof v, `${label}: ${JSON.stringify(values)}`).toBe('number');
+    expect(Math.abs((v as number) - (first as number)) / Math.max(Math.abs(first as number), 1e-300), `${label}: ${JSON.stringify(values)}`).toBeLessThan(1e-12);
+  }
+}
+
+/** The headline number of a spilled MOOR answer (a 1 x 1 array or a plain number). */
+function headline(v: unknown): number {
+  const x = Array.isArray(v) ? v[0][0] : v;
+  if (typeof x !== 'number') throw new Error(`expected a number, got ${JSON.stringify(v)}`);
+  return x;
+}
+
+describe('the command line, the report and the formulas agree on one analysis', () => {
+  for (const combo of COMBOS) {
+    it(combo.name, () => {
+      const csv = csvWithGaps(combo.gapsInA);
+      const common = [...(combo.log ? ['--log'] : []), ...(combo.gapsInA.length > 0 ? ['--skip-gaps'] : [])];
+      const prep = [combo.log ? 'log' : '', combo.gapsInA.length > 0 ? 'skip gaps' : ''].filter(Boolean).join(', ');
+      const report = json(csv, ['report', '--series', `${A},${B}`, '--lag-rule', combo.lagRule, ...common]).report;
+      expect(report.settings.preparation).toBe(prep);
+      const pair = report.pairs[0];
+      const y: string = pair.relation.dependent.replace(/^ln\((.*)\)$/, '$1');
+      const x: string = pair.relation.regressor.replace(/^ln\((.*)\)$/, '$1');
+      const cells = { [A]: columnCells(csv, A), [B]: columnCells(csv, B) };
+      const yc = cells[y];
+      const xc = cells[x];
+
+      // Orders of integration.
+      for (const s of [A, B]) {
+        const fromReport = report.series.find((r: { name: string }) => r.name.replace(/^ln\((.*)\)$/, '$1') === s).order;
+        const order = json(csv, ['order', '--series', s, ...common]).order;
+        const both = moor.order([...cells[A].map((r, i) => [r[0], cells[B][i][0]])], null, null, prep) as unknown as number[][];
+        expect([order, both[0][s === A ? 0 : 1]], `order of ${s}`).toEqual([fromReport, fromReport]);
+      }
+
+      // Engle-Granger, both ways.
+      const eg = pair.cointegration.engleGranger;
+      for (const [dep, reg, summary] of [[A, B, eg.aOnB], [B, A, eg.bOnA]] as const) {
+        same(`Engle-Granger ${dep} on ${reg}`, [
+          summary.pValue,
+          json(csv, ['eg', '--y', dep, '--x', reg, '--lags', combo.lagRule, ...common]).pValue,
+          headline(moor.englegranger(cells[dep], cells[reg], 'const', combo.lagRule, null, prep)),
+        ]);
+      }
+
+      // Phillips-Ouliaris on the report's normalisation.
+      same('Phillips-Ouliaris', [
+        pair.cointegration.phillipsOuliaris.pValue,
+        json(csv, ['po', '--y', y, '--x', x, ...common]).pValue,
+        headline(moor.phillipsouliaris(yc, xc, 'const', null, null, prep)),
+      ]);
+
+      // Johansen with the report's lags and case.
+      const j = pair.cointegration.johansen;
+      const jc = json(csv, ['johansen', '--series', `${A},${B}`, '--lags', String(j.lags), '--case', j.case, ...common]);
+      same('Johansen trace p-value', [
+        j.trace[0].pValue,
+        jc.tracePValue[0],
+        headline(moor.johansen(cells[A].map((r, i) => [r[0], cells[B][i][0]]), j.lags, j.case, null, prep)),
+      ]);
+
+      // The long-run line: slopes, dynamic OLS and its standard error, the units to hold.
+      const hedge = json(csv, ['hedge', '--y', y, '--x', x, ...common]);
+      same('OLS slope', [pair.relation.ols.beta, hedge.ols.beta, moor.hedge(yc, xc, 'ols', 'slope', prep)]);
+      same('units to hold (OLS)', [pair.relation.ols.hedgeUnits, hedge.ols.hedgeUnits, moor.hedge(yc, xc, 'ols', 'units', prep)]);
+      same('dynamic OLS slope', [pair.relation.dynamicOls.beta, hedge.dynamicOls.beta, moor.hedge(yc, xc, 'dols', 'slope', prep)]);
+      same('dynamic OLS standard error', [pair.relation.dynamicOls.standardError, hedge.dynamicOls.standardError]);
+
+      // Error correction and the half-life: one definition everywhere.
+      const ecm = json(csv, ['ecm', '--y', y, '--x', x, ...common]);
+      const spread = json(csv, ['spread', '--y', y, '--x', x, ...common]);
+      same('speed of adjustment', [pair.adjustment.ecm.dependent.speed, ecm.equations.y.alpha, headline(moor.ecm(yc, xc, 'aic', null, prep))]);
+      same('half-life', [pair.adjustment.spreadAr1.halfLife, ecm.halfLife, spread.halfLife, moor.halflife(yc, xc, prep)]);
+      same('latest z-score', [
+        pair.spread.latestZ,
+        spread.zscore[spread.zscore.length - 1],
+        (moor.zscore(yc, xc, null, prep) as unknown as number[][]).at(-1)?.[0],
+      ]);
+    }, 60_000);
+  }
+});
