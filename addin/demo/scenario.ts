@@ -44,6 +44,34 @@ export interface DemoData {
  */
 export function generateDemo(seed: number = DEMO_TRUTH.seed): DemoData {
   const n = DEMO_TRUTH.rows;
+  const { logs } = demoPaths(seed);
+  const columns: Record<string, number[]> = {};
+  for (const s of DEMO_TRUTH.series) {
+    columns[s.name] = Array.from(logs[s.name], (v) => roundTo(Math.exp(v), s.decimals));
+  }
+  return {
+    header: ['Date', ...DEMO_TRUTH.series.map((s) => s.name)],
+    dates: businessDays(DEMO_TRUTH.startDate, n),
+    columns,
+  };
+}
+
+/**
+ * The demo's paths before rounding: each series' log prices by name, and the hidden states the
+ * generator drew them from (the leader with its pre-sample day, the loose pair's common trend
+ * and spread, the premium's deviation from its mean), which continuation.ts carries on from.
+ */
+export interface DemoPaths {
+  logs: Record<string, Float64Array>;
+  gasoilWithPresample: Float64Array;
+  heavyTrend: Float64Array;
+  bunkerSpread: Float64Array;
+  premiumDeviation: Float64Array;
+}
+
+/** Draws the demo's paths (see generateDemo for the order of the draws). */
+export function demoPaths(seed: number = DEMO_TRUTH.seed): DemoPaths {
+  const n = DEMO_TRUTH.rows;
   const rng = new SeededRandom(seed);
   const logs: Record<string, Float64Array> = {};
   const start = (name: string): number => Math.log(seriesTruth(name).startPrice);
@@ -84,16 +112,7 @@ export function generateDemo(seed: number = DEMO_TRUTH.seed): DemoData {
   const premiumPhi = phiFromHalfLife(premiumLaw.halfLifeDays);
   const premium = autoregressive1(rng, n, premiumPhi, premiumLaw.logSd * Math.sqrt(1 - premiumPhi ** 2));
   logs.TankPremium = premium.map((z) => premiumLaw.logMean + z);
-
-  const columns: Record<string, number[]> = {};
-  for (const s of DEMO_TRUTH.series) {
-    columns[s.name] = Array.from(logs[s.name], (v) => roundTo(Math.exp(v), s.decimals));
-  }
-  return {
-    header: ['Date', ...DEMO_TRUTH.series.map((s) => s.name)],
-    dates: businessDays(DEMO_TRUTH.startDate, n),
-    columns,
-  };
+  return { logs, gasoilWithPresample, heavyTrend: trend, bunkerSpread: spread, premiumDeviation: premium };
 }
 
 /**
@@ -109,29 +128,38 @@ export function generateDemo(seed: number = DEMO_TRUTH.seed): DemoData {
  * sigma_e is set so the spread's stationary standard deviation is the designed spreadSd.
  */
 function followLeader(rng: SeededRandom, leaderWithPresample: Float64Array): Float64Array {
-  const pair = DEMO_TRUTH.cointegratedPairs[0];
-  const gamma = DEMO_TRUTH.leadLag.followerOnLaggedLeaderChange;
-  const { intercept, beta, phi, spreadSd } = pair;
-  const innovationSd = spreadSd * Math.sqrt(1 - phi * phi);
-  const sigmaE = Math.sqrt(innovationSd ** 2 - (gamma * GASOIL_SIGMA) ** 2);
+  const { intercept, beta, spreadSd } = DEMO_TRUTH.cointegratedPairs[0];
   const x = leaderWithPresample;
   const n = x.length - 1;
   const y = new Float64Array(n);
   // Row 0 starts on the equilibrium plus a spread drawn from its stationary law.
   y[0] = intercept + beta * x[1] + spreadSd * rng.normal();
-  for (let t = 1; t < n; t++) {
-    const zPrev = y[t - 1] - intercept - beta * x[t];
-    const dxNow = x[t + 1] - x[t];
-    const dxPrev = x[t] - x[t - 1];
-    y[t] =
-      y[t - 1] +
-      (beta - gamma) * GASOIL_DRIFT +
-      (phi - 1) * zPrev +
-      gamma * dxPrev +
-      beta * (dxNow - GASOIL_DRIFT) +
-      sigmaE * rng.normal();
-  }
+  for (let t = 1; t < n; t++) y[t] = followerStep(y[t - 1], x[t - 1], x[t], x[t + 1], rng.normal());
   return y;
+}
+
+/**
+ * One day of the follower's equation above: its log price from yesterday's (yPrev), the
+ * leader's log prices of the day before yesterday, yesterday and today, and a standard normal
+ * draw e (scaled by sigma_e here).
+ */
+export function followerStep(yPrev: number, xBefore: number, xPrev: number, xNow: number, e: number): number {
+  const pair = DEMO_TRUTH.cointegratedPairs[0];
+  const gamma = DEMO_TRUTH.leadLag.followerOnLaggedLeaderChange;
+  const { intercept, beta, phi, spreadSd } = pair;
+  const innovationSd = spreadSd * Math.sqrt(1 - phi * phi);
+  const sigmaE = Math.sqrt(innovationSd ** 2 - (gamma * GASOIL_SIGMA) ** 2);
+  const zPrev = yPrev - intercept - beta * xPrev;
+  const dxNow = xNow - xPrev;
+  const dxPrev = xPrev - xBefore;
+  return (
+    yPrev +
+    (beta - gamma) * GASOIL_DRIFT +
+    (phi - 1) * zPrev +
+    gamma * dxPrev +
+    beta * (dxNow - GASOIL_DRIFT) +
+    sigmaE * e
+  );
 }
 
 /** The demo table as CSV text: the header row, then one row per day, LF line endings. */
@@ -146,14 +174,14 @@ export function demoCsv(seed: number = DEMO_TRUTH.seed): string {
   return lines.join('\n') + '\n';
 }
 
-function seriesTruth(name: string): DemoSeriesTruth {
+export function seriesTruth(name: string): DemoSeriesTruth {
   const s = DEMO_TRUTH.series.find((entry) => entry.name === name);
   if (!s) throw new Error(`demo series '${name}' is not in DEMO_TRUTH`);
   return s;
 }
 
 /** Rounds half away from zero at the given decimals (prices are positive). */
-function roundTo(value: number, decimals: number): number {
+export function roundTo(value: number, decimals: number): number {
   const scale = 10 ** decimals;
   return Math.round(value * scale) / scale;
 }
