@@ -107,10 +107,10 @@ export function lineStage(g: BlockGrid, c: StageContext): void {
     // In logs the slope is an elasticity; the quantity to hold is sized at the latest prices.
     numberRow(g, `Elasticity of ${c.y} to ${c.x} (least squares, in logs)`, { formula: `=MOOR.HEDGE(${y},${x},"ols","slope",${c.prep})` }, NUMBER_FORMAT.ratio, null,
       `ln ${c.y} = intercept + slope x ln ${c.x}: a 1% move in ${c.x} goes with about this many % in ${c.y}; the spread beside is what this line leaves over`);
-    numberRow(g, `Hedge at the latest prices: units of ${c.x} per unit of ${c.y}`, { formula: `=MOOR.HEDGE(${y},${x},"ols","units",${c.prep})` }, NUMBER_FORMAT.ratio, null,
-      'the elasticity times the last price of the first over the last price of the second; it drifts as the prices move');
     numberRow(g, 'Elasticity (dynamic OLS)', { formula: `=MOOR.HEDGE(${y},${x},"dols","slope",${c.prep})` }, NUMBER_FORMAT.ratio, null,
       'with leads and lags of the changes, chosen by AIC: the estimate with sound standard errors for wandering prices');
+    numberRow(g, `Hedge at the latest prices: units of ${c.x} per unit of ${c.y} (dynamic OLS)`, { formula: `=MOOR.HEDGE(${y},${x},"dols","units",${c.prep})` }, NUMBER_FORMAT.ratio, null,
+      `the dynamic-OLS elasticity times the last price of ${c.y} over the last price of ${c.x}; it drifts as the prices move`);
   } else {
     numberRow(g, `Hedge ratio: units of ${c.x} per unit of ${c.y} (least squares)`, { formula: `=MOOR.HEDGE(${y},${x},"ols","slope",${c.prep})` }, NUMBER_FORMAT.ratio, null,
       `${c.y} = intercept + ratio x ${c.x}; the spread beside is what this line leaves over`);

@@ -15,6 +15,8 @@ import type { DiagnosticReport } from '../../addin/report/report-types';
 import { buildPairBlock, type PairBlock } from '../../taskpane/block/pair-block';
 import { planBlockWrite, writePlannedBlock } from '../../taskpane/block/plan-block-write';
 import { prepareData, type DataChoice } from '../../taskpane/ui/data/prepare-data';
+import { showNumber } from '../../taskpane/ui/views/numbers';
+import { relationStepView } from '../../taskpane/ui/views/relation-view';
 import { loadCsvTable } from '../../taskpane/workbook/demo-workbook';
 import type { MemoryWorkbook } from '../../taskpane/workbook/memory-workbook';
 import type { CellContent, DataRegion } from '../../taskpane/workbook/port';
@@ -97,7 +99,7 @@ function paneNumbers(report: DiagnosticReport): Record<string, number | null> {
   };
   if (report.data.logged) {
     out['Elasticity of'] = p.relation.ols.beta;
-    out['Hedge at the latest prices'] = p.relation.ols.hedgeUnits;
+    out['Hedge at the latest prices'] = p.relation.dynamicOls.hedgeUnits;
     out['Elasticity (dynamic OLS)'] = p.relation.dynamicOls.beta;
   } else {
     out['Hedge ratio: units'] = p.relation.ols.beta;
@@ -150,6 +152,15 @@ describe('the pane and the block it writes show the same numbers', () => {
       const prepText = String(wb.shownValue('Prices', prepCell));
       expect(prepText.startsWith(report.settings.preparation)).toBe(true);
       if (combo.extra.length > 0) expect(prepText).toMatch(/skip rows? \d+/);
+
+      // What the pane's step 4 prints is the block's number, rounded as the pane rounds it.
+      const pair = report.pairs[0];
+      const view = relationStepView(report, pair);
+      const fact = (start: string) => view.pullFacts.concat(view.lineFacts).find((f) => f.label.startsWith(start))?.value;
+      const cell = (label: string) => wb.shownValue('Prices', `J${rowOf(built, label)}`) as number;
+      expect(fact('Half-life of the spread')).toBe(`${showNumber(cell('Does the spread revert? Half-life'), 1)} ${report.data.period}s`);
+      expect(fact(report.data.logged ? 'Elasticity, dynamic' : 'Hedge ratio, dynamic')).toBe(showNumber(cell(report.data.logged ? 'Elasticity (dynamic OLS)' : 'Hedge ratio (dynamic OLS)'), 4));
+      if (report.data.logged) expect(fact('Units of')).toBe(showNumber(cell('Hedge at the latest prices'), 4));
 
       // Rows arrive: the pane runs again on the grown table; the live block follows by itself.
       wb.appendRows('QuennelPrices', twelveRows(region));
