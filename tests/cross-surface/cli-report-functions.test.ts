@@ -139,6 +139,20 @@ describe('the command line, the report and the formulas agree on one analysis', 
         spread.zscore[spread.zscore.length - 1],
         (moor.zscore(yc, xc, null, prep) as unknown as number[][]).at(-1)?.[0],
       ]);
+
+      // Which one moves first: the test the report chose, asked for by name on the other surfaces.
+      const ll = pair.leadLag;
+      const cli = { 'f-levels': ['--method', 'f', '--data', 'levels'], 'f-differences': ['--method', 'f', '--data', 'changes'], 'toda-yamamoto': ['--method', 'ty'], 'error-correction': ['--method', 'ecm'] }[ll.method as string] as string[];
+      const word = { 'f-levels': 'levels', 'f-differences': 'changes', 'toda-yamamoto': 'ty', 'error-correction': 'ecm' }[ll.method as string] as string;
+      for (const d of [ll.aLeadsB, ll.bLeadsA]) {
+        const cause = d.cause.replace(/^ln\((.*)\)$/, '$1');
+        const effect = d.effect.replace(/^ln\((.*)\)$/, '$1');
+        same(`${cause} leads ${effect} (${ll.method})`, [
+          d.test.pValue,
+          json(csv, ['granger', '--cause', cause, '--effect', effect, '--lags', String(d.test.lags), ...cli, ...common]).pValue,
+          headline(moor.granger(cells[cause], cells[effect], d.test.lags, word, null, prep)),
+        ]);
+      }
     }, 60_000);
   }
 });
