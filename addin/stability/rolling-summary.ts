@@ -26,13 +26,30 @@ export function rollingSummary(r: RollingRelation, names: { y: string; x: string
   if (lastP !== null && lastBeta !== null) {
     out.push(`In the latest window (${groupedNumber(r.nobs[total - 1])} rows) it is ${formatPValue(lastP)}, with a hedge ratio of ${formatCoefficient(lastBeta)}.`);
   }
-  const betas = r.beta.filter((b): b is number => b !== null);
-  if (betas.length > 1) {
-    out.push(`The hedge ratio ranged from ${formatCoefficient(Math.min(...betas))} to ${formatCoefficient(Math.max(...betas))} across the windows.`);
+  const range = betaRange(r.beta);
+  if (range.count > 1) {
+    out.push(`The hedge ratio ranged from ${formatCoefficient(range.lowest)} to ${formatCoefficient(range.highest)} across the windows.`);
   }
   if (flatWindows > 0) out.push(`In ${groupedNumber(flatWindows)} window${flatWindows === 1 ? '' : 's'} ${names.x} or ${names.y} does not move, so there is no hedge ratio there.`);
   if (total > 1) {
     out.push('Neighbouring windows share most of their rows, so their p-values are not independent tests: the share that pass describes the history, it does not test it.');
   }
   return out;
+}
+
+/**
+ * Lowest and highest hedge ratio over the windows, by a loop: a million windows are a million
+ * arguments to Math.min(...betas), which overflows the call stack.
+ */
+function betaRange(betas: readonly (number | null)[]): { count: number; lowest: number; highest: number } {
+  let count = 0;
+  let lowest = Infinity;
+  let highest = -Infinity;
+  for (const b of betas) {
+    if (b === null) continue;
+    count++;
+    if (b < lowest) lowest = b;
+    if (b > highest) highest = b;
+  }
+  return { count, lowest, highest };
 }
