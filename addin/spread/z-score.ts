@@ -3,12 +3,21 @@
  * full sample or over a trailing window. Standard deviations use n - 1 (the sample standard
  * deviation, as STDEV.S in a spreadsheet).
  *
- * The rolling version keeps running sums of s and s^2 over the window (O(n) in all). To keep
- * the sum of squares from losing digits on series far from zero, values are first taken
- * relative to the full-sample mean (a shift that changes no z-score).
+ * The rolling version slides the window's mean and sum of squared deviations forward
+ * (O(n) in all) with the engine the rolling relation uses (stability/sliding-comoments.ts):
+ * deviations from the running mean, and a fresh pass over the window whenever a removal
+ * cancelled too many digits, so an outlier leaving the window leaves nothing behind and each
+ * window's z-score is the one a fresh pass over its values gives.
  */
 import { MooringInputError } from '../errors';
 import { requireAlignedSeries } from '../cointegration/cointegrating-regression';
+import { SlidingComoments } from '../stability/sliding-comoments';
+
+/**
+ * A window counts as constant when its standard deviation is at most this share of its mean's
+ * size: its values then differ only in their last few digits, where rounding decides.
+ */
+const CONSTANT_WINDOW = 1e-12;
 
 export interface ZScores {
   values: Float64Array;
@@ -47,26 +56,15 @@ export function rollingZScore(spread: ArrayLike<number>, window: number): (numbe
     throw new MooringInputError(`The rolling window must be a whole number of at least 3 values; got ${window}.`);
   }
   if (window > n) throw new MooringInputError(`A rolling window of ${window} is longer than the spread (${n} values): use at most ${n}.`);
-  const shift = meanOf(spread);
   const out: (number | null)[] = new Array(n).fill(null);
-  let sum = 0;
-  let sumSquares = 0;
-  for (let i = 0; i < n; i++) {
-    const v = spread[i] - shift;
-    sum += v;
-    sumSquares += v * v;
-    if (i >= window) {
-      const old = spread[i - window] - shift;
-      sum -= old;
-      sumSquares -= old * old;
-    }
-    if (i < window - 1) continue;
-    const mean = sum / window;
-    const variance = Math.max((sumSquares - window * mean * mean) / (window - 1), 0);
-    const sd = Math.sqrt(variance);
-    // Running sums carry rounding of order sqrt(eps) relative to the window's size, so a
-    // standard deviation below 1e-7 of the window's root mean square counts as constant.
-    out[i] = sd > 1e-7 * Math.sqrt(sumSquares / window) ? (v - mean) / sd : null;
+  const sliding = new SlidingComoments(1, (t, row) => {
+    row[0] = spread[t];
+  });
+  for (let i = window - 1; i < n; i++) {
+    sliding.moveTo(i - window + 1, i);
+    const mean = sliding.moments.mean(0);
+    const sd = Math.sqrt(Math.max(sliding.moments.comoment(0, 0), 0) / (window - 1));
+    out[i] = sd > 0 && sd > CONSTANT_WINDOW * Math.abs(mean) ? (spread[i] - mean) / sd : null;
   }
   return out;
 }
