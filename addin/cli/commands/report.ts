@@ -4,10 +4,9 @@
  * cleaner, and renders the result as the readable terminal report, as one JSON object
  * (--json, the report under "report"), and as a self-contained HTML file (--out).
  *
- * The HTML file is written here with Node's fs, because the runner's io has no writer; the
- * command line is bundled for Node only, so this is the one Node call outside main.ts.
+ * The HTML file is written through report-file.ts (Node's fs, because the runner's io has no
+ * writer), which refuses to replace a file Mooring did not write unless --force is given.
  */
-import { writeFileSync } from 'node:fs';
 import { decimalTextValue } from '../../series/cell-kinds';
 import { csvBlock, seriesNames } from '../../csv/csv-series';
 import { AS_GIVEN, describePreparation } from '../../series/preparation';
@@ -20,6 +19,7 @@ import type { Command, CommandContext } from '../command';
 import { choiceValue, levelValue, wholeNumberValue } from '../option-values';
 import { renderDiagnosticHtml } from '../render/diagnostic-html';
 import { renderDiagnosticTerminal } from '../render/diagnostic-terminal';
+import { checkReportPath, writeReportFile } from '../report-file';
 
 /** A column counts as numbers when more than half of its filled fields read as plain decimals. */
 function isNumericColumn(fields: readonly string[]): boolean {
@@ -56,16 +56,6 @@ export function reportColumns(table: CsvTable, given: string | undefined): { nam
   return { names, leftOut };
 }
 
-function writeHtml(path: string, html: string): void {
-  try {
-    writeFileSync(path, html, 'utf8');
-  } catch (e) {
-    const code = (e as { code?: unknown } | null)?.code;
-    const why = code === 'ENOENT' ? 'the folder does not exist' : code === 'EACCES' || code === 'EPERM' ? 'permission denied' : code === 'EISDIR' ? 'it is a folder' : e instanceof Error ? e.message : String(e);
-    throw new MooringInputError(`Cannot write the HTML report to '${path}': ${why}; choose another --out path.`);
-  }
-}
-
 function runReport(context: CommandContext): { terminal: string; json: Record<string, unknown> } {
   const { args, table, file } = context;
   const alpha = levelValue('alpha', args.values.get('alpha'));
@@ -76,6 +66,9 @@ function runReport(context: CommandContext): { terminal: string; json: Record<st
   const period = args.values.get('period')?.trim() || undefined;
   const out = args.values.get('out');
   if (out !== undefined && !/\.html?$/i.test(out)) throw new MooringInputError(`--out names the HTML report, so it should end in .html; got '${out}'.`);
+  const force = args.switches.has('force');
+  if (force && out === undefined) throw new MooringInputError('--force allows --out to replace an existing file, so it goes with --out FILE.html.');
+  if (out !== undefined) checkReportPath(out, force);
 
   const { names, leftOut } = reportColumns(table, context.common.series);
   const block = csvBlock(table, names, { log: context.common.log, skipGaps: context.common.skipGaps });
@@ -83,7 +76,7 @@ function runReport(context: CommandContext): { terminal: string; json: Record<st
   const input = prepareDiagnosticInput(block, { dateOf: (i) => dates?.[i]?.trim() || null, source: file === '-' ? 'standard input' : file });
   const preparation = describePreparation({ ...AS_GIVEN, log: context.common.log, skipGaps: context.common.skipGaps });
   const report = diagnose(input, { log: context.common.log, alpha, lagRule, johansenCase, deterministic, rollingWindow, period, preparation });
-  if (out !== undefined) writeHtml(out, renderDiagnosticHtml(report));
+  if (out !== undefined) writeReportFile(out, renderDiagnosticHtml(report));
   const leftOutLine = leftOut.length > 0 ? `\n\n  Left out (not columns of numbers): ${leftOut.join(', ')}` : '';
   return {
     terminal: renderDiagnosticTerminal(report, { htmlPath: out }) + leftOutLine,
@@ -101,12 +94,14 @@ export const reportCommand: Command = {
       '(static and dynamic OLS), the half-life of the spread and who closes it, where the spread stands now, and which series leads. ' +
       'With more than two series it also tests the system as a whole.',
     'The findings come first, in plain words, then the numbers behind them and the warnings. --json prints the whole report as one ' +
-      'object (under "report"); --out also writes a self-contained HTML report with charts.',
+      'object (under "report"); --out also writes a self-contained HTML report with charts. An existing file at that path is ' +
+      'replaced only when it is a report Mooring wrote; any other file is left alone unless --force is given.',
   ],
   usage: 'mooring report <file.csv> [--series A,B[,...]] [options]',
   options: [
     { name: 'alpha', value: 'LEVEL', help: 'significance level of every decision (default 0.05)' },
-    { name: 'out', value: 'FILE.html', help: 'also write the report as a self-contained HTML file' },
+    { name: 'out', value: 'FILE.html', help: 'also write the report as a self-contained HTML file; an existing file is replaced only if Mooring wrote it' },
+    { name: 'force', help: 'with --out: replace the file even if Mooring did not write it' },
     { name: 'period', value: 'WORD', help: 'what one row is (day, week, ...); default found from the dates' },
     { name: 'lag-rule', value: 'aic|bic', help: 'criterion for the lag orders (default aic)' },
     { name: 'johansen-case', value: 'auto|CASE', help: `Johansen deterministic case: auto (chosen from the drift; the default) or one of ${JOHANSEN_CASES.join(', ')}` },

@@ -15,6 +15,12 @@ import { lineChart } from './svg-chart';
 /** The policy of the page: nothing loads, no script runs, only the inline style applies. */
 export const REPORT_CSP = "default-src 'none'; style-src 'unsafe-inline'; img-src data:; base-uri 'none'; form-action 'none'";
 
+/**
+ * The mark of a report Mooring wrote, in the head of every page: `report --out` replaces an
+ * existing file only when it carries this mark (report-file.ts).
+ */
+export const REPORT_MARKER = '<meta name="generator" content="Mooring pairwise diagnostic">';
+
 /** Line colours of the series chart, in series order (repeating after twelve). */
 export const SERIES_COLOURS = ['#1f5f66', '#b4552f', '#5a4a86', '#8a7a1e', '#3f7f4f', '#9a3f63', '#2f6f9f', '#6f5a3a', '#4f8f8f', '#c07a2a', '#5f5f5f', '#7f3f2f'];
 
@@ -109,6 +115,7 @@ export function renderDiagnosticHtml(report: DiagnosticReport): string {
     '<html lang="en">',
     '<head>',
     '<meta charset="utf-8">',
+    REPORT_MARKER,
     `<meta http-equiv="Content-Security-Policy" content="${escapeHtml(REPORT_CSP)}">`,
     '<meta name="referrer" content="no-referrer">',
     '<meta name="viewport" content="width=device-width, initial-scale=1">',
