@@ -3,6 +3,8 @@
  * running the command, printing the terminal report (with the cautions) or one JSON object,
  * and mapping every failure to one line on standard error with an exit code: 2 for bad
  * input, 1 for an internal error. Output goes through `io`, so tests run it in-process.
+ * Everything written passes through terminal-text.ts first, so no control character from the
+ * data reaches the terminal raw.
  */
 import { readCsv, type CsvTable } from '../csv/read-csv';
 import { isMooringInputError, MooringInputError } from '../errors';
@@ -10,6 +12,7 @@ import { closestWord, parseArguments } from './arguments';
 import { COMMON_OPTIONS, type Command, type CommonOptions } from './command';
 import { commandHelp, overallHelp } from './help';
 import { CAUTIONS, renderCautions } from './render/cautions';
+import { jsonText, terminalText } from './render/terminal-text';
 
 /** Where the runner reads and writes. */
 export interface CliIo {
@@ -34,11 +37,11 @@ export function runCommandLine(argv: readonly string[], io: CliIo, commands: rea
     return dispatch(argv, io, commands);
   } catch (e) {
     if (isMooringInputError(e)) {
-      io.stderr(`mooring: ${oneLine(e.message)}\n`);
+      io.stderr(`mooring: ${terminalText(oneLine(e.message), true)}\n`);
       return EXIT_BAD_INPUT;
     }
     const message = e instanceof Error ? `${e.name}: ${e.message}` : String(e);
-    io.stderr(`mooring: internal error (${oneLine(message)}); please report it with the command that caused it\n`);
+    io.stderr(`mooring: internal error (${terminalText(oneLine(message), true)}); please report it with the command that caused it\n`);
     return EXIT_INTERNAL;
   }
 }
@@ -80,9 +83,9 @@ function dispatch(argv: readonly string[], io: CliIo, commands: readonly Command
   const output = command.run({ command: command.name, file, table, args, common });
   if (common.json) {
     const object = { command: command.name, file, ...output.json, cautions: CAUTIONS.slice() };
-    io.stdout(`${JSON.stringify(object, jsonValue, 2)}\n`);
+    io.stdout(`${jsonText(JSON.stringify(object, jsonValue, 2))}\n`);
   } else {
-    io.stdout(`${output.terminal}\n\n${renderCautions()}\n`);
+    io.stdout(`${terminalText(output.terminal)}\n\n${renderCautions()}\n`);
   }
   return EXIT_OK;
 }

@@ -4,15 +4,18 @@ import { MooringInputError } from '../../addin/errors';
 import table from '../../addin/tables/gregory-hansen-critical.json';
 
 /**
- * The Gregory & Hansen (1996) Table 1 critical values as stored (quoted from memory, see the
- * JSON's transcribedFrom): spot values, the shape any such table must have, and the lookups.
+ * The Gregory & Hansen (1996) Table 1 critical values as stored (1/5/10% for m = 1..3, and m = 4
+ * in model C, compared with a transcription of the printed table; the rest from memory, see
+ * the JSON's transcribedFrom and tests/tables/gregory-hansen-transcription.test.ts): spot
+ * values, the shape any such table must have, and the lookups.
  */
-describe('Gregory-Hansen critical values (Gregory & Hansen 1996, Table 1, from memory)', () => {
-  it('says in its provenance that the numbers are from memory and cites the paper', () => {
-    expect(table.transcribedFrom).toMatch(/^from memory/);
+describe('Gregory-Hansen critical values (Gregory & Hansen 1996, Table 1)', () => {
+  it('says in its provenance which numbers were compared with the printed table and which are from memory, and cites the paper', () => {
+    expect(table.transcribedFrom).toMatch(/compared, value by value, with an independent public transcription of Table 1/);
+    expect(table.transcribedFrom).toMatch(/still from memory/);
     expect(table.source).toMatch(/Gregory, A\. W\. & Hansen, B\. E\. \(1996\).*Journal of Econometrics, 70\(1\), 99-126 \(Table 1\)/);
   });
-  it('m = 1: C -5.13/-4.83/-4.61/-4.34, C/T -5.45/-5.21/-4.99/-4.72, C/S -5.47/-5.19/-4.95/-4.68 (from memory)', () => {
+  it('m = 1: C -5.13/-4.83/-4.61/-4.34, C/T -5.45/-5.21/-4.99/-4.72, C/S -5.47/-5.19/-4.95/-4.68 (1/5/10%: Table 1 as transcribed; 2.5%: from memory)', () => {
     expect(gregoryHansenCritical('level', 1)).toEqual({ '1%': -5.13, '2.5%': -4.83, '5%': -4.61, '10%': -4.34 });
     expect(gregoryHansenCritical('level-trend', 1)).toEqual({ '1%': -5.45, '2.5%': -5.21, '5%': -4.99, '10%': -4.72 });
     expect(gregoryHansenCritical('regime', 1)).toEqual({ '1%': -5.47, '2.5%': -5.19, '5%': -4.95, '10%': -4.68 });
