@@ -271,7 +271,7 @@ export function screen(block: any[][], alpha?: any, show?: any, prep?: any): any
  * @helpurl https://localhost:3000/docs/functions.md#rolling
  * @param y Prices of the series on the left of the relation: one column or one row.
  * @param x Prices of the other series: one column (or row), on the same rows as y.
- * @param window Rows in each window: a whole number of 20 or more, at most the length of the series.
+ * @param window Rows in each window: a whole number of 21 or more (the fewest the test can use), at most the length of the series.
  * @param [step] Rows between window ends; the last window always ends on the last row. Default 1.
  * @param [show] all (window end, p-value, hedge ratio, half-life), pvalue, beta or halflife. Default all.
  * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.

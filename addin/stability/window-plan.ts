@@ -13,8 +13,14 @@ export interface WindowPlan {
   end: number[];
 }
 
-/** Fewest rows in a window: the cleaner's minimum for cointegration work (about 20 observations). */
-export const SMALLEST_WINDOW = 20;
+/**
+ * Fewest rows in a window: 21, the fewest for which the Engle-Granger test with its default
+ * largest lag gives a p-value. Its residual ADF searches up to min(ceil(12 (T/100)^(1/4)),
+ * T/2 - 1) lagged changes on T - 1 - pmax rows; at T = 20 that is 9 lags plus the level (10
+ * columns) on 10 rows, which leaves no degree of freedom, so no window of 20 could be tested;
+ * at 21 the regression has 11 rows for 10 columns.
+ */
+export const SMALLEST_WINDOW = 21;
 
 /** The windows for T rows (see the file comment). Refuses a window or step that cannot work, saying what would. */
 export function windowPlan(T: number, window: number, step: number, expanding: boolean): WindowPlan {

@@ -211,8 +211,8 @@ describe('MOOR.ROLLING refuses what it cannot roll, with a #VALUE! that says why
   it('a window longer than the series', () => {
     expect(cellErrorOf(() => rolling(y, x, 400), '#VALUE!')).toMatch(/A window of 400 rows is longer than the series \(250 rows\): use at most 250/);
   });
-  it('a window under 20 rows, one that is not a whole number, or none', () => {
-    expect(cellErrorOf(() => rolling(y, x, 10), '#VALUE!')).toMatch(/window must be a whole number of at least 20 rows/);
+  it('a window under 21 rows, one that is not a whole number, or none', () => {
+    expect(cellErrorOf(() => rolling(y, x, 10), '#VALUE!')).toMatch(/window must be a whole number of at least 21 rows/);
     expect(cellErrorOf(() => rolling(y, x, 50.5), '#VALUE!')).toMatch(/window must be a whole number of rows in each window/);
     expect(cellErrorOf(() => rolling(y, x, null), '#VALUE!')).toMatch(/window is empty/);
   });

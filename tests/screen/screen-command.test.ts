@@ -74,7 +74,7 @@ describe('mooring screen', () => {
     expect(out.code).toBe(0);
     expect(out.stdout).toContain('Pair screen of 5 series');
     expect(out.stdout).toContain('Of 12 directed pairs tested at 5%');
-    expect(out.stdout).toMatch(/\n\s+1 c0m\d on c0m\d/);
+    expect(out.stdout).toMatch(/\n\s+1\s+c0m\d on c0m\d/);
     expect(out.stdout).toContain('... 9 more pairs');
     expect(out.stdout).toMatch(/Set aside\s+8 directed pairs, not ranked/);
     expect(out.stdout).toContain('Keep in mind');

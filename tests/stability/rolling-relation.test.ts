@@ -150,7 +150,8 @@ describe('expanding windows', () => {
 describe('rolling refusals and edge cases', () => {
   const { y, x } = pair(8, 300, 80);
   it.each([
-    [{ window: 10 }, /at least 20 rows/],
+    [{ window: 10 }, /at least 21 rows/],
+    [{ window: 20 }, /at least 21 rows/],
     [{ window: 301 }, /longer than the series \(300 rows\)/],
     [{ window: 50, step: 0 }, /step must be a whole number of at least 1/],
     [{ window: 50.5 }, /whole number/],

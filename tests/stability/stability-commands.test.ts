@@ -57,7 +57,7 @@ describe('mooring rolling', () => {
 
   it.each([
     [['--y', 'Y', '--x', 'X'], /needs --window N/],
-    [['--y', 'Y', '--x', 'X', '--window', '5'], /at least 20 rows/],
+    [['--y', 'Y', '--x', 'X', '--window', '5'], /at least 21 rows/],
     [['--y', 'Y', '--x', 'X', '--window', '500'], /longer than the series \(400 rows\)/],
     [['--y', 'Y', '--x', 'X', '--window', '100', '--step', '0'], /step must be a whole number of at least 1/],
     [['--y', 'Y', '--window', '100'], /needs --y NAME and --x NAME/],

@@ -10,6 +10,7 @@ import { rollingRelation, type RollingRelation } from '../../stability/rolling-r
 import type { Command } from '../command';
 import { wholeNumberValue } from '../option-values';
 import { bullet, formatPValue, formatStatistic, heading, labelled } from '../render/format';
+import { textTable } from '../render/text-table';
 import { relationFromContext, relationJson, relationSampleTerminal, X_OPTION, Y_OPTION } from './relation-input';
 
 /** Windows shown in the terminal table (evenly spaced, the latest always among them). */
@@ -19,14 +20,11 @@ function windowTable(r: RollingRelation, endLabel: (k: number) => string): strin
   const total = r.endRow.length;
   const count = Math.min(SHOWN_WINDOWS, total);
   const picks = count === 1 ? [0] : [...new Set(Array.from({ length: count }, (_, i) => Math.round(((total - 1) * i) / (count - 1))))];
-  const width = Math.max(10, ...picks.map((k) => endLabel(k).length));
-  const head = `  ${'window ends'.padEnd(width)}${'rows'.padStart(7)}${'p-value'.padStart(10)}${'beta'.padStart(11)}${'half-life'.padStart(11)}`;
-  return [
-    head,
-    ...picks.map((k) =>
-      `  ${endLabel(k).padEnd(width)}${String(r.nobs[k]).padStart(7)}${formatPValue(r.pValue[k]).padStart(10)}` +
-        `${formatStatistic(r.beta[k]).padStart(11)}${(r.halfLife[k] === null ? 'none' : formatStatistic(r.halfLife[k])).padStart(11)}`),
-  ];
+  // Each column as wide as its widest cell, two spaces between: 'not available' never runs into its neighbour.
+  return textTable(
+    ['window ends', 'rows', 'p-value', 'beta', 'half-life'],
+    picks.map((k) => [endLabel(k), String(r.nobs[k]), formatPValue(r.pValue[k]), formatStatistic(r.beta[k]), r.halfLife[k] === null ? 'none' : formatStatistic(r.halfLife[k])]),
+  );
 }
 
 /** The rolling command. */
@@ -42,7 +40,7 @@ export const rollingCommand: Command = {
   options: [
     Y_OPTION,
     X_OPTION,
-    { name: 'window', value: 'N', help: 'rows in each window (rolling), or in the first window (expanding); at least 20' },
+    { name: 'window', value: 'N', help: 'rows in each window (rolling), or in the first window (expanding); at least 21, the fewest the test can use' },
     { name: 'step', value: 'S', help: 'rows between window ends (default 1)' },
     { name: 'expanding', help: 'windows that start on the first row and grow' },
   ],

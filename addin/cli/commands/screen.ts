@@ -15,6 +15,7 @@ import { decimalTextValue } from '../../series/cell-kinds';
 import type { Command, CommandContext } from '../command';
 import { levelValue, wholeNumberValue } from '../option-values';
 import { bullet, formatPValue, formatStatistic, heading, labelled } from '../render/format';
+import { textTable } from '../render/text-table';
 import { LAGS_OPTION, MAX_LAGS_OPTION, readLags } from '../test-options';
 
 /** Pairs listed in the terminal report unless --top says otherwise. */
@@ -64,19 +65,20 @@ function screenSeries(context: CommandContext): { series: NamedSeries[]; leftOut
   return { series, leftOut };
 }
 
-function pairLine(rank: number, p: ScreenPair, width: number): string {
-  const cell = (s: string, w: number) => s.padStart(w);
-  return [
-    cell(String(rank), 4), ' ', `${p.y} on ${p.x}`.padEnd(width), cell(formatStatistic(p.statistic), 10), cell(formatPValue(p.pValue), 10),
-    cell(formatPValue(p.adjustedPValue), 10), cell(formatStatistic(p.beta), 10), cell(p.halfLife === null ? 'none' : formatStatistic(p.halfLife), 10),
-    cell(formatStatistic(p.zscore), 9),
-  ].join('');
+/** The ranked pairs as a table: each column as wide as its widest cell, two spaces between, so 'not available' never runs into its neighbour. */
+function pairTable(shown: readonly ScreenPair[]): string[] {
+  return textTable(
+    ['rank', 'pair (y on x)', 'tau', 'p-value', 'adjusted', 'beta', 'half-life', 'z-score'],
+    shown.map((p, i) => [
+      String(i + 1), `${p.y} on ${p.x}`, formatStatistic(p.statistic), formatPValue(p.pValue), formatPValue(p.adjustedPValue),
+      formatStatistic(p.beta), p.halfLife === null ? 'none' : formatStatistic(p.halfLife), formatStatistic(p.zscore),
+    ]),
+    [1],
+  );
 }
 
 function terminalReport(result: ScreenResult, top: number, leftOut: string[], threads: string): string {
   const shown = result.pairs.slice(0, top);
-  const width = Math.max(12, ...shown.map((p) => p.y.length + p.x.length + 6));
-  const header = `${'rank'.padStart(4)} ${'pair (y on x)'.padEnd(width)}${'tau'.padStart(10)}${'p-value'.padStart(10)}${'adjusted'.padStart(10)}${'beta'.padStart(10)}${'half-life'.padStart(10)}${'z-score'.padStart(9)}`;
   const out = [
     heading(`Pair screen of ${result.names.length} series`),
     '',
@@ -89,8 +91,7 @@ function terminalReport(result: ScreenResult, top: number, leftOut: string[], th
     '',
     bullet(result.chanceSentence, 0, '*'),
     '',
-    shown.length === 0 ? '  No pair meets the half-life range.' : header,
-    ...shown.map((p, i) => pairLine(i + 1, p, width)),
+    ...(shown.length === 0 ? ['  No pair meets the half-life range.'] : pairTable(shown)),
   ];
   if (result.pairs.length > shown.length) out.push(`  ... ${result.pairs.length - shown.length} more pairs (--top N shows more; --json lists all)`);
   if (result.setAside.length > 0) {
