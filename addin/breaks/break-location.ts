@@ -16,6 +16,8 @@ export interface BreakLocation {
   firstAfter: number;
   /** The first affected observation as people see it: rowLabel(firstAfter), else "row <firstAfter + 1>". */
   label: string;
+  /** The last observation of the old regime as people see it: rowLabel(lastBefore), else "row <lastBefore + 1>". */
+  lastBeforeLabel: string;
   /** Share of the sample before the break: firstAfter / T. */
   fraction: number;
 }
@@ -31,7 +33,7 @@ export function defaultRowLabel(index: number): string {
 /** The location of a break whose old regime ends at lastBefore, in a sample of T observations. */
 export function breakLocation(lastBefore: number, T: number, rowLabel: RowLabel = defaultRowLabel): BreakLocation {
   const firstAfter = lastBefore + 1;
-  return { lastBefore, firstAfter, label: rowLabel(firstAfter), fraction: firstAfter / T };
+  return { lastBefore, firstAfter, label: rowLabel(firstAfter), lastBeforeLabel: rowLabel(lastBefore), fraction: firstAfter / T };
 }
 
 /**

@@ -3,7 +3,7 @@
  * shift, and the verdict at the 5% level with the caution that relations break.
  */
 import type { ResultDetail } from '../result';
-import type { GregoryHansenModel } from '../tables/gregory-hansen-table';
+import { gregoryHansenComparedLevels, type GregoryHansenModel } from '../tables/gregory-hansen-table';
 import type { BreakLocation } from './break-location';
 import { BREAKS_AGAIN_CAUTION, aroundText, formatNumber } from './break-wording';
 import type { ShiftedRelation } from './gregory-hansen-design';
@@ -13,6 +13,47 @@ export const SHIFT_WORDS: Record<GregoryHansenModel, string> = {
   'level-trend': 'shift in level (with a trend)',
   regime: 'shift in level and slopes',
 };
+
+/** The paper's name of each model. */
+export const PAPER_MODEL: Record<GregoryHansenModel, string> = { level: 'C', 'level-trend': 'C/T', regime: 'C/S' };
+
+/** "1%, 5% and 10%". */
+function levelList(levels: readonly string[]): string {
+  return listWords([...levels]);
+}
+
+/**
+ * Where the row's critical values come from, in one or two sentences: Gregory & Hansen
+ * (1996), Table 1, with the points that were compared with an independent transcription of
+ * the printed table said to be so, and the rest said to be from memory. Null beyond the table.
+ */
+export function criticalValueSourceText(model: GregoryHansenModel, m: number): string | null {
+  const status = gregoryHansenComparedLevels(model, m);
+  if (status === null) return null;
+  const row = `model ${PAPER_MODEL[model]} with ${m} regressor${m === 1 ? '' : 's'}`;
+  const head = `The critical values are asymptotic, from Gregory & Hansen (1996), Table 1 (${row}).`;
+  if (status.compared.length === 0) {
+    return `${head} This row is quoted from memory: it has not yet been compared with the printed table, so check it against the paper before relying on the second decimal.`;
+  }
+  const compared = `The ${levelList(status.compared)} points were compared with an independent transcription of the printed table and agree to its two decimals`;
+  if (status.fromMemory.length === 0) return `${head} ${compared}.`;
+  const one = status.fromMemory.length === 1;
+  return `${head} ${compared}; the ${levelList(status.fromMemory)} point${one ? ' is' : 's are'} quoted from memory, not yet compared.`;
+}
+
+/** Each lag rule by its trade name. */
+const RULE_WORDS: Record<string, string> = { aic: 'AIC', bic: 'BIC', tstat: 'the t-statistic rule' };
+
+/**
+ * How the residual ADF's lags were set, as a phrase that reads after its label: "fixed",
+ * "once, by AIC on the residual without the shift, then used at every date", or "by AIC
+ * afresh at each candidate date".
+ */
+export function lagMethodText(rule: string, eachDate: boolean): string {
+  if (rule === 'fixed') return 'fixed';
+  const by = RULE_WORDS[rule] ?? rule;
+  return eachDate ? `by ${by} afresh at each candidate date` : `once, by ${by} on the residual without the shift, then used at every date`;
+}
 
 /** "a, b and c". */
 export function listWords(items: readonly string[]): string {

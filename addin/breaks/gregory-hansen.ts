@@ -12,8 +12,9 @@
  *
  * Candidate dates: s = h .. T - h with h = floor(trim T), so each regime holds at least h
  * observations (the paper's tau in [0.15, 0.85] at trim 0.15).
- * Critical values: Gregory & Hansen (1996), Table 1, quoted from memory
- * (addin/tables/gregory-hansen-table.ts). No p-value: none was published.
+ * Critical values: Gregory & Hansen (1996), Table 1 (addin/tables/gregory-hansen-table.ts;
+ * most points compared with a transcription of the printed table, the rest from memory, and
+ * each result says which). No p-value: none was published.
  */
 import { MooringInputError } from '../errors';
 import { type ResultDetail, rejects } from '../result';
@@ -25,7 +26,7 @@ import { resolveMaxLag } from '../unitroot/max-lag';
 import { DEFAULT_TRIM, breakLocation, edgeOfSearchWarning, requireFiniteSeries, requireTrim, trimmedCount, type RowLabel } from './break-location';
 import { BREAKS_AGAIN_CAUTION } from './break-wording';
 import { gregoryHansenColumnNames, gregoryHansenColumns, shiftedRelation, type ShiftedRelation } from './gregory-hansen-design';
-import { gregoryHansenVerdict, listWords, relationDetails, SHIFT_WORDS } from './gregory-hansen-wording';
+import { criticalValueSourceText, gregoryHansenVerdict, lagMethodText, listWords, PAPER_MODEL, relationDetails, SHIFT_WORDS } from './gregory-hansen-wording';
 import { LAG_TIMINGS, planShiftLags, searchShiftDates, type LagTiming } from './gregory-hansen-search';
 import type { BreakTestResult } from './zivot-andrews';
 
@@ -140,7 +141,7 @@ export function gregoryHansenTest(
   const critical: Record<string, number> = table ? { ...table } : {};
   const warnings: string[] = [];
   if (!table) warnings.push(`Gregory & Hansen (1996) published critical values for 1 to 4 regressors only; with ${m} there is no table and no decision.`);
-  else warnings.push('The critical values are asymptotic and quoted from memory of Gregory & Hansen (1996), Table 1; they are not checked against the printed table.');
+  else warnings.push(criticalValueSourceText(model, m) as string);
   const lagsUsed = core.regression.lags;
   if (plan.rule !== 'fixed' && lagsUsed === plan.maxLags && plan.maxLags > 0) {
     warnings.push(`The lag rule took the largest lag searched (${plan.maxLags}); a larger maximum may fit better.`);
@@ -174,18 +175,17 @@ export function gregoryHansenTest(
   const verdict = gregoryHansenVerdict({ decision, statistic: tau, critical5: table?.['5%'] ?? null, model, yName, xNames, location, relation, m });
   const details: ResultDetail[] = [
     { key: 'verdict', label: 'Verdict at 5%', value: verdict },
-    { key: 'model', label: 'What may shift (Gregory & Hansen model)', value: `${model} (${model === 'level' ? 'C' : model === 'level-trend' ? 'C/T' : 'C/S'})` },
+    { key: 'model', label: 'What may shift (Gregory & Hansen model)', value: `${model} (${PAPER_MODEL[model]})` },
     { key: 'breakLabel', label: 'First observation of the new regime', value: location.label },
-    { key: 'breakIndex', label: 'Last observation before the shift (0-based index)', value: location.lastBefore },
-    { key: 'breakFirstAfter', label: 'First observation of the new regime (0-based index)', value: location.firstAfter },
+    { key: 'breakLastBeforeLabel', label: 'Last observation before the shift', value: location.lastBeforeLabel },
     { key: 'breakFraction', label: 'Share of the sample before the shift', value: location.fraction },
     { key: 'trim', label: 'Share trimmed at each end', value: trim },
     { key: 'candidates', label: 'Candidate dates searched', value: T - 2 * h + 1 },
     { key: 'maxLags', label: 'Largest lag searched', value: plan.rule === 'fixed' ? null : plan.maxLags },
     {
       key: 'lagMethod',
-      label: 'How the lags were set',
-      value: plan.rule === 'fixed' ? 'fixed' : plan.everyDate === null ? `chosen by ${plan.rule} at each candidate date` : `chosen once by ${plan.rule} on the residual without the shift, then used at every date`,
+      label: 'How lags were set',
+      value: lagMethodText(plan.rule, plan.everyDate === null),
     },
     ...relationDetails(relation, xNames),
   ];

@@ -25,7 +25,7 @@ import { resolveMaxLag } from '../unitroot/max-lag';
 import { DEFAULT_TRIM, breakLocation, edgeOfSearchWarning, requireFiniteSeries, requireTrim, trimmedCount, type BreakLocation, type RowLabel } from './break-location';
 import { breakColumn, scanBreakTValues } from './break-t-scan';
 import { BREAKS_AGAIN_CAUTION, aroundText, capitalise, formatBreakPValue, formatNumber } from './break-wording';
-import { BREAK_COLUMNS, ZIVOT_ANDREWS_BREAKS, candidateBreaks, firstBreakRow, referenceBreakIndex, zivotAndrewsDesign, type ZivotAndrewsBreak } from './zivot-andrews-design';
+import { BREAK_COLUMNS, ZIVOT_ANDREWS_BREAKS, candidateBreaks, firstBreakRow, zivotAndrewsDesign, type ZivotAndrewsBreak } from './zivot-andrews-design';
 
 export interface ZivotAndrewsOptions {
   /** What may break: 'level' (model A), 'slope' (model B) or 'both' (model C). */
@@ -118,21 +118,19 @@ export function zivotAndrewsTest(series: ArrayLike<number>, options: ZivotAndrew
     ? `${name} looks stationary around a trend with one ${SHIFT_WORDS[model]} (${stat}); the break appears ${aroundText(location)}. ` +
       'Prices before that date follow a different path: judge levels by the later regime.'
     : `No evidence at the 5% level that ${name} is stationary, even allowing one ${SHIFT_WORDS[model]} (${stat}): treat it as having a unit root. ` +
-      `The best-fitting date (${location.label}) is not evidence that a break happened.`);
+      `The best-fitting date, ${location.label}, is not evidence that a break happened.`);
 
   const k = fit.k;
   const details: ResultDetail[] = [
     { key: 'verdict', label: 'Verdict at 5%', value: verdict },
     { key: 'model', label: `Break allowed in (Zivot & Andrews model ${PAPER_MODEL[model]})`, value: model },
     { key: 'breakLabel', label: 'First observation after the break', value: location.label },
-    { key: 'breakIndex', label: 'Break index, 0-based (level, both: last observation before the break; slope: first after)', value: referenceBreakIndex(model, lastBefore) },
-    { key: 'breakLastBefore', label: 'Last observation before the break (0-based index)', value: location.lastBefore },
-    { key: 'breakFirstAfter', label: 'First observation after the break (0-based index)', value: location.firstAfter },
+    { key: 'breakLastBeforeLabel', label: 'Last observation before the break', value: location.lastBeforeLabel },
     { key: 'breakFraction', label: 'Share of the sample before the break', value: location.fraction },
     { key: 'trim', label: 'Share trimmed at each end', value: trim },
     { key: 'candidates', label: 'Candidate break dates searched', value: range.last - range.first + 1 },
     { key: 'maxLags', label: 'Largest lag searched', value: choice ? choice.maxLags : null },
-    { key: 'lagMethod', label: 'How the lags were set', value: choice ? 'once, by an ADF with constant and trend and no break, then used at every date' : 'fixed' },
+    { key: 'lagMethod', label: 'How lags were set', value: choice ? 'once, by an ADF with constant and trend and no break, then used at every date' : 'fixed' },
     { key: 'gamma', label: 'Coefficient on the lagged level (rho - 1)', value: fit.coefficients[0] },
   ];
   columns.forEach((kind, i) => {

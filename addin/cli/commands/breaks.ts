@@ -12,7 +12,6 @@ import { csvRowLabel } from '../../csv/csv-series';
 import { MooringInputError } from '../../errors';
 import type { Command } from '../command';
 import { choiceValue } from '../option-values';
-import { labelled } from '../render/format';
 import { renderTestTerminal } from '../render/test-terminal';
 import { testResultJson } from '../render/test-json';
 import { seriesFromContext } from '../series-input';
@@ -64,8 +63,8 @@ export const breaksCommand: Command = {
       const input = seriesFromContext(context);
       const rows = input.series.rows;
       const result = zivotAndrewsTest(input.series.values, { model: modelWord as (typeof ZIVOT_ANDREWS_BREAKS)[number], trim, ...lagChoice, rowLabel: (i) => label(rows[i]) }, input.label);
-      const output = singleTestOutput(input, result, { breakAt: result.breakAt, verdict: result.verdict });
-      return { ...output, terminal: `${output.terminal}\n\n${labelled('Verdict', result.verdict)}` };
+      // the verdict is printed once, among the details ('Verdict at 5%')
+      return singleTestOutput(input, result, { breakAt: result.breakAt, verdict: result.verdict });
     }
     if (!(GREGORY_HANSEN_MODELS as readonly string[]).includes(modelWord)) {
       throw new MooringInputError(`--model ${modelWord} is for one series; for a pair use ${GREGORY_HANSEN_MODELS.join(', ')}.`);
@@ -79,7 +78,7 @@ export const breaksCommand: Command = {
       { y: input.names.y, xs: input.names.xs },
     );
     return {
-      terminal: `${renderTestTerminal(result)}\n\n${labelled('Verdict', result.verdict)}\n\n${relationSampleTerminal(input)}`,
+      terminal: `${renderTestTerminal(result)}\n\n${relationSampleTerminal(input)}`,
       json: { ...relationJson(input), ...testResultJson(result), breakAt: result.breakAt, relation: result.relation, verdict: result.verdict },
     };
   },

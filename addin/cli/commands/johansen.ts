@@ -67,7 +67,7 @@ export const johansenCommand: Command = {
       labelled('Lagged changes (K)', String(result.lags)),
       labelled('Observations', String(result.nobs)),
       labelled('Rank (trace)', String(result.rank.trace)),
-      labelled('Rank (max-eigenvalue)', String(result.rank.maxEigen)),
+      labelled('Rank (max-eig)', String(result.rank.maxEigen)),
       '',
       ...plainTable(['H0', 'eigenvalue', 'trace', 'p', '5% crit', 'max-eig', 'p', '5% crit'], rows),
       ...(bounded ? ['', bullet('A p-value shown as "< 0.001" or "> 0.999" is a bound: the statistic lies beyond the simulated table, which gives p-values from 0.001 to 0.999.')] : []),

@@ -62,7 +62,8 @@ export function wrapWords(text: string, width: number): string[] {
 
 /**
  * "  label      value": the value starts in the value column and wraps under itself; a value
- * that fits keeps its own spacing. A label too long for its column stands on a line of its own.
+ * that fits keeps its own spacing. A label too long for its column (less a two-space gap) stands
+ * on a line of its own.
  */
 export function labelled(label: string, value: string, indent = 2): string {
   const pad = ' '.repeat(indent);
@@ -70,7 +71,8 @@ export function labelled(label: string, value: string, indent = 2): string {
   const room = REPORT_WIDTH - column.length;
   const valueLines = value.length <= room ? [value] : wrapWords(value, room);
   const body = valueLines.map((l, i) => (i === 0 ? l : column + l));
-  if (label.length > LABEL_WIDTH - 1) return `${pad}${label}
+  // at least two spaces between a label and its value, so the two never read as one phrase
+  if (label.length > LABEL_WIDTH - 2) return `${pad}${label}
 ${column}${body.join('\n')}`;
   return `${pad}${label}`.padEnd(column.length) + body.join('\n');
 }

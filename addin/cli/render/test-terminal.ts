@@ -33,13 +33,25 @@ export function criticalLine(critical: Record<string, number>): string {
   return entries.map(([level, v]) => `${level}: ${formatStatistic(v)}`).join('   ');
 }
 
+/**
+ * The p-value line's value: the number (or its bound, with the reason), or, when there is no
+ * p-value, the engine's note alone ("not available: only critical values are published")
+ * rather than "not available (not available: ...)".
+ */
+export function pValueText(result: TestResult): string {
+  const bound = result.pValueBound ?? null;
+  const shown = formatPValue(result.pValue, bound);
+  if (bound !== null) return `${shown} (${pValueBoundReason(bound)})`;
+  if (!result.pValueNote) return shown;
+  if (result.pValue === null && result.pValueNote.startsWith(shown)) return result.pValueNote;
+  return `${shown} (${result.pValueNote})`;
+}
+
 /** Renders one test result as a terminal block (no cautions: the caller appends those once). */
 export function renderTestTerminal(result: TestResult): string {
   const out: string[] = [heading(result.title), ''];
   out.push(labelled(`Statistic (${result.statisticName})`, formatStatistic(result.statistic)));
-  const bound = result.pValueBound ?? null;
-  const pNote = bound !== null ? ` (${pValueBoundReason(bound)})` : result.pValueNote ? ` (${result.pValueNote})` : '';
-  out.push(labelled('p-value', `${formatPValue(result.pValue, bound)}${pNote}`));
+  out.push(labelled('p-value', pValueText(result)));
   out.push(labelled('Reading', readingAt5(result)));
   out.push('');
   out.push(labelled('Critical values', criticalLine(result.critical)));
