@@ -27,7 +27,15 @@ export function bartlettLongRunVariance(u: ArrayLike<number>, bandwidth: number)
     for (let t = i; t < n; t++) c += u[t] * u[t - i];
     s += 2 * (1 - i / (bandwidth + 1)) * c;
   }
+  if (!Number.isFinite(s)) throw overflowError();
   return s / n;
+}
+
+/** Sums of squared residuals past the largest double: said where it happens, not passed on as NaN. */
+export function overflowError(): MooringInputError {
+  return new MooringInputError(
+    'The long-run variance overflows: the squares of these residuals pass the largest number a double holds (about 1.8e308). ' +
+      'Divide the prices by a power of ten (the test does not depend on their units) and run it again.');
 }
 
 /** Newey & West (1994) automatic Bartlett bandwidth, capped at n - 1. */
@@ -45,6 +53,7 @@ export function neweyWestBandwidth(u: ArrayLike<number>): number {
     s0 += twice;
     s1 += j * twice;
   }
+  if (!Number.isFinite(s0) || !Number.isFinite(s1)) throw overflowError();
   if (!(s0 > 0)) return 0;
   const ratio = s1 / s0;
   const gamma = 1.1447 * Math.pow(ratio * ratio, 1 / 3);

@@ -13,6 +13,7 @@
  * |rho| is capped at 0.97 (a common guard, so a near-unit-root residual does not ask for a
  * bandwidth of the whole sample), and L at a third of n.
  */
+import { overflowError } from './long-run-variance';
 
 /** Largest |rho| the plug-in uses. */
 export const RHO_CAP = 0.97;
@@ -26,6 +27,7 @@ export function persistentBandwidth(u: ArrayLike<number>): { bandwidth: number; 
     num += u[t] * u[t - 1];
     den += u[t - 1] * u[t - 1];
   }
+  if (!Number.isFinite(num) || !Number.isFinite(den)) throw overflowError();
   const raw = den > 0 ? num / den : 0;
   const rho = Math.max(-RHO_CAP, Math.min(RHO_CAP, raw));
   const alpha = (4 * rho * rho) / ((1 - rho) ** 2 * (1 + rho) ** 2);

@@ -19,9 +19,13 @@
  *   wrong upstream, not a missing observation.
  * - Interior blanks, text, booleans and error values are gaps: refused by default, dropped
  *   and recorded when `skipGaps` is set.
+ * - A value more than 1e100 times the series' typical size is refused, naming its row
+ *   (magnitude-range.ts): its square has no double to live in, whatever the units, and it would
+ *   come out as NaN several steps later. The rule is a ratio, so prices in any unit pass.
  */
 import { MooringInputError } from '../errors';
 import { cellKind, describeCell, isBlankCell } from './cell-kinds';
+import { describeMagnitude, magnitudeOutlier } from './magnitude-range';
 
 /** How to clean one series. */
 export interface CleanOptions {
@@ -151,6 +155,7 @@ export function cleanSeries(cells: readonly unknown[], options: CleanOptions = {
 
   const outValues = k === span ? values : values.slice(0, k);
   if (log) for (let j = 0; j < k; j++) outValues[j] = Math.log(outValues[j]);
+  refuseOverflow(outValues, rows, log, subject, rowLabel);
   return {
     name,
     values: outValues,
@@ -185,6 +190,22 @@ export function endOfFilled(cells: readonly unknown[]): number {
   return end;
 }
 
+/**
+ * Refuses a value too far above the rest to square (magnitude-range.ts): the first such row,
+ * its value as typed, how far out it is, and what would work.
+ */
+function refuseOverflow(values: Float64Array, rows: Int32Array, logged: boolean, subject: (index: number) => string, rowLabel: (index: number) => string): void {
+  const out = magnitudeOutlier(values);
+  if (out === null) return;
+  const shown = logged ? Math.exp(values[out.position]) : values[out.position];
+  const more = out.count > 1 ? ` (${out.count - 1} more row${out.count === 2 ? ' is' : 's are'} as far out)` : '';
+  const i = rows[out.position];
+  throw new MooringInputError(
+    `${subject(i)} is ${describeMagnitude(values[out.position], out.typical)}${logged ? ` in logs (the price is ${formatValue(shown)})` : ''}${more}: ` +
+      'numbers this far apart overflow when the statistics square them, whatever the units. ' +
+      'Correct that cell (a value this far out is a typing, unit or formula error), or clear it and skip the gap.', rowLabel(i));
+}
+
 /** How a non-number cell is treated: a gap, a gap that is never skipped, or numeric text. */
 function gapRefusal(cell: unknown): 'gap' | 'always' | 'numericText' {
   const kind = cellKind(cell);
@@ -202,7 +223,10 @@ function checkedMinLength(value: number | undefined): number {
 /** A value for a message: as typed when short, else to 10 significant digits. */
 export function formatValue(v: number): string {
   const s = String(v);
-  return s.length <= 12 ? s : String(Number(v.toPrecision(10)));
+  if (s.length <= 12) return s;
+  // Read back through Number only without an exponent: 1.797693135e+308 would round to Infinity.
+  const p = v.toPrecision(10);
+  return p.includes('e') ? p.replace(/\.?0+e/, 'e') : String(Number(p));
 }
 
 function capitalise(text: string): string {

@@ -78,7 +78,7 @@ export function spreadCell(y: unknown, x: unknown, beta: unknown, prep?: unknown
   const given = decimalValue('beta', beta, 'the hedge ratio: units of x per unit of y');
   const pair = pairOf(y, x, prep);
   const fit = given === undefined ? olsHedgeRatio(pair.y.values, pair.x.values) : { beta: given, intercept: 0 };
-  const values = spreadSeries(pair.y.values, pair.x.values, fit.beta, fit.intercept, { y: 'y', x: 'x' });
+  const values = spreadSeries(pair.y.values, pair.x.values, fit.beta, fit.intercept, { y: 'y', x: 'x', rowLabel: (t) => pair.y.rowLabel(pair.y.rows[t]) });
   return spill(spillByRow(values, pair.y.rows, 'The spread'), pair.orientation);
 }
 
