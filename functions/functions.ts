@@ -185,11 +185,12 @@ export function spread(y: any[][], x: any[][], beta?: any, prep?: any): any[][] 
  * @helpurl https://localhost:3000/docs/functions.md#halflife
  * @param y A spread, or the prices of the series on the left of the relation: one column or one row.
  * @param [x] Prices of the other series, on the same rows as y. Default: none, when y is already a spread.
+ * @param [show] value (the half-life), low or high (an end of its 95% interval) or all (a labelled table). Default value.
  * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
- * @returns The half-life in rows (days for daily prices).
+ * @returns The half-life in rows (days for daily prices), an end of its 95% interval, or the table.
  */
-export function halflife(y: any[][], x?: any[][], prep?: any): number {
-  return answer(() => halfLifeCell(y, x, prep));
+export function halflife(y: any[][], x?: any[][], show?: any, prep?: any): any[][] {
+  return answer(() => halfLifeCell(y, x, show, prep));
 }
 
 /**

@@ -13,6 +13,7 @@ import { formatCoefficient, formatPeriods, formatShareClosed } from '../cointegr
 import { pText } from '../causality/causality-wording';
 import type { Deterministic } from '../result';
 import { HALF_LIFE_DEFINITION, type PairSpread } from '../spread/pair-spread';
+import { halfLifeIntervalJson } from '../spread/half-life-interval';
 import { rollingZScore, zScore } from '../spread/z-score';
 import type { AdjustmentReport, AdjustmentSide, SpreadReport } from './pair-types';
 import { finiteOrNull } from './test-summary';
@@ -44,7 +45,7 @@ export function adjustmentSection(
   const regressor = side(ecm.x, options.alpha);
   const closes = ar1.halfLife === null
     ? `The spread does not close its gap: ${ar1.note}`
-    : `The spread closes half its gap in about ${formatPeriods(ar1.halfLife, options.period)} (about ${formatShareClosed(ar1.lambda)} of the gap each ${options.period})`;
+    : `The spread closes half its gap in about ${formatPeriods(ar1.halfLife, options.period)}, ${ar1.interval.text} (about ${formatShareClosed(ar1.lambda)} of the gap each ${options.period})`;
   return {
     ecm: {
       lags: ecm.lags,
@@ -55,7 +56,8 @@ export function adjustmentSection(
       ecmHalfLife: ecm.ecmHalfLife,
       ecmHalfLifeNote: ecm.ecmHalfLifeNote ?? null,
     },
-    spreadAr1: { phi: ar1.phi, speed: ar1.lambda, halfLife: ar1.halfLife, halfLifeNote: ar1.note ?? null, definition: HALF_LIFE_DEFINITION },
+    spreadAr1: { phi: ar1.phi, speed: ar1.lambda, halfLife: ar1.halfLife, halfLifeNote: ar1.note ?? null, definition: HALF_LIFE_DEFINITION,
+      halfLifeInterval: halfLifeIntervalJson(ar1.interval) },
     verdict: `${closes}; ${correctorsText(dependent, regressor)}.`,
   };
 }

@@ -7,6 +7,7 @@
 import type { CausalityMethod } from '../causality/choose-causality-test';
 import type { JohansenSummary } from './report-types';
 import type { TestSummary } from './test-summary';
+import type { HalfLifeInterval } from '../spread/half-life-interval';
 
 /** How strong the residual-based evidence of a long-run relation is. */
 export type CointegrationEvidence = 'both-directions' | 'one-direction' | 'none';
@@ -101,6 +102,8 @@ export interface AdjustmentReport {
     halfLifeNote: string | null;
     /** How the half-life is found, in words. */
     definition: string;
+    /** The half-life's 95% interval, with its method in words (spread/half-life-interval.ts). */
+    halfLifeInterval: HalfLifeInterval & { method: string };
   };
   verdict: string;
 }

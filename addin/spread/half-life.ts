@@ -16,6 +16,7 @@ import { MooringInputError } from '../errors';
 import { requireAlignedSeries } from '../cointegration/cointegrating-regression';
 import { formatPeriods, formatShareClosed } from '../cointegration/wording';
 import { adfRegression } from '../unitroot/adf-regression';
+import { halfLifeInterval, type HalfLifeInterval } from './half-life-interval';
 
 export interface HalfLifeAnswer {
   /** Periods for a gap to halve, or null when there is no mean reversion. */
@@ -47,6 +48,8 @@ export interface SpreadHalfLife extends HalfLifeAnswer {
   constant: number;
   /** Rows of the AR(1) regression: T - 1. */
   nobs: number;
+  /** The half-life's 95% interval (half-life-interval.ts). */
+  interval: HalfLifeInterval;
   verdict: string;
 }
 
@@ -56,6 +59,7 @@ export function halfLife(spread: ArrayLike<number>, period = 'period'): SpreadHa
   if (spread.length < 10) throw new MooringInputError(`${spread.length} values are too few for a half-life: it needs at least 10.`);
   const { fit, gamma: lambda, nobs } = adfRegression(spread, 0, 'const');
   const answer = halfLifeFromSpeed(lambda);
+  const interval = halfLifeInterval(lambda, fit.standardErrors[0], spread.length, period);
   const verdict =
     answer.halfLife === null
       ? `The spread shows ${answer.note}.`
@@ -68,6 +72,7 @@ export function halfLife(spread: ArrayLike<number>, period = 'period'): SpreadHa
     tValue: fit.tValues[0],
     constant: fit.coefficients[1],
     nobs,
+    interval,
     verdict,
   };
 }

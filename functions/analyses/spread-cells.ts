@@ -12,7 +12,9 @@ import { rollingZScore, zScore } from '../../addin/spread/z-score';
 import { NoValue } from '../cells/no-value';
 import { readPair, readRelation, readSeries, type Orientation } from '../cells/range-input';
 import { decimalValue, isOmitted, optionWord, prepValue, wholeNumber } from '../options/option-values';
-import { HEDGE_SHOW_WORDS, HEDGE_WORDS, type HedgeWord } from '../options/option-words';
+import { HALF_LIFE_SHOW_WORDS, HEDGE_SHOW_WORDS, HEDGE_WORDS, type HedgeWord } from '../options/option-words';
+import { HALF_LIFE_INTERVAL_METHOD } from '../../addin/spread/half-life-interval';
+import { CAUTION } from '../render/result-rows';
 import { hedgeUnits } from '../../addin/cointegration/hedge-units';
 import { cellNumber, spillByRow } from '../render/cell-number';
 
@@ -82,11 +84,35 @@ export function spreadCell(y: unknown, x: unknown, beta: unknown, prep?: unknown
   return spill(spillByRow(values, pair.y.rows, 'The spread'), pair.orientation);
 }
 
-/** Periods for a gap in the spread to halve (AR(1) of the spread); #N/A when the spread does not revert. */
-export function halfLifeCell(y: unknown, x: unknown, prep?: unknown): number {
+/**
+ * Periods for a gap in the spread to halve (AR(1) of the spread); #N/A when the spread does not
+ * revert. show low / high: an end of its 95% interval (#N/A with the reason where the interval
+ * has no such end); all: the labelled table of the half-life, its interval and the AR(1) fit.
+ */
+export function halfLifeCell(y: unknown, x: unknown, show: unknown, prep?: unknown): (number | string)[][] {
+  const what = optionWord('show', show, HALF_LIFE_SHOW_WORDS, 'value');
   const spread = spreadOf(y, x, prep);
   const answer = halfLife(spread.values);
-  return cellNumber(answer.halfLife, 'The half-life', answer.halfLife === null ? `No half-life: ${answer.note}.` : undefined);
+  const { interval } = answer;
+  const noHalfLife = answer.halfLife === null ? `No half-life: ${answer.note}.` : undefined;
+  if (what === 'value') return [[cellNumber(answer.halfLife, 'The half-life', noHalfLife)]];
+  if (what === 'low') return [[cellNumber(interval.low, 'The low end of the half-life\'s interval', `No low end: ${interval.text}.`)]];
+  if (what === 'high') return [[cellNumber(interval.high, 'The high end of the half-life\'s interval', `No high end: ${interval.text}.`)]];
+  const orText = (v: number | null, why: string): number | string => (v === null ? why : v);
+  return [
+    ['Half-life (periods)', orText(answer.halfLife, answer.note ?? 'none')],
+    [`Low end, ${interval.level * 100}% interval (periods)`, orText(interval.low, 'none: no reversion throughout')],
+    [`High end, ${interval.level * 100}% interval (periods)`, orText(interval.high, 'none: the interval reaches no reversion')],
+    ['The interval in words', interval.text],
+    ['Speed of adjustment (lambda)', answer.lambda],
+    ['Its standard error', answer.standardError],
+    ['Speed, low end of its interval', interval.speedLow],
+    ['Speed, high end of its interval', interval.speedHigh],
+    ['AR(1) coefficient (1 + lambda)', answer.phi],
+    ['Rows of the AR(1) regression', answer.nobs],
+    ['How the interval is found', HALF_LIFE_INTERVAL_METHOD],
+    ['Caution', CAUTION],
+  ];
 }
 
 /** z-scores of the spread (or of y), over the whole sample or a trailing window. */

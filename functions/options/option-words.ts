@@ -44,5 +44,8 @@ export const SCREEN_SHOW_WORDS = ['list', 'matrix', 'adjusted'] as const;
 export type ScreenShow = (typeof SCREEN_SHOW_WORDS)[number];
 
 /** What MOOR.ROLLING spills: every statistic, or one of them. */
+/** What MOOR.HALFLIFE returns: the half-life, an end of its 95% interval, or the labelled table. */
+export const HALF_LIFE_SHOW_WORDS = ['value', 'low', 'high', 'all'] as const;
+
 export const ROLLING_SHOW_WORDS = ['all', 'pvalue', 'beta', 'halflife'] as const;
 export type RollingShow = (typeof ROLLING_SHOW_WORDS)[number];

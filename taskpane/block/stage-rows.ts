@@ -122,8 +122,12 @@ export function lineStage(g: BlockGrid, c: StageContext): void {
   const critical = normalQuantile(1 - alpha / 2);
   numberRow(g, 'Is that pull significant? t-value of the speed', { formula: `=MOOR.ECM(${y},${x},"aic","stat",${c.prep})` }, NUMBER_FORMAT.statistic,
     (cell) => pullReading(cell, critical, alpha), `significant when at or below -${critical.toFixed(2)} (two-sided, normal approximation)`);
-  numberRow(g, 'Does the spread revert? Half-life', { formula: `=MOOR.HALFLIFE(${y},${x},${c.prep})` }, periodsFormat(period),
+  numberRow(g, 'Does the spread revert? Half-life', { formula: `=MOOR.HALFLIFE(${y},${x},"value",${c.prep})` }, periodsFormat(period),
     (cell) => halfLifeReading(cell, period), `${period}s for a gap in the spread to halve, from its AR(1) coefficient`);
+  numberRow(g, 'Half-life, low end of its 95% interval', { formula: `=MOOR.HALFLIFE(${y},${x},"low",${c.prep})` }, periodsFormat(period), null,
+    'the shortest half-life the data allow: the speed\'s 95% interval, corrected for its small-sample bias, carried through the half-life');
+  numberRow(g, 'Half-life, high end of its 95% interval', { formula: `=MOOR.HALFLIFE(${y},${x},"high",${c.prep})` }, periodsFormat(period), null,
+    'the longest; #N/A when the interval reaches no reversion (no upper bound): the message on the cell says so');
   numberRow(g, 'Is the spread stretched now? Latest z-score', { formula: `=INDEX(${c.zSpill}#,ROWS(${c.zSpill}#))` }, NUMBER_FORMAT.statistic,
     stretchReading, 'standard deviations from its mean on the last row, over the whole sample');
 }

@@ -21,6 +21,7 @@ import type { PairReport } from '../../addin/report/pair-types';
 import { relationStepView, type RelationStepView } from '../../taskpane/ui/views/relation-view';
 import { COLUMN, DEMO_CSV, demoReport } from '../pane/demo-reports';
 import { runWith } from './cli-harness';
+import * as moor from '../../functions/functions';
 
 const files = { 'd.csv': DEMO_CSV };
 const PAIR = ['--y', 'DockDiesel', '--x', 'GateGasoil'];
@@ -133,6 +134,66 @@ describe('the half-life of the pair: one definition, one number', () => {
     expect(fact?.value).toBe(`${life.toFixed(1)} days`);
     const labels = pane.pullFacts.map((f) => f.label).filter((l) => /half-life/i.test(l));
     expect(new Set(labels).size).toBe(labels.length);
+  });
+});
+
+describe("the half-life's 95% interval: one definition, one pair of numbers", () => {
+  /** The interval in closed form: the speed and its standard error from sample moments, Kendall's centre, the ends mapped. */
+  function independentInterval(y: readonly number[], x: readonly number[]): { low: number; high: number } {
+    const line = slopeOf(y, x);
+    const s = y.map((v, i) => v - line.intercept - line.slope * x[i]);
+    const lagged = s.slice(0, -1);
+    const change = s.slice(1).map((v, i) => v - s[i]);
+    const fit = slopeOf(change, lagged);
+    const n = change.length;
+    const ml = mean(lagged);
+    const rss = change.reduce((a, d, i) => a + (d - fit.intercept - fit.slope * lagged[i]) ** 2, 0);
+    const sxx = lagged.reduce((a, v) => a + (v - ml) ** 2, 0);
+    const se = Math.sqrt(rss / (n - 2) / sxx);
+    const phi = 1 + fit.slope;
+    const centre = phi + (1 + 3 * phi) / s.length; // Kendall (1954), from memory
+    const life = (p: number) => Math.log(2) / -Math.log(p);
+    return { low: life(centre - 1.959963984540054 * se), high: life(centre + 1.959963984540054 * se) };
+  }
+
+  it('ecm, spread and report --json, the pane and MOOR.HALFLIFE low/high agree (1e-12), and match the closed form (1e-7)', () => {
+    const ecm = json('ecm', 'd.csv', ...PAIR, '--log', '--period', 'day');
+    const spread = json('spread', 'd.csv', ...PAIR, '--log', '--period', 'day');
+    const fromReport = reportPair.adjustment!.spreadAr1.halfLifeInterval;
+    expect(fromReport.level).toBe(0.95);
+    for (const other of [ecm.halfLifeInterval, spread.halfLifeInterval, paneReport.pairs[0].adjustment!.spreadAr1.halfLifeInterval]) {
+      expect(relative(other.low, fromReport.low!)).toBeLessThan(1e-12);
+      expect(relative(other.high, fromReport.high!)).toBeLessThan(1e-12);
+      expect(other.text).toBe(fromReport.text);
+    }
+    const column = (v: number[]) => v.map((a) => [a]);
+    expect(relative(moor.halflife(column(dieselPrices), column(gasoilPrices), 'low', 'log')[0][0] as number, fromReport.low!)).toBeLessThan(1e-12);
+    expect(relative(moor.halflife(column(dieselPrices), column(gasoilPrices), 'high', 'log')[0][0] as number, fromReport.high!)).toBeLessThan(1e-12);
+    const closed = independentInterval(lnDiesel, lnGasoil);
+    expect(relative(fromReport.low!, closed.low)).toBeLessThan(1e-7);
+    expect(relative(fromReport.high!, closed.high)).toBeLessThan(1e-7);
+    const life = reportPair.adjustment!.spreadAr1.halfLife as number;
+    expect(fromReport.low!).toBeLessThan(life);
+    expect(fromReport.high!).toBeGreaterThan(life);
+  });
+
+  it('the words stand beside the half-life in the verdict, the terminal, the HTML and the pane', () => {
+    const words = reportPair.adjustment!.spreadAr1.halfLifeInterval.text;
+    expect(words).toMatch(/^likely between \d+(\.\d)? and \d+(\.\d)? days$/);
+    expect(reportPair.adjustment!.verdict).toMatch(new RegExp(`in about \\d+(\\.\\d)? days, ${words}`));
+    expect(run('report', 'd.csv', '--series', 'GateGasoil,DockDiesel', '--log').stdout.replace(/\s+/g, ' ')).toContain(`Half-life interval ${words}`);
+    expect(run('ecm', 'd.csv', ...PAIR, '--log', '--period', 'day').stdout.replace(/\s+/g, ' ')).toContain(`Half-life interval ${words}`);
+    expect(run('spread', 'd.csv', ...PAIR, '--log', '--period', 'day').stdout.replace(/\s+/g, ' ')).toContain(`Half-life interval ${words}`);
+    expect(pane.pullVerdict).toContain(words);
+    expect(pane.pullFacts.find((f) => f.label.startsWith('How sure'))?.value).toBe(words);
+    const dir = mkdtempSync(join(tmpdir(), 'mooring-interval-'));
+    try {
+      const out = join(dir, 'r.html');
+      expect(run('report', 'd.csv', '--series', 'GateGasoil,DockDiesel', '--log', '--out', out).code).toBe(0);
+      expect(readFileSync(out, 'utf8')).toContain(`Half-life interval: ${words}`);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 });
 

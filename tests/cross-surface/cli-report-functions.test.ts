@@ -133,7 +133,7 @@ describe('the command line, the report and the formulas agree on one analysis', 
       const ecm = json(csv, ['ecm', '--y', y, '--x', x, ...common]);
       const spread = json(csv, ['spread', '--y', y, '--x', x, ...common]);
       same('speed of adjustment', [pair.adjustment.ecm.dependent.speed, ecm.equations.y.alpha, headline(moor.ecm(yc, xc, 'aic', null, prep))]);
-      same('half-life', [pair.adjustment.spreadAr1.halfLife, ecm.halfLife, spread.halfLife, moor.halflife(yc, xc, prep)]);
+      same('half-life', [pair.adjustment.spreadAr1.halfLife, ecm.halfLife, spread.halfLife, moor.halflife(yc, xc, null, prep)[0][0]]);
       same('latest z-score', [
         pair.spread.latestZ,
         spread.zscore[spread.zscore.length - 1],

@@ -47,7 +47,7 @@ const SURFACE: Record<string, { args: string[]; spills: boolean }> = {
   RANK: { args: ['block[]', 'lags?', 'deterministic?', 'alpha?', 'prep?'], spills: false },
   HEDGE: { args: ['y[]', 'x[]', 'method?', 'show?', 'prep?'], spills: false },
   SPREAD: { args: ['y[]', 'x[]', 'beta?', 'prep?'], spills: true },
-  HALFLIFE: { args: ['y[]', 'x[]?', 'prep?'], spills: false },
+  HALFLIFE: { args: ['y[]', 'x[]?', 'show?', 'prep?'], spills: true },
   ZSCORE: { args: ['y[]', 'x[]?', 'window?', 'prep?'], spills: true },
   ECM: { args: ['y[]', 'x[]', 'lags?', 'show?', 'prep?'], spills: true },
   GRANGER: { args: ['cause[]', 'effect[]', 'lags?', 'method?', 'show?', 'prep?'], spills: true },
@@ -80,7 +80,7 @@ describe('dist/functions.json', () => {
           expect(p.description!.length, p.name).toBeLessThanOrEqual(128);
           if (p.optional) expect(p.description, p.name).toMatch(/Default/);
         }
-        expect(f.helpUrl).toBe(`https://localhost:3000/docs/functions.md#${f.name.toLowerCase()}`);
+        expect(f.helpUrl).toBe(`https://localhost:3000/docs/functions.html#${f.name.toLowerCase()}`);
       });
       it('takes ranges untyped (any, matrix), so blanks stay blanks and errors reach the cleaner', () => {
         for (const p of f.parameters) expect(p.type ?? 'any', p.name).toBe('any');

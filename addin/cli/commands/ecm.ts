@@ -2,6 +2,8 @@
 import { errorCorrectionModel, type AdjustmentEquation } from '../../cointegration/error-correction';
 import { MooringInputError } from '../../errors';
 import { HALF_LIFE_DEFINITION, pairSpread, SPREAD_LINE_TEXT } from '../../spread/pair-spread';
+import { HALF_LIFE_INTERVAL_METHOD, halfLifeIntervalJson } from '../../spread/half-life-interval';
+import { rowPeriod } from '../../report/row-period';
 import type { Command } from '../command';
 import { countOrWordValue, wholeNumberValue } from '../option-values';
 import { bullet, formatPValue, formatStatistic, heading, labelled } from '../render/format';
@@ -52,7 +54,7 @@ export const ecmCommand: Command = {
     if (typeof lags === 'number' && maxLags !== undefined) {
       throw new MooringInputError(`--max-lags applies only with --lags aic; with --lags ${lags} leave it out.`);
     }
-    const period = context.args.values.get('period')?.trim() || undefined;
+    const period = context.args.values.get('period')?.trim() || (context.period && context.period.unit !== 'rows' ? context.period.period : undefined);
     const input = relationFromContext(context, true);
     const names = { y: input.names.y, x: input.names.xs[0] };
     const y = input.y.series.values;
@@ -77,6 +79,7 @@ export const ecmCommand: Command = {
       '',
       labelled('Half-life', `${life.halfLife === null ? (life.note ?? 'none') : `${formatStatistic(life.halfLife)} ${unit}s`}: ${HALF_LIFE_DEFINITION} ` +
         `(${names.y} - ${formatStatistic(spread.line.intercept)} - ${formatStatistic(spread.line.beta)} ${names.x})`),
+      labelled('Half-life interval', `${life.interval.text} (${HALF_LIFE_INTERVAL_METHOD})`),
       labelled('ECM half-life', result.ecmHalfLife === null ? (result.ecmHalfLifeNote ?? 'none') : `${formatStatistic(result.ecmHalfLife)} ${unit}s: implied by the error-correction model, both prices adjusting`),
       labelled('Verdict', result.verdict),
     ];
@@ -101,8 +104,10 @@ export const ecmCommand: Command = {
         equations: { y: equationJson(result.y), x: equationJson(result.x) },
         combinedSpeed: result.combinedSpeed,
         halfLife: life.halfLife,
+        halfLifeUnit: rowPeriod(null, unit).unit,
         halfLifeNote: life.note ?? null,
         halfLifeDefinition: HALF_LIFE_DEFINITION,
+        halfLifeInterval: halfLifeIntervalJson(life.interval),
         spreadLine: { ...spread.line, text: SPREAD_LINE_TEXT },
         ecmHalfLife: result.ecmHalfLife,
         ecmHalfLifeNote: result.ecmHalfLifeNote ?? null,

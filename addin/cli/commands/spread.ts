@@ -3,8 +3,10 @@ import { dynamicOlsHedgeRatio, reverseOlsHedgeRatio, totalLeastSquaresHedgeRatio
 import { MooringInputError } from '../../errors';
 import { halfLife } from '../../spread/half-life';
 import { HALF_LIFE_DEFINITION, pairSpread } from '../../spread/pair-spread';
+import { HALF_LIFE_INTERVAL_METHOD, halfLifeIntervalJson } from '../../spread/half-life-interval';
 import { spreadSeries } from '../../spread/spread-series';
 import { rollingZScore, zScore } from '../../spread/z-score';
+import { rowPeriod } from '../../report/row-period';
 import type { Command } from '../command';
 import { choiceValue, wholeNumberValue } from '../option-values';
 import { formatStatistic, heading, labelled } from '../render/format';
@@ -59,7 +61,7 @@ export const spreadCommand: Command = {
     if (givenBeta !== undefined && hedgeWord !== undefined) throw new MooringInputError('Give either --beta or --hedge, not both: --beta fixes the hedge ratio, --hedge estimates it.');
     if (givenIntercept !== undefined && givenBeta === undefined) throw new MooringInputError('--intercept goes with --beta; without --beta the hedge estimator gives the intercept.');
     const window = wholeNumberValue('window', context.args.values.get('window'), 'rows');
-    const period = context.args.values.get('period')?.trim() || 'period';
+    const period = context.args.values.get('period')?.trim() || (context.period && context.period.unit !== 'rows' ? context.period.period : 'period');
     const input = relationFromContext(context, true);
     const y = input.y.series.values;
     const x = input.xs[0].series.values;
@@ -94,6 +96,7 @@ export const spreadCommand: Command = {
       labelled('Mean', formatStatistic(z.mean)),
       labelled('Standard deviation', formatStatistic(z.standardDeviation)),
       labelled('Half-life', `${life.halfLife === null ? (life.note ?? 'none') : `${formatStatistic(life.halfLife)} ${period}s${life.note ? ` (${life.note})` : ''}`}: ${definition}`),
+      labelled('Half-life interval', `${life.interval.text} (${HALF_LIFE_INTERVAL_METHOD})`),
       labelled('Verdict', life.verdict),
       labelled('Latest value', `${formatStatistic(values[last])}${when}: z-score ${formatStatistic(z.values[last])} over the whole sample` +
         (rolling ? `, ${formatStatistic(rolling[last])} over the last ${window} rows` : '')),
@@ -110,8 +113,10 @@ export const spreadCommand: Command = {
         intercept: line.intercept,
         values,
         halfLife: life.halfLife,
+        halfLifeUnit: rowPeriod(null, period).unit,
         halfLifeNote: life.note ?? null,
         halfLifeDefinition: definition,
+        halfLifeInterval: halfLifeIntervalJson(life.interval),
         lambda: life.lambda,
         verdict: life.verdict,
         mean: z.mean,

@@ -35,7 +35,7 @@ function keyFigures(pair: PairReport, period: string): string {
     items.push(figure(pair.relation.slopeMeaning === 'elasticity' ? 'Units to hold at the latest prices' : 'Units to hold', formatStatistic(pair.relation.dynamicOls.hedgeUnits)));
   }
   const ar1 = pair.adjustment?.spreadAr1;
-  if (ar1) items.push(figure('Half-life of the spread', ar1.halfLife === null ? (ar1.halfLifeNote ?? 'none') : `${fixed1(ar1.halfLife)} ${period}s (AR(1) of the spread on the least-squares line)`));
+  if (ar1) items.push(figure('Half-life of the spread', ar1.halfLife === null ? (ar1.halfLifeNote ?? 'none') : `${fixed1(ar1.halfLife)} ${period}s (AR(1) of the spread on the least-squares line), ${ar1.halfLifeInterval.text}`));
   if (pair.spread) items.push(figure(`Spread now (${pair.spread.latestDate ?? pair.spread.latestRow})`, `z = ${formatStatistic(pair.spread.latestZ)}`));
   if (pair.leadLag) items.push(figure('Leader', pair.leadLag.leader ?? (pair.leadLag.pattern === 'both-ways' ? 'feedback both ways' : 'none found')));
   return items.length === 0 ? '' : `<dl class="figures">${items.join('')}</dl>`;
@@ -94,6 +94,7 @@ function details(pair: PairReport, report: DiagnosticReport): string {
       htmlTable(['series', 'speed', 'std. error', 'p-value', 'closes the gap'], [side(adj.ecm.dependent), side(adj.ecm.regressor)]) +
       el('p', `Half-life: ${adj.spreadAr1.halfLife === null ? (adj.spreadAr1.halfLifeNote ?? 'none') : `${fixed1(adj.spreadAr1.halfLife)} ${report.data.period}s`}, ` +
         `${adj.spreadAr1.definition} (AR(1) coefficient ${formatStatistic(adj.spreadAr1.phi)}). ` +
+        `Half-life interval: ${adj.spreadAr1.halfLifeInterval.text} (${adj.spreadAr1.halfLifeInterval.method}). ` +
         `Half-life implied by the error-correction model, both prices adjusting: ${adj.ecm.ecmHalfLife === null ? (adj.ecm.ecmHalfLifeNote ?? 'none') : `${fixed1(adj.ecm.ecmHalfLife)} ${report.data.period}s`}.`, 'note'));
   }
   return out.join('\n');

@@ -56,6 +56,7 @@ export function renderPairTerminal(pair: PairReport, report: DiagnosticReport): 
   const adj = pair.adjustment;
   if (adj) {
     out.push(labelled('Half-life', `${periodsText(adj.spreadAr1.halfLife, adj.spreadAr1.halfLifeNote, period)}: ${adj.spreadAr1.definition} (AR(1) coefficient ${formatStatistic(adj.spreadAr1.phi)})`));
+    out.push(labelled('Half-life interval', `${adj.spreadAr1.halfLifeInterval.text} (${adj.spreadAr1.halfLifeInterval.method})`));
     out.push(labelled('ECM half-life', `${periodsText(adj.ecm.ecmHalfLife, adj.ecm.ecmHalfLifeNote, period)}: implied by the error-correction model, both prices adjusting`));
     const side = (s: typeof adj.ecm.dependent): string => `${s.series} ${fixed4(s.speed)} (p ${formatPValue(s.pValue)}${s.corrects ? ', closes the gap' : ''})`;
     out.push(labelled('Speed of adjustment', `${side(adj.ecm.dependent)}; ${side(adj.ecm.regressor)}`));

@@ -83,6 +83,7 @@ export function relationStepView(report: DiagnosticReport, pair: PairReport): Re
   const pullFacts: FactView[] = a
     ? [
         { label: "Half-life of the spread (AR(1) of the spread on the plain least-squares line)", value: halfLifeText(a.spreadAr1.halfLife, a.spreadAr1.halfLifeNote, period) },
+        { label: 'How sure (95% interval of the half-life)', value: a.spreadAr1.halfLifeInterval.text },
         { label: 'Half-life implied by the error-correction model, both prices adjusting', value: halfLifeText(a.ecm.ecmHalfLife, a.ecm.ecmHalfLifeNote, period) },
         ...[a.ecm.dependent, a.ecm.regressor].flatMap((side) => [
           { label: `${side.series} moves to close the gap?`, value: side.corrects ? 'Yes' : 'No' },
