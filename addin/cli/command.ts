@@ -5,6 +5,7 @@
  * choosing terminal or JSON output, and turning errors into exit codes.
  */
 import type { CsvTable } from '../csv/read-csv';
+import type { RowPeriod } from '../report/row-period';
 import type { OptionSpec, ParsedArguments } from './arguments';
 
 /** Options every command takes. */
@@ -13,6 +14,13 @@ export const COMMON_OPTIONS: readonly OptionSpec[] = [
   { name: 'log', help: 'use natural logs of the values (every value must be positive)' },
   { name: 'skip-gaps', help: 'drop blank, text and error cells inside the series instead of stopping' },
   { name: 'json', help: 'print one JSON object instead of the readable report' },
+  { name: 'from', value: 'DATE', help: 'first date of the sample, such as 2023-01-02 (included)' },
+  { name: 'to', value: 'DATE', help: 'last date of the sample (included)' },
+  { name: 'dates', value: 'NAME[,NAME]', help: 'the date column(s), when not found by themselves (spreadsheet day numbers included)' },
+  { name: 'date-order', value: 'dmy|mdy', help: 'read dates such as 03/04/2024 as day/month/year or month/day/year, when the data do not tell' },
+  { name: 'fill-forward', value: 'N', help: 'when joining calendars, carry a price forward over at most N missing dates (default 0: only dates every series has)' },
+  { name: 'delimiter', value: 'comma|semicolon|tab', help: 'what separates the fields (default: found from the first line)' },
+  { name: 'decimal', value: 'point|comma', help: 'the decimal mark of the numbers (default: found from the file)' },
 ];
 
 /** The common options, read. */
@@ -26,11 +34,18 @@ export interface CommonOptions {
 /** What a command receives: the file, its table, its arguments. */
 export interface CommandContext {
   command: string;
-  /** The file name as given on the command line. */
+  /** The file name as given on the command line (several joined by ' + '). */
   file: string;
+  /** The rows of the file (or of the files, joined on their dates), oldest first, cut to --from/--to. */
   table: CsvTable;
   args: ParsedArguments;
   common: CommonOptions;
+  /** What was done to the rows before the command (dialect, order, join, window), in words. */
+  notices?: string[];
+  /** What one row is, found once from the dates: the unit of every half-life, lag and window. */
+  period?: RowPeriod;
+  /** The window of rows as the shared preparation words ("from row 261, to row 520"), '' for all rows. */
+  window?: string;
 }
 
 /** What a command returns: both renderings; the runner prints one. */

@@ -6,12 +6,15 @@
  * Everything written passes through terminal-text.ts first, so no control character from the
  * data reaches the terminal raw.
  */
+import { decimalChoice, delimiterChoice, type DialectChoice } from '../csv/dialect';
 import { readCsv, type CsvTable } from '../csv/read-csv';
 import { isMooringInputError, MooringInputError } from '../errors';
 import { closestWord, parseArguments } from './arguments';
 import { COMMON_OPTIONS, type Command, type CommonOptions } from './command';
 import { commandHelp, overallHelp } from './help';
+import { preparedInput } from './prepared-input';
 import { CAUTIONS, renderCautions } from './render/cautions';
+import { bullet, heading } from './render/format';
 import { jsonText, terminalText } from './render/terminal-text';
 
 /** Where the runner reads and writes. */
@@ -68,24 +71,28 @@ function dispatch(argv: readonly string[], io: CliIo, commands: readonly Command
   if (args.positionals.length === 0) {
     throw new MooringInputError(`${command.name} needs a CSV file: ${command.usage}.`);
   }
-  if (args.positionals.length > 1) {
-    throw new MooringInputError(
-      `${command.name} takes one CSV file but got ${args.positionals.length} (${args.positionals.join(', ')}); put quotes around a name with spaces.`);
-  }
-  const file = args.positionals[0];
+  const files = args.positionals;
+  const file = files.join(' + ');
   const common: CommonOptions = {
     series: args.values.get('series'),
     log: args.switches.has('log'),
     skipGaps: args.switches.has('skip-gaps'),
     json: args.switches.has('json'),
   };
-  const table = readTable(file, io);
-  const output = command.run({ command: command.name, file, table, args, common });
+  const dialect = { delimiter: delimiterChoice(args.values.get('delimiter')), decimal: decimalChoice(args.values.get('decimal')) };
+  const input = preparedInput(files.map((f) => ({ file: f, table: readTable(f, io, dialect) })), args);
+  const output = command.run({ command: command.name, file, table: input.table, args, common, notices: input.notices, period: input.period, window: input.window });
   if (common.json) {
-    const object = { command: command.name, file, ...output.json, cautions: CAUTIONS.slice() };
+    const { json } = output;
+    const warnings = Array.isArray(json.warnings) ? [...input.notices, ...(json.warnings as unknown[])] : input.notices;
+    const object = {
+      command: command.name, file, ...json, warnings,
+      halfLifeUnit: json.halfLifeUnit ?? input.period.unit, spacing: input.period.spacing, cautions: CAUTIONS.slice(),
+    };
     io.stdout(`${jsonText(JSON.stringify(object, jsonValue, 2))}\n`);
   } else {
-    io.stdout(`${terminalText(output.terminal)}\n\n${renderCautions()}\n`);
+    const data = input.notices.length > 0 ? `${heading('About the data')}\n${input.notices.map((n) => bullet(n, 2, '!')).join('\n')}\n\n` : '';
+    io.stdout(`${terminalText(data + output.terminal)}\n\n${renderCautions()}\n`);
   }
   return EXIT_OK;
 }
@@ -98,7 +105,7 @@ function findCommand(word: string, commands: readonly Command[]): Command {
   throw new MooringInputError(`Unknown command '${word}'${hint}; the commands are ${commands.map((c) => c.name).join(', ')}.`);
 }
 
-function readTable(file: string, io: CliIo): CsvTable {
+function readTable(file: string, io: CliIo, dialect: DialectChoice): CsvTable {
   let text: string;
   try {
     text = io.readFile(file);
@@ -106,7 +113,7 @@ function readTable(file: string, io: CliIo): CsvTable {
     throw new MooringInputError(`Cannot read '${file}': ${readFailure(e)}.`);
   }
   try {
-    return readCsv(text);
+    return readCsv(text, dialect);
   } catch (e) {
     if (isMooringInputError(e)) throw new MooringInputError(`${file}: ${e.message}`, e.where);
     throw e;

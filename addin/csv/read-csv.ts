@@ -1,5 +1,8 @@
 /**
- * Reads a comma-separated file into named text columns.
+ * Reads a comma-separated file into named text columns. Semicolon- and tab-separated files are
+ * read too (found from the header line, or forced), with decimal commas where the file uses
+ * them (see dialect.ts); numbers are then rewritten with decimal points, so later steps see one
+ * dialect, and the table carries a notice naming the dialect read.
  *
  * Grammar: RFC 4180 (Shafranovich 2005): fields separated by commas, records by CRLF, a field
  * in double quotes may hold commas, line breaks and doubled quotes (""). Also accepted: LF or
@@ -13,6 +16,7 @@
  */
 import { MooringInputError } from '../errors';
 import { findDateColumn } from './date-column';
+import { decimalCommaField, describeDialect, findDialect, toPointDecimal, type CsvDialect, type DialectChoice } from './dialect';
 
 /** A CSV file as named text columns. */
 export interface CsvTable {
@@ -26,22 +30,29 @@ export interface CsvTable {
   dateIndex: number;
   /** The line on which each data record starts (the header is line 1). */
   lines: number[];
+  /** The field separator and decimal mark the file was read with. */
+  dialect?: CsvDialect;
+  /** What a reader should be told about how the file was read (a dialect other than commas and points). */
+  notices?: string[];
+  /** A label per data record, when the records came from several files (see addin/csv/dated-table.ts). */
+  rowLabels?: string[];
 }
 
 /** Parses CSV text; see the file comment for what is accepted and what is refused. */
-export function readCsv(text: string): CsvTable {
+export function readCsv(text: string, choice: DialectChoice = {}): CsvTable {
   if (typeof text !== 'string') throw new MooringInputError('The CSV input is not text.');
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
-  const { records, lines } = parseRecords(body);
+  const dialect = findDialect(body, choice);
+  const { records, lines } = parseRecords(body, dialect.delimiter.charCodeAt(0));
   while (records.length > 0 && isBlankRecord(records[records.length - 1])) {
     records.pop();
     lines.pop();
   }
   if (records.length === 0) throw new MooringInputError('The file is empty: a CSV needs a header line and at least one line of data.');
   const rawHeader = records[0];
-  if (rawHeader.length === 1 && (rawHeader[0].includes(';') || rawHeader[0].includes('\t'))) {
+  if (dialect.delimiter === ',' && rawHeader.length === 1 && (rawHeader[0].includes(';') || rawHeader[0].includes('\t'))) {
     const sep = rawHeader[0].includes(';') ? 'semicolons' : 'tabs';
-    throw new MooringInputError(`Line 1 is separated by ${sep}, not commas: save the file as comma-separated values.`);
+    throw new MooringInputError(`Line 1 is separated by ${sep}, not commas: give --delimiter ${sep === 'tabs' ? 'tab' : 'semicolon'}, or leave --delimiter out to have it found.`);
   }
   const header = rawHeader.map((h, j) => h.trim() || `column ${j + 1}`);
   const width = header.length;
@@ -62,9 +73,12 @@ export function readCsv(text: string): CsvTable {
     if (width > 1 && isBlankRecord(rec)) {
       throw new MooringInputError(`Line ${line} is empty but lies between data lines${more}: delete it, or write the commas of a row left blank on purpose.`, `line ${line}`);
     }
-    throw new MooringInputError(
-      `Line ${line} has ${rec.length} field${rec.length === 1 ? '' : 's'} but the header has ${width}${more}: ` +
-        'look for a missing or extra comma (text that contains commas must be in double quotes).', `line ${line}`);
+    const sep = dialect.delimiter === ',' ? 'comma' : dialect.delimiter === ';' ? 'semicolon' : 'tab';
+    const split = dialect.delimiter === ',' && rec.length > width && rec.some((f, j) => j > 0 && /^\d+$/.test(f.trim()) && /\d$/.test(rec[j - 1].trim()));
+    const hint = split
+      ? 'the numbers look like decimal commas (such as 1,5) splitting the fields: save the file with semicolons between fields, or quote the numbers and give --decimal comma.'
+      : `look for a missing or extra ${sep} (text that contains ${sep}s must be in double quotes).`;
+    throw new MooringInputError(`Line ${line} has ${rec.length} field${rec.length === 1 ? '' : 's'} but the header has ${width}${more}: ${hint}`, `line ${line}`);
   }
 
   const columns: string[][] = header.map(() => new Array<string>(records.length - 1));
@@ -73,7 +87,22 @@ export function readCsv(text: string): CsvTable {
     for (let j = 0; j < width; j++) columns[j][r - 1] = rec[j];
   }
   const dateIndex = findDateColumn(header, columns);
-  return { header, columns, dateColumn: dateIndex >= 0 ? header[dateIndex] : null, dateIndex, lines: lines.slice(1) };
+  const dataLines = lines.slice(1);
+  columns.forEach((fields, j) => {
+    if (j === dateIndex) return;
+    if (dialect.decimal === ',') {
+      for (let i = 0; i < fields.length; i++) fields[i] = toPointDecimal(fields[i]);
+      return;
+    }
+    const at = fields.findIndex(decimalCommaField);
+    if (at >= 0) {
+      throw new MooringInputError(
+        `Line ${dataLines[at]} of ${header[j]} holds '${fields[at].trim()}', a number with a decimal comma, in a file read with decimal points: ` +
+          `give --decimal comma (and --delimiter semicolon if the fields are separated by semicolons), or save the file with decimal points.`, `line ${dataLines[at]}`);
+    }
+  });
+  const notices = dialect.delimiter === ',' && dialect.decimal === '.' ? [] : [`Read as ${describeDialect(dialect)}${dialect.found ? ' (found from the file)' : ''}.`];
+  return { header, columns, dateColumn: dateIndex >= 0 ? header[dateIndex] : null, dateIndex, lines: dataLines, dialect, notices };
 }
 
 function isBlankRecord(rec: string[]): boolean {
@@ -81,12 +110,11 @@ function isBlankRecord(rec: string[]): boolean {
 }
 
 const QUOTE = 34;
-const COMMA = 44;
 const LF = 10;
 const CR = 13;
 
-/** Splits text into records of fields, with the starting line of each record. */
-function parseRecords(text: string): { records: string[][]; lines: number[] } {
+/** Splits text into records of fields at the separator (a character code), with the starting line of each record. */
+function parseRecords(text: string, separator: number): { records: string[][]; lines: number[] } {
   const records: string[][] = [];
   const lines: number[] = [];
   const n = text.length;
@@ -121,7 +149,7 @@ function parseRecords(text: string): { records: string[][]; lines: number[] } {
         fields.push(value);
         if (i < n) {
           const c = text.charCodeAt(i);
-          if (c !== COMMA && c !== LF && c !== CR) {
+          if (c !== separator && c !== LF && c !== CR) {
             throw new MooringInputError(`Line ${line} has text after the closing quote of field ${fields.length}: put the whole field inside the quotes.`, `line ${line}`);
           }
         }
@@ -129,12 +157,12 @@ function parseRecords(text: string): { records: string[][]; lines: number[] } {
         const from = i;
         while (i < n) {
           const c = text.charCodeAt(i);
-          if (c === COMMA || c === LF || c === CR) break;
+          if (c === separator || c === LF || c === CR) break;
           i++;
         }
         fields.push(text.slice(from, i));
       }
-      if (i < n && text.charCodeAt(i) === COMMA) {
+      if (i < n && text.charCodeAt(i) === separator) {
         i++;
         continue;
       }

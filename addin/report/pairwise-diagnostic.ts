@@ -53,6 +53,8 @@ export function diagnose(input: DiagnosticInput, options: DiagnosticOptions = {}
     window: checked.window,
     period: period.period,
     periodSource: period.source,
+    halfLifeUnit: period.unit,
+    spacing: period.spacing,
     dropped: checked.dropped,
     rowLabels: checked.rowLabels,
     dates: checked.dates,

@@ -12,6 +12,7 @@ import type { JohansenCase } from '../johansen/johansen';
 import type { PairReport } from './pair-types';
 import type { ScreeningCount } from './report-cautions';
 import type { TestSummary } from './test-summary';
+import type { HalfLifeUnit } from './row-period';
 
 /** Version of the report's shape. */
 export const DIAGNOSTIC_REPORT_VERSION = 1;
@@ -49,6 +50,10 @@ export interface DataSection {
   period: string;
   /** How the period word was found. */
   periodSource: string;
+  /** The unit of every half-life, lag and window of the report: "days", "weeks", ... or "rows". */
+  halfLifeUnit: HalfLifeUnit;
+  /** The spacing of the dates found: "business days", "calendar days", "weeks", ...; "rows" without dates. */
+  spacing: string;
   dropped: DroppedRow[];
   /** Label and date of every observation used, for tables and chart axes. */
   rowLabels: string[];

@@ -17,6 +17,8 @@ import { DEFAULT_MIN_LENGTH, type CleanSeries, type DroppedCell } from './clean-
 export interface AlignOptions {
   /** Fewest shared rows; default 20 (common practice, as in the cleaner). */
   minLength?: number;
+  /** How this surface lets a user skip gaps, for messages (see CleanOptions); default "allow gaps". */
+  skipGapsWords?: string;
 }
 
 /** Aligns two cleaned series by row; see the file comment for the rules. */
@@ -30,7 +32,7 @@ export function alignAll(series: readonly CleanSeries[], options: AlignOptions =
   if (series.length < 2) return series.slice();
   const minLength = options.minLength ?? DEFAULT_MIN_LENGTH;
   if (!series.some((s) => s.gapsSkipped)) {
-    checkSameRows(series);
+    checkSameRows(series, options.skipGapsWords ?? 'allow gaps');
     return series.slice();
   }
   const shared = sharedRows(series);
@@ -42,7 +44,7 @@ export function alignAll(series: readonly CleanSeries[], options: AlignOptions =
   return series.map((s) => keepRows(s, shared, series));
 }
 
-function checkSameRows(series: readonly CleanSeries[]): void {
+function checkSameRows(series: readonly CleanSeries[], gapWords: string): void {
   const first = series[0];
   for (let j = 1; j < series.length; j++) {
     const s = series[j];
@@ -52,12 +54,12 @@ function checkSameRows(series: readonly CleanSeries[]): void {
       const [longer, shorter, by] = n0 > n1 ? [first, s, n0 - n1] : [s, first, n1 - n0];
       throw new MooringInputError(
         `${first.name} has ${n0} values and ${s.name} has ${n1}: ${longer.name} is longer than ${shorter.name} by ${by}; ` +
-          `select ranges covering the same rows, or allow gaps to keep only the rows both have.`);
+          `select ranges covering the same rows, or ${gapWords} to keep only the rows both have.`);
     }
     if (first.rows[0] !== s.rows[0]) {
       throw new MooringInputError(
         `${first.name} starts at ${first.rowLabel(first.rows[0])} but ${s.name} at ${s.rowLabel(s.rows[0])}, so their rows do not line up; ` +
-          `select ranges whose numbers start on the same row, or allow gaps.`);
+          `select ranges whose numbers start on the same row, or ${gapWords}.`);
     }
   }
 }

@@ -21,5 +21,5 @@ export function cleanBlock(columns: readonly (readonly unknown[])[], names: read
     throw new MooringInputError(`${names.length} names were given for ${columns.length} column${columns.length === 1 ? '' : 's'}: give one name per column.`);
   }
   const cleaned = columns.map((cells, j) => cleanSeries(cells, { ...options, name: names[j] ?? `series ${j + 1}` }));
-  return alignAll(cleaned, { minLength: options.minLength });
+  return alignAll(cleaned, { minLength: options.minLength, skipGapsWords: options.skipGapsWords });
 }

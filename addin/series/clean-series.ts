@@ -44,6 +44,11 @@ export interface CleanOptions {
   firstRow?: number;
   /** Label of the cell at a source index, for messages; default `row ${firstRow + index}`. */
   rowLabel?: (index: number) => string;
+  /**
+   * How this surface lets a user skip gaps, for messages: "allow gaps" (the default, the
+   * pane's and the formulas' words) or "give --skip-gaps" on the command line.
+   */
+  skipGapsWords?: string;
 }
 
 /** A cell the cleaner dropped because gaps were allowed. */
@@ -95,6 +100,7 @@ export function cleanSeries(cells: readonly unknown[], options: CleanOptions = {
   const rowLabel = options.rowLabel ?? ((index: number) => `row ${firstRow + index}`);
   const subject = (index: number) => (options.name ? `${name} ${rowLabel(index)}` : capitalise(rowLabel(index)));
   const skipGaps = options.skipGaps === true;
+  const gapWords = options.skipGapsWords ?? 'allow gaps';
   const log = options.log === true;
   if (cells == null || typeof cells.length !== 'number') {
     throw new MooringInputError(`${options.name ?? 'The series'} is not a range of cells: pass a column or a row of prices.`);
@@ -130,8 +136,8 @@ export function cleanSeries(cells: readonly unknown[], options: CleanOptions = {
       const what = describeCell(c);
       const fix = refusal === 'numericText' ? 'convert the column to numbers (numbers stored as text are not read)'
         : refusal === 'always' ? 'correct the calculation that produced it'
-        : i === start && typeof c === 'string' ? 'if it is a header, select only the numbers below it; otherwise clean it or allow gaps'
-        : 'clean it or allow gaps';
+        : i === start && typeof c === 'string' ? `if it is a header, select only the numbers below it; otherwise clean it or ${gapWords}`
+        : `clean it or ${gapWords}`;
       throw new MooringInputError(`${subject(i)} is ${what}: ${fix}.`, rowLabel(i));
     }
     dropped.push({ index: i, row: rowLabel(i), reason: describeCell(c) });

@@ -124,7 +124,7 @@ describe('mooring: bad input through the real commands', () => {
     ['a negative lag count', ['adf', 'p.csv', '--series', 'Walk', '--lags', '-1'], "mooring: --lags must be a whole number of lagged differences (0, 1, 2, ...) or one of aic, bic, tstat, not '-1'."],
     ['a maximum with fixed lags', ['adf', 'p.csv', '--series', 'Walk', '--lags', '2', '--max-lags', '5'], 'mooring: --max-lags applies only when a rule chooses the lags (--lags aic, bic or tstat); with --lags 2 leave it out.'],
     ['a wrong bandwidth', ['pp', 'p.csv', '--series', 'Walk', '--bandwidth', 'wide'], "mooring: --bandwidth must be a whole number of kernel lags (0, 1, 2, ...) or one of auto, not 'wide'."],
-    ['an option of another command', ['kpss', 'p.csv', '--series', 'Walk', '--lags', '2'], 'mooring: Unknown option --lags for kpss; its options are --series, --log, --skip-gaps, --json, --deterministic, --bandwidth.'],
+    ['an option of another command', ['kpss', 'p.csv', '--series', 'Walk', '--lags', '2'], 'mooring: Unknown option --lags for kpss; its options are --series, --log, --skip-gaps, --json, --from, --to, --dates, --date-order, --fill-forward, --delimiter, --decimal, --deterministic, --bandwidth.'],
     ['an unknown series', ['pp', 'm.csv', '--series', 'gdp'], "mooring: No column is named 'gdp'; the series are: year, quarter, realgdp, realcons, realinv, realgovt, realdpi, cpi, m1, tbilrate, unemp, pop, infl, realint."],
     ['a non-positive value under --log', ['adf', 'm.csv', '--series', 'infl', '--log'], 'mooring: infl line 2 is 0: logs need positive values; remove or correct that row, or turn logs off.'],
     ['a missing file', ['order', 'none.csv', '--series', 'x'], "mooring: Cannot read 'none.csv': no such file; check the name and the folder."],

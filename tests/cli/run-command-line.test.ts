@@ -104,13 +104,13 @@ describe('runner: bad input is one line on stderr, exit 2, no stack', () => {
   const cases: [string, string[], RegExp][] = [
     ['no command', [], /^mooring: No command given; the commands are mean, crash/],
     ['unknown command', ['maen', 'p.csv'], /^mooring: Unknown command 'maen' \(did you mean mean\?\)/],
-    ['unknown option', ['mean', 'p.csv', '--seris', 'Walk'], /^mooring: Unknown option --seris for mean \(did you mean --series\?\); its options are --series, --log, --skip-gaps, --json, --style\.$/],
+    ['unknown option', ['mean', 'p.csv', '--seris', 'Walk'], /^mooring: Unknown option --seris for mean \(did you mean --series\?\); its options are --series, --log, --skip-gaps, --json, --from, --to, --dates, --date-order, --fill-forward, --delimiter, --decimal, --style\.$/],
     ['wrong option word', ['mean', 'p.csv', '--series', 'Walk', '--style', 'loud'], /^mooring: --style must be one of plain, fancy, not 'loud'\.$/],
     ['missing value', ['mean', 'p.csv', '--series'], /^mooring: --series needs a value: --series NAME\.$/],
     ['switch with a value', ['mean', 'p.csv', '--log=yes'], /^mooring: --log is a switch and takes no value/],
     ['repeated option', ['mean', 'p.csv', '--json', '--json'], /^mooring: --json is given more than once/],
     ['missing file argument', ['mean', '--series', 'Walk'], /^mooring: mean needs a CSV file: mooring mean <file\.csv> --series NAME\.$/],
-    ['two files', ['mean', 'a.csv', 'b.csv'], /^mooring: mean takes one CSV file but got 2 \(a\.csv, b\.csv\)/],
+    ['two files, both read (to be joined on their dates)', ['mean', 'p.csv', 'b.csv'], /^mooring: Cannot read 'b\.csv': no such file/],
     ['file not found', ['mean', 'nowhere.csv', '--series', 'Walk'], /^mooring: Cannot read 'nowhere\.csv': no such file; check the name and the folder\.$/],
     ['unknown series', ['mean', 'p.csv', '--series', 'Crude'], /^mooring: No column is named 'Crude'; the series are: Walk, Calm, Drift\.$/],
     ['no series chosen', ['mean', 'p.csv'], /^mooring: mean needs --series NAME to choose a column; the series are: Walk, Calm, Drift\.$/],
@@ -132,7 +132,7 @@ describe('runner: bad input is one line on stderr, exit 2, no stack', () => {
   it('a text cell names the line and the date', () => {
     const csv = pricesCsv(30, 3, (row, i) => { if (i === 9) row[1] = 'n/a'; });
     const line = expectOneLineRefusal(runWith(table, ['mean', 'g.csv', '--series', 'Walk'], { 'g.csv': csv }));
-    expect(line).toBe("mooring: Walk line 11 (2020-01-10) is text 'n/a': clean it or allow gaps.");
+    expect(line).toBe("mooring: Walk line 11 (2020-01-10) is text 'n/a': clean it or give --skip-gaps.");
     const skipped = runWith(table, ['mean', 'g.csv', '--series', 'Walk', '--skip-gaps', '--json'], { 'g.csv': csv });
     expect(skipped.code).toBe(0);
     expect(JSON.parse(skipped.stdout).values).toHaveLength(29);

@@ -38,7 +38,7 @@ describe('mooring report refuses bad input in one line (exit 2)', () => {
     ['one name in --series', ['report', 'p.csv', '--series', 'A'], { 'p.csv': csv(60) }, /name at least two with --series A,B/],
     ['an unknown series', ['report', 'p.csv', '--series', 'A,Nope'], { 'p.csv': csv(60) }, /No column is named 'Nope'; the series are: A, B/],
     ['a name given twice', ['report', 'p.csv', '--series', 'A,a'], { 'p.csv': csv(60) }, /named twice/],
-    ['a text cell', ['report', 'p.csv'], { 'p.csv': csv(60, (c, i) => { if (i === 10) c[1] = 'n/a'; }) }, /A line 12 \(2024-01-11\) is text 'n\/a': clean it or allow gaps/],
+    ['a text cell', ['report', 'p.csv'], { 'p.csv': csv(60, (c, i) => { if (i === 10) c[1] = 'n/a'; }) }, /A line 12 \(2024-01-11\) is text 'n\/a': clean it or give --skip-gaps/],
     ['too few rows', ['report', 'p.csv'], { 'p.csv': csv(25) }, /25 observations; the diagnostic needs at least 30/],
     ['logs of a negative price', ['report', 'p.csv', '--log'], { 'p.csv': csv(60, (c, i) => { if (i === 3) c[2] = '-1'; }) }, /B line 5 \(2024-01-04\) is -1: logs need positive values/],
     ['a level out of range', ['report', DEMO_CSV, '--alpha', '2'], {}, /--alpha must be a level between 0 and 0.5/],

@@ -81,11 +81,11 @@ describe('readCsv: refusals name the line', () => {
     expect(refusal(() => readCsv('a,b\n1,"2"x\n'))).toBe('Line 2 has text after the closing quote of field 2: put the whole field inside the quotes.');
   });
 
-  it('an empty file, a header alone, a semicolon file', () => {
+  it('an empty file, a header alone, a semicolon file forced to commas', () => {
     expect(refusal(() => readCsv(''))).toMatch(/^The file is empty/);
     expect(refusal(() => readCsv('\ufeff\n\n'))).toMatch(/^The file is empty/);
     expect(refusal(() => readCsv('a,b\n'))).toMatch(/^The file has a header but no data lines/);
-    expect(refusal(() => readCsv('a;b\n1;2\n'))).toBe('Line 1 is separated by semicolons, not commas: save the file as comma-separated values.');
+    expect(refusal(() => readCsv('a;b\n1;2\n', { delimiter: ',' }))).toBe('Line 1 is separated by semicolons, not commas: give --delimiter semicolon, or leave --delimiter out to have it found.');
   });
 });
 
@@ -130,7 +130,7 @@ describe('csvSeries', () => {
 
   it('interior text names the CSV line and the date', () => {
     const t = readCsv(pricesCsv(40, (row, i) => { if (i === 35) row[1] = 'n/a'; }));
-    expect(refusal(() => csvSeries(t, 'Crude'))).toBe("Crude line 37 (2024-02-05) is text 'n/a': clean it or allow gaps.");
+    expect(refusal(() => csvSeries(t, 'Crude'))).toBe("Crude line 37 (2024-02-05) is text 'n/a': clean it or give --skip-gaps.");
   });
 
   it('quoted numbers are numbers, blanks are gaps, error codes are errors', () => {
@@ -139,7 +139,7 @@ describe('csvSeries', () => {
       if (i === 3) row[1] = '';
       if (i === 4) row[1] = '#N/A';
     }));
-    expect(refusal(() => csvSeries(t, 'Crude'))).toBe('Crude line 5 (2024-01-04) is blank: clean it or allow gaps.');
+    expect(refusal(() => csvSeries(t, 'Crude'))).toBe('Crude line 5 (2024-01-04) is blank: clean it or give --skip-gaps.');
     const s = csvSeries(t, 'Crude', { skipGaps: true });
     expect(s.values[0]).toBe(70);
     expect(s.dropped.map((d) => [d.row, d.reason])).toEqual([

@@ -74,8 +74,10 @@ function runReport(context: CommandContext): { terminal: string; json: Record<st
   const block = csvBlock(table, names, { log: context.common.log, skipGaps: context.common.skipGaps });
   const dates = table.dateIndex >= 0 ? table.columns[table.dateIndex] : null;
   const input = prepareDiagnosticInput(block, { dateOf: (i) => dates?.[i]?.trim() || null, source: file === '-' ? 'standard input' : file });
-  const preparation = describePreparation({ ...AS_GIVEN, log: context.common.log, skipGaps: context.common.skipGaps });
+  const preparation = [describePreparation({ ...AS_GIVEN, log: context.common.log, skipGaps: context.common.skipGaps }), context.window ?? ''].filter((w) => w !== '').join(', ');
   const report = diagnose(input, { log: context.common.log, alpha, lagRule, johansenCase, deterministic, rollingWindow, period, preparation });
+  // What was done to the rows before the diagnostic (order, join, window) is part of its warnings.
+  if (context.notices && context.notices.length > 0) report.warnings = [...context.notices, ...report.warnings];
   if (out !== undefined) writeReportFile(out, renderDiagnosticHtml(report));
   const leftOutLine = leftOut.length > 0 ? `\n\n  Left out (not columns of numbers): ${leftOut.join(', ')}` : '';
   return {
