@@ -4,6 +4,7 @@
  * coint.json): statistic 1e-8 relative, p-value 1e-6, step-1 coefficients and residual sum of
  * squares 1e-8 relative. Where no fixture exists the check states its source.
  */
+import { randomWalk, SeededRandom } from '../../addin/random';
 import { describe, expect, it } from 'vitest';
 import { ecm, englegranger, halflife, hedge, phillipsouliaris, spread, zscore } from '../../functions/functions';
 import { errorCorrectionModel } from '../../addin/cointegration/error-correction';
@@ -126,6 +127,23 @@ describe('MOOR.HALFLIFE', () => {
     const y = column(cellsOf('pair_y'));
     const x = column(cellsOf('pair_x'));
     expect(halflife(y, x)[0][0]).toBeCloseTo(halflife(spread(y, x))[0][0] as number, 10);
+  });
+  it('show low, high and all: the ends of the 95% interval and the labelled table, the engine\'s numbers', () => {
+    const y = column(cellsOf('pair_y'));
+    const x = column(cellsOf('pair_x'));
+    const table = halflife(y, x, 'all');
+    const row = (label: string) => table.find((r) => String(r[0]).startsWith(label))?.[1];
+    expect(row('Half-life')).toBe(halflife(y, x)[0][0]);
+    expect(row('Low end')).toBe(halflife(y, x, 'low')[0][0]);
+    expect(row('High end')).toBe(halflife(y, x, 'high')[0][0]);
+    expect(halflife(y, x, 'low')[0][0] as number).toBeLessThan(halflife(y, x)[0][0] as number);
+    expect(halflife(y, x, 'high')[0][0] as number).toBeGreaterThan(halflife(y, x)[0][0] as number);
+    expect(String(row('The interval in words'))).toMatch(/^likely between/);
+    expect(cellErrorOf(() => halflife(y, x, 'middle'), '#VALUE!')).toMatch(/value, low, high, all/);
+  });
+  it('show high is #N/A with the reason when the interval reaches no reversion', () => {
+    const walk = column(Array.from(randomWalk(new SeededRandom(14), 300))); // a seeded random walk: no reversion to find
+    expect(cellErrorOf(() => halflife(walk, undefined, 'high'), '#N/A')).toMatch(/no upper bound|no reversion/);
   });
   it('gives #N/A with the reason when the spread does not revert', () => {
     const trending = Array.from({ length: 60 }, (_, t) => 1.05 ** t);
