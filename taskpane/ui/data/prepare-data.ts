@@ -5,6 +5,7 @@
  * user typed into positions among the cleaned rows. Every refusal is the engine's
  * MooringInputError, whose message the pane shows as it is.
  */
+import { windowFromBounds } from '../../../addin/dates/date-window';
 import { MooringInputError } from '../../../addin/errors';
 import type { DiagnosticOptions } from '../../../addin/report/check-input';
 import { prepareDiagnosticInput, type DiagnosticInput } from '../../../addin/report/prepare-input';
@@ -77,7 +78,7 @@ export function prepareData(region: DataRegion, choice: DataChoice): PreparedDat
     source: `${region.sheet}!${region.address}`,
   });
   const sourceRows = Array.from(block[0].rows);
-  const range = windowOf(choice, sourceRows, dates, first);
+  const range = windowFromBounds({ from: choice.from, to: choice.to }, sourceRows, dates, first);
   // The window as rows of the region, read back through the one window rule every formula uses.
   const prep: Preparation = {
     ...AS_GIVEN,
@@ -102,32 +103,4 @@ export function prepareData(region: DataRegion, choice: DataChoice): PreparedDat
     prep,
     prepText: describePreparation(prep),
   };
-}
-
-/** The window among cleaned rows from the typed first and last date (or sheet row). */
-function windowOf(choice: DataChoice, sourceRows: number[], dates: (string | null)[] | null, firstRow: number): DiagnosticOptions['window'] {
-  const from = choice.from?.trim() || null;
-  const to = choice.to?.trim() || null;
-  if (from === null && to === null) return undefined;
-  const n = sourceRows.length;
-  const keyOf = (k: number): string | number => (dates ? (dates[sourceRows[k]] ?? '') : firstRow + sourceRows[k]);
-  const bound = (text: string, what: string): string | number => {
-    if (dates) {
-      if (!/^\d{4}-\d{2}-\d{2}/.test(text)) throw new MooringInputError(`The ${what} date '${text}' is not a date: type it as 2024-03-15.`);
-      return text;
-    }
-    const row = Number(text);
-    if (!Number.isInteger(row)) throw new MooringInputError(`The ${what} row '${text}' is not a row number: type a sheet row such as ${firstRow}.`);
-    return row;
-  };
-  const lo = from === null ? null : bound(from, 'first');
-  const hi = to === null ? null : bound(to, 'last');
-  let start = 0;
-  while (start < n && lo !== null && keyOf(start) < lo) start++;
-  let end = n;
-  while (end > start && hi !== null && keyOf(end - 1) > hi) end--;
-  if (end <= start) {
-    throw new MooringInputError(`No rows lie between ${from ?? 'the start'} and ${to ?? 'the end'}: widen the sample.`);
-  }
-  return start === 0 && end === n ? undefined : { start, end };
 }
