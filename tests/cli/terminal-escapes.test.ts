@@ -78,6 +78,15 @@ describe('control characters from the data never reach the terminal raw', () => 
     expect(r.stdout).toContain('Red\\x1b[31mAlert\\x1b[0m');
   });
 
+  it('report: a table with an escaped name stays aligned (widths counted as shown)', () => {
+    // RED shows 6 characters wider than its length, C1 8: counted by length, the columns would part.
+    const r = run('report', 'hostile.csv', '--series', `${RED},${C1}`);
+    const rows = r.stdout.split('\n').filter((l) => /^  (Red|C1)\S* +I\(\d\)/.test(l));
+    expect(rows).toHaveLength(2);
+    expect(rows[0].indexOf(' I(')).toBeGreaterThan(0);
+    expect(rows[0].search(/ {2}I\(/)).toBe(rows[1].search(/ {2}I\(/));
+  });
+
   it('a refusal quoting a cell that holds an escape sequence is one line with the sequence visible', () => {
     const csv = hostileCsv((row, i) => {
       if (i === 30) row[1] = 'n/a\u001b[2J\u001b]0;gone\u0007';
