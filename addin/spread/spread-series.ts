@@ -26,7 +26,8 @@ export function spreadSeries(
  */
 function refuseOverflow(yt: number, xt: number, beta: number, intercept: number, names: { y: string; x: string; rowLabel?: (position: number) => string }, t: number): never {
   const where = names.rowLabel ? names.rowLabel(t) : `position ${t + 1}`;
-  const terms = `${formatValue(yt)}${intercept !== 0 ? ` - ${formatValue(intercept)}` : ''} - ${formatValue(beta)} × ${formatValue(xt)}`;
+  const minus = (v: number) => (v < 0 ? ` + ${formatValue(-v)}` : ` - ${formatValue(v)}`);
+  const terms = `${formatValue(yt)}${intercept !== 0 ? minus(intercept) : ''}${minus(beta)} × ${formatValue(xt)}`;
   const ratio = xt !== 0 ? ` (there ${names.y} / ${names.x} is ${formatValue(Number((yt / xt).toPrecision(4)))})` : '';
   throw new MooringInputError(
     `The spread ${names.y} - ${intercept !== 0 ? 'intercept - ' : ''}beta × ${names.x} at ${where} is ${terms}, beyond the largest number a double holds (about 1.8e308): ` +

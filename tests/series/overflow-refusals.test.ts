@@ -94,6 +94,12 @@ describe('a spread past the largest double is refused with the row, the terms an
     expect(message).not.toMatch(NOT_A_NUMBER);
   });
 
+  it('writes a negative hedge ratio or intercept as an addition, not as "- -"', () => {
+    const message = refusal(() => spreadSeries(yv, xv, -1e308, -2, { y: 'Diesel', x: 'Gasoil' }));
+    expect(message).toMatch(/at position 1 is [0-9.]+ \+ 2 \+ 1e\+308 × [0-9.]+, beyond/);
+    expect(message).toContain('the hedge ratio -1e+308');
+  });
+
   it('MOOR.SPREAD(y, x, 1E308) says which row, not "a fault in Mooring"', () => {
     const message = refusal(() => MOOR.spread(y, x, 1e308));
     expect(message).toMatch(/at row 1 of its range is/);
