@@ -12,7 +12,7 @@
  * Node's fs is used here because the runner's io has no writer; the command line is bundled
  * for Node only.
  */
-import { closeSync, fstatSync, openSync, readSync, writeFileSync } from 'node:fs';
+import { closeSync, openSync, readSync, statSync, writeFileSync } from 'node:fs';
 import { MooringInputError } from '../errors';
 import { REPORT_MARKER } from './render/diagnostic-html';
 
@@ -27,17 +27,23 @@ export type ExistingFile = 'none' | 'mooring-report' | 'other' | 'unreadable';
 
 /** Whether a file exists at the path and, if so, whether Mooring wrote it. */
 export function existingFile(path: string): ExistingFile {
-  let fd: number;
+  // stat first: opening a named pipe to read would wait for a writer that never comes.
+  let size: number;
   try {
-    fd = openSync(path, 'r');
+    const stat = statSync(path);
+    if (!stat.isFile()) return 'other';
+    size = stat.size;
   } catch (e) {
     const code = (e as { code?: unknown } | null)?.code;
     return code === 'ENOENT' ? 'none' : 'unreadable';
   }
+  let fd: number;
   try {
-    const stat = fstatSync(fd);
-    if (stat.isDirectory()) return 'other';
-    const size = stat.size;
+    fd = openSync(path, 'r');
+  } catch {
+    return 'unreadable';
+  }
+  try {
     const head = Buffer.alloc(Math.min(PEEK_BYTES, size));
     readSync(fd, head, 0, head.length, 0);
     const tail = Buffer.alloc(Math.min(PEEK_BYTES, size));

@@ -1,3 +1,4 @@
+import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -62,6 +63,15 @@ describe('report --out and a file already there', () => {
     expect(existingFile(empty)).toBe('other');
     expectOneLineRefusal(report('--out', empty));
     expect(readFileSync(empty, 'utf8')).toBe('');
+  });
+
+  it('treats a folder or a named pipe as a file it did not write, without waiting on the pipe', () => {
+    expect(existingFile(folder)).toBe('other');
+    const pipe = join(folder, 'pipe.html');
+    if (process.platform !== 'win32' && spawnSync('mkfifo', [pipe]).status === 0) {
+      expect(existingFile(pipe)).toBe('other');
+      expectOneLineRefusal(report('--out', pipe));
+    }
   });
 
   it('takes --force only with --out, and the help names it', () => {
