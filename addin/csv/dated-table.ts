@@ -11,7 +11,7 @@
  */
 import { dateDirection } from '../dates/date-order';
 import { joinOnDates, type DatedGroup } from '../dates/join-on-dates';
-import { readDateColumn, type DateColumn } from '../dates/read-dates';
+import { looksLikeDateText, readDateColumn, type DateColumn } from '../dates/read-dates';
 import { MooringInputError } from '../errors';
 import { findDateColumns, headerNamesDate, DATE_HEADER_WORDS } from './date-column';
 import type { CsvTable } from './read-csv';
@@ -96,9 +96,10 @@ export function datedTable(sources: readonly SourceTable[], options: DatedTableO
           serial: forced.has(d) || headerNamesDate(table.header[d]), order: options.dateOrder, name: what, rowLabel: label, orderHint: words.dateOrder,
         });
       } catch (e) {
-        // A column found by its header word alone, in a file with one calendar, still labels
-        // the rows as before; the user is told the rows are taken in file order.
-        const byWordOnly = !forced.has(d) && DATE_HEADER_WORDS.includes(table.header[d].trim().toLowerCase());
+        // A column found by its header word alone, holding no text that looks like a date, in a
+        // file with one calendar, still labels the rows as before; the user is told the rows are
+        // taken in file order. Dates that look like dates but do not read are refused.
+        const byWordOnly = !forced.has(d) && DATE_HEADER_WORDS.includes(table.header[d].trim().toLowerCase()) && !fields.some((f) => looksLikeDateText(f));
         if (!many && dateIndices.length === 1 && byWordOnly && e instanceof MooringInputError) {
           notices.push(`The dates in ${what} were not read (${e.message.replace(/\.$/, '')}); the rows are taken in file order.`);
           return;
