@@ -3,7 +3,11 @@
 //   cli    addin/cli/main.ts            -> dist/cli/mooring.js   (Node, executable, dependencies bundled)
 //   addin  functions/ and taskpane/     -> dist/                 (the Excel add-in, served as static files)
 //
-//   npm run build                       both, production
+//   npm run build                       both, production, for the development server (https://localhost:3000/)
+//   npm run build -- --env base=https://host.example/mooring/
+//                                       the same for a real host: dist/manifest.xml and the help links in
+//                                       dist/functions.json point at that base (README, "Hosting Mooring for a team")
+//   ... --env outDir=/some/folder       write there instead of dist/ (the build tests use a folder of their own)
 //   npm run build:cli                   cli only (--config-name cli)
 //   npm run bench                       the benchmark runner (--env bench --config-name bench) -> dist/bench/
 //   npm test                            typecheck, this build, then vitest (tests read dist/)
@@ -11,7 +15,10 @@
 //
 // The manifest (manifest/manifest.xml) names the add-in files by their built names
 // (taskpane.html, functions.js, functions.json, assets/icon-*.png) under
-// https://localhost:3000/; keep those names stable. Type errors are reported by
+// https://localhost:3000/; keep those names stable. The build moves those URLs, and the
+// JSDoc help links, to the base it is given (scripts/webpack/base-url.cjs); the pages use
+// relative paths. The help links open docs/functions.html, the function reference the build
+// generates (scripts/webpack/function-reference-page.cjs). Type errors are reported by
 // `npm run typecheck` (tsc --noEmit), not by the bundler: ts-loader only transpiles.
 
 'use strict';
@@ -23,6 +30,8 @@ const HtmlWebpackPlugin = require('html-webpack-plugin');
 const CopyWebpackPlugin = require('copy-webpack-plugin');
 const CustomFunctionsMetadataPlugin = require('custom-functions-metadata-plugin');
 const { FunctionsMetadataPostProcessPlugin } = require('./scripts/webpack/functions-metadata.cjs');
+const { FunctionReferencePagePlugin } = require('./scripts/webpack/function-reference-page.cjs');
+const { DEV_BASE, checkBase, rewriteManifest } = require('./scripts/webpack/base-url.cjs');
 
 const ROOT = __dirname;
 const DIST = path.join(ROOT, 'dist');
@@ -76,7 +85,26 @@ class ExecutableBitPlugin {
   }
 }
 
-function cliConfig(mode) {
+/**
+ * The folder a build writes into: dist/, or --env outDir. A folder of one's own is cleaned by the
+ * build, so it must be new, empty, or an earlier Mooring build (it holds manifest.xml).
+ */
+function outputFolder(outDir) {
+  if (outDir === undefined) return DIST;
+  if (typeof outDir !== 'string' || outDir.trim() === '') {
+    throw new Error('--env outDir needs a folder, for example --env outDir=build/mooring');
+  }
+  const folder = path.resolve(outDir);
+  if (fs.existsSync(folder)) {
+    const entries = fs.readdirSync(folder);
+    if (entries.length > 0 && !entries.includes('manifest.xml')) {
+      throw new Error(`--env outDir=${outDir}: ${folder} is not empty and holds no earlier build (no manifest.xml); the build empties its folder, so give a new or empty one`);
+    }
+  }
+  return folder;
+}
+
+function cliConfig(mode, out = DIST) {
   return {
     name: 'cli',
     mode,
@@ -84,7 +112,7 @@ function cliConfig(mode) {
     context: ROOT,
     entry: { mooring: './addin/cli/main.ts' },
     output: {
-      path: path.join(DIST, 'cli'),
+      path: path.join(out, 'cli'),
       filename: 'mooring.js',
       // Worker threads load their own chunk by name (dist/cli/screen-worker.js for the pair screen).
       chunkFilename: '[name].js',
@@ -105,14 +133,14 @@ function cliConfig(mode) {
 }
 
 /** The benchmark runner (npm run bench): Node, like the CLI, built only on request. */
-function benchConfig(mode) {
+function benchConfig(mode, out = DIST) {
   return {
     name: 'bench',
     mode,
     target: 'node20',
     context: ROOT,
     entry: { 'run-bench': './tests/bench/run-bench.ts' },
-    output: { path: path.join(DIST, 'bench'), filename: '[name].js', clean: true },
+    output: { path: path.join(out, 'bench'), filename: '[name].js', clean: true },
     resolve,
     module: { rules: [typeScriptRule] },
     optimization: { minimize: false },
@@ -150,7 +178,7 @@ async function devServerOptions() {
   };
 }
 
-async function addinConfig(mode, serving) {
+async function addinConfig(mode, serving, base = DEV_BASE, out = DIST) {
   const htmlPage = (filename, template, chunks) =>
     new HtmlWebpackPlugin({
       filename,
@@ -173,7 +201,7 @@ async function addinConfig(mode, serving) {
       preview: './taskpane/preview/preview.ts',
     },
     output: {
-      path: DIST,
+      path: out,
       filename: '[name].js',
       publicPath: '',
       // The pane's diagnosis worker is an async chunk named by its chunk name: dist/diagnose-worker.js.
@@ -203,14 +231,19 @@ async function addinConfig(mode, serving) {
     performance: { hints: false },
     plugins: [
       new CustomFunctionsMetadataPlugin({ input: FUNCTION_SOURCES, output: ADDIN_FILES.functionsMetadata }),
-      new FunctionsMetadataPostProcessPlugin({ filename: ADDIN_FILES.functionsMetadata }),
+      new FunctionsMetadataPostProcessPlugin({ filename: ADDIN_FILES.functionsMetadata, base }),
+      new FunctionReferencePagePlugin({ metadata: ADDIN_FILES.functionsMetadata }),
       // With the shared runtime the pane page hosts the custom functions too, so it loads both bundles.
       htmlPage(ADDIN_FILES.pane, './taskpane/taskpane.html', ['functions', 'taskpane']),
       htmlPage(ADDIN_FILES.functionsPage, './functions/functions.html', ['functions']),
       htmlPage('preview.html', './taskpane/preview/preview.html', ['preview']),
       new CopyWebpackPlugin({
         patterns: [
-          { from: 'manifest/manifest.xml', to: 'manifest.xml' },
+          {
+            from: 'manifest/manifest.xml',
+            to: 'manifest.xml',
+            transform: { transformer: (content) => rewriteManifest(content.toString(), base), cache: { keys: { base } } },
+          },
           { from: 'assets/icon-*.png', to: 'assets/[name][ext]' },
           { from: 'taskpane/taskpane.css', to: 'taskpane.css' },
           { from: 'node_modules/uplot/dist/uPlot.min.css', to: 'uPlot.min.css' },
@@ -222,12 +255,30 @@ async function addinConfig(mode, serving) {
   };
 }
 
+/** An error webpack-cli prints as its message alone, without a stack of our own code. */
+function refusal(message) {
+  const error = new Error(message);
+  error.stack = `${message}\n`;
+  return error;
+}
+
 module.exports = async (env = {}, argv = {}) => {
   const mode = argv.mode === 'development' ? 'development' : 'production';
   const serving = Boolean(env.WEBPACK_SERVE);
-  const configs = [cliConfig(mode), await addinConfig(mode, serving)];
+  if (serving && env.base !== undefined) {
+    throw refusal(`npm start serves the add-in on ${DEV_BASE} only; --env base is for a build to copy to a host (npm run build -- --env base=...)`);
+  }
+  let base;
+  let out;
+  try {
+    base = env.base === undefined ? DEV_BASE : checkBase(env.base);
+    out = outputFolder(env.outDir);
+  } catch (error) {
+    throw refusal(error.message);
+  }
+  const configs = [cliConfig(mode, out), await addinConfig(mode, serving, base, out)];
   // `webpack --env bench --config-name bench` builds the benchmark runner; plain builds skip it.
-  if (env.bench) configs.push(benchConfig(mode));
+  if (env.bench) configs.push(benchConfig(mode, out));
   return configs;
 };
 

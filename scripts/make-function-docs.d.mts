@@ -15,3 +15,4 @@ export const DOCS_FILE: string;
 export function manifestNamespace(manifestXml?: string): string;
 export function generatedMetadata(): Promise<FunctionsMetadata>;
 export function renderFunctionDocs(metadata: FunctionsMetadata, namespace: string): string;
+export function renderFunctionDocsPage(metadata: FunctionsMetadata, namespace: string): { page: string; ids: string[] };

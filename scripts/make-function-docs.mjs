@@ -3,6 +3,8 @@
 // metadata the build turns into functions.json: custom-functions-metadata reads the JSDoc of
 // the files in FUNCTION_SOURCES (webpack.config.js), and the namespace comes from the manifest.
 // So a description changed in functions/functions.ts changes IntelliSense and this page alike.
+// The build serves the same page as HTML (docs/functions.html, through renderFunctionDocsPage),
+// which is where the help links in functions.json point.
 //
 //   node scripts/make-function-docs.mjs           write docs/functions.md
 //   node scripts/make-function-docs.mjs --check   exit 1 if the committed page is out of date
@@ -13,6 +15,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { markdownPage } from './markdown-page.mjs';
 
 const require = createRequire(import.meta.url);
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..');
@@ -104,6 +107,14 @@ export function renderFunctionDocs(metadata, namespace) {
     lines.push('', `Returns ${fn.result?.dimensionality === 'matrix' ? 'a block of cells (one cell for a single number; it spills when there are more)' : 'one value'}.`);
   }
   return `${lines.join('\n')}\n`;
+}
+
+/**
+ * The reference as one self-contained HTML page, made from the very Markdown above; ids holds
+ * the anchors of its headings (one per function, the #anchor of its help link).
+ */
+export function renderFunctionDocsPage(metadata, namespace) {
+  return markdownPage(renderFunctionDocs(metadata, namespace));
 }
 
 async function main() {

@@ -25,7 +25,7 @@ describe('docs/functions.md', () => {
     expect(page).toContain('=MOOR.ENGLEGRANGER(y, x, [deterministic], [lags], [show], [prep])');
   });
 
-  it('is served with the add-in where the help links point (the build copies docs/*.md to dist/docs/)', () => {
+  it('is served with the add-in beside the HTML page the help links open (the build copies docs/*.md to dist/docs/)', () => {
     expect(readFileSync(new URL('../../dist/docs/functions.md', import.meta.url), 'utf8')).toBe(readFileSync(DOCS_FILE, 'utf8'));
   });
 
