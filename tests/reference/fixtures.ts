@@ -238,6 +238,28 @@ export interface ZivotAndrewsCase {
   breakIndex: number;
 }
 
+/** The wandering line y_t = a_t + b_t x_t + e_t (makers/state_space.py): a fixed-variance pass or the library's maximum. */
+export interface KalmanCase {
+  y: string;
+  x: string;
+  kind: 'fixed' | 'estimated';
+  stateVar: number;
+  obsVar: number;
+  logLikelihood: number;
+  /** Fixed cases only: rows of the diffuse period and the states, standard deviations and one-step errors, one per row. */
+  nobsDiffuse?: number;
+  filteredIntercept?: number[];
+  filteredSlope?: number[];
+  filteredInterceptStd?: number[];
+  filteredSlopeStd?: number[];
+  smoothedIntercept?: number[];
+  smoothedSlope?: number[];
+  smoothedInterceptStd?: number[];
+  smoothedSlopeStd?: number[];
+  forecastError?: number[];
+  forecastErrorVar?: number[];
+}
+
 /** Each fixture file's name and contents, for `loadFixture<Fixtures['adf']>('adf')`. */
 export interface Fixtures {
   adf: FixtureFile<AdfCase>;
@@ -250,6 +272,7 @@ export interface Fixtures {
   'var-select': FixtureFile<VarSelectCase>;
   'var-wald': FixtureFile<VarWaldCase>;
   'zivot-andrews': FixtureFile<ZivotAndrewsCase>;
+  kalman: FixtureFile<KalmanCase>;
 }
 
 export type FixtureName = keyof Fixtures;
