@@ -255,10 +255,10 @@ async function addinConfig(mode, serving, base = DEV_BASE, out = DIST) {
   };
 }
 
-/** An error webpack-cli prints as its message alone, without a stack of our own code. */
+/** An error webpack-cli prints as its message alone (it prints errors through util.inspect). */
 function refusal(message) {
   const error = new Error(message);
-  error.stack = `${message}\n`;
+  error[Symbol.for('nodejs.util.inspect.custom')] = () => message;
   return error;
 }
 
