@@ -77,7 +77,7 @@ function aggregate(call: CallContext, f: (xs: number[]) => Scalar): Scalar {
     if (a === undefined) continue;
     const xs = numbersIn(gridOf(a, call.read));
     if (xs instanceof FormulaError) return xs;
-    all.push(...xs);
+    for (const x of xs) all.push(x); // not push(...xs): a column of a million cells would overflow the call stack
   }
   return f(all);
 }
