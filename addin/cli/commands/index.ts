@@ -10,6 +10,7 @@ import { egCommand } from './eg';
 import { grangerCommand } from './granger';
 import { hedgeCommand } from './hedge';
 import { johansenCommand } from './johansen';
+import { kalmanCommand } from './kalman';
 import { kpssCommand } from './kpss';
 import { orderCommand } from './order';
 import { poCommand } from './po';
@@ -23,7 +24,7 @@ import { varlagsCommand } from './varlags';
 /** Every command, in help order. */
 export const MOORING_COMMANDS: readonly Command[] = [
   adfCommand, kpssCommand, ppCommand, orderCommand,
-  egCommand, poCommand, johansenCommand, hedgeCommand, ecmCommand, spreadCommand,
+  egCommand, poCommand, johansenCommand, hedgeCommand, kalmanCommand, ecmCommand, spreadCommand,
   reportCommand,
   varlagsCommand, grangerCommand,
   screenCommand, rollingCommand, breaksCommand,
