@@ -7,7 +7,8 @@
  *
  * Test hooks beyond the port: setValues / setFormula / addTable / appendRows / select to
  * arrange a sheet, shownValue / cellAt / fillAt to look at it, and failNextWrite to make the
- * next block write break part-way. Deterministic: no timers; watchers fire on a microtask.
+ * next block write break part-way; onAnyChange for a view of the whole workbook (the preview's
+ * sheet). Deterministic: no timers; watchers fire on a microtask.
  */
 import { MooringInputError } from '../../addin/errors';
 import { cellAddress, cellsOf, overlaps, parseCell, rangeAddress, type CellRange } from './a1-address';
@@ -46,6 +47,8 @@ export class MemoryWorkbook implements WorkbookPort {
   private readonly names: MemoryName[] = [];
   private selection: { sheet: string; address: string } | null = null;
   private failure: InjectedFailure | null = null;
+  private readonly viewers = new Set<() => void>();
+  private viewNoticePending = false;
   private readonly watchers = new MemoryWatchers({
     table: (name) => this.cells.table(name) ?? null,
     regionAt: (sheet, row, col) => currentRegion((r, c) => this.cells.isStoredFilled(sheet, r, c), { row, col }) ?? { top: row, left: col, bottom: row, right: col },
@@ -56,6 +59,24 @@ export class MemoryWorkbook implements WorkbookPort {
   }
 
   // ----- arranging a workbook (test hooks) -----
+
+  /**
+   * Calls back once after any change to cells, tables, names, charts or sheets (coalesced on a
+   * microtask); returns a function that stops the calls. For a view of the whole workbook.
+   */
+  onAnyChange(listener: () => void): () => void {
+    this.viewers.add(listener);
+    return () => this.viewers.delete(listener);
+  }
+
+  private viewChanged(): void {
+    if (this.viewNoticePending || this.viewers.size === 0) return;
+    this.viewNoticePending = true;
+    queueMicrotask(() => {
+      this.viewNoticePending = false;
+      for (const v of [...this.viewers]) v();
+    });
+  }
 
   /** Writes values (text stays text, even "=..."), row by row from `anchor`; rows typed just below a table grow it, as Excel does. */
   setValues(sheet: string, anchor: string, grid: CellGrid): void {
@@ -69,6 +90,7 @@ export class MemoryWorkbook implements WorkbookPort {
     }
     this.cells.changed();
     this.watchers.touched(sheet, range);
+    this.viewChanged();
   }
 
   /** Writes one formula. */
@@ -76,6 +98,7 @@ export class MemoryWorkbook implements WorkbookPort {
     const at = this.cellOf(sheet, address);
     this.cells.put(sheet, at.row, at.col, { value: null, formula });
     this.watchers.touched(sheet, { top: at.row, left: at.col, bottom: at.row, right: at.col });
+    this.viewChanged();
   }
 
   /** Makes a table over a range whose first row is the header (synchronous form of makeTable). */
@@ -90,6 +113,7 @@ export class MemoryWorkbook implements WorkbookPort {
     const table = { name, sheet, range };
     this.cells.tables.push(table);
     this.cells.changed();
+    this.viewChanged();
     return table;
   }
 
@@ -144,6 +168,11 @@ export class MemoryWorkbook implements WorkbookPort {
     const text = shown === null ? '' : String(shown);
     const rule = stored?.format?.textFills?.find((f) => text.startsWith(f.startsWith));
     return rule?.fill ?? stored?.format?.fill ?? null;
+  }
+
+  /** The user's selection (sheet and address), or null. */
+  selected(): { sheet: string; address: string } | null {
+    return this.selection ? { ...this.selection } : null;
   }
 
   /** Names of the workbook-level names. */
@@ -230,9 +259,11 @@ export class MemoryWorkbook implements WorkbookPort {
       const error = `Writing the block to ${block.sheet}!${rangeAddress(range)} failed after ${written.length} of ${targets.length} cells: ${(e as Error).message}.`;
       if (failure?.restoreFails) {
         this.watchers.touched(block.sheet, range);
+        this.viewChanged();
         return { ok: false, written, error: `${error} Putting the previous contents back failed too: the cells listed were changed.`, restored: false };
       }
       for (let i = 0; i < written.length; i++) this.cells.put(block.sheet, targets[i].row, targets[i].col, before[i]);
+      this.viewChanged();
       return { ok: false, written, error: `${error} The previous contents were put back.`, restored: true };
     }
     this.setName(block.name, block.sheet, range, block.note ?? null);
@@ -242,6 +273,7 @@ export class MemoryWorkbook implements WorkbookPort {
       this.columnWidths.set(block.sheet, widths);
     }
     this.watchers.touched(block.sheet, range);
+    this.viewChanged();
     return { ok: true, written };
   }
 
@@ -251,6 +283,7 @@ export class MemoryWorkbook implements WorkbookPort {
     const i = this.charts.findIndex((c) => c.name.toLowerCase() === chart.name.toLowerCase());
     if (i >= 0) this.charts.splice(i, 1);
     this.charts.push({ ...chart, series: chart.series.map((s) => ({ ...s })) });
+    this.viewChanged();
   }
 
   async findBlock(name: string): Promise<FoundBlock | null> {
@@ -269,11 +302,13 @@ export class MemoryWorkbook implements WorkbookPort {
     this.names.splice(i, 1);
     for (let j = this.charts.length - 1; j >= 0; j--) if (this.charts[j].name.toLowerCase() === name.toLowerCase()) this.charts.splice(j, 1);
     this.watchers.touched(n.sheet, n.range);
+    this.viewChanged();
   }
 
   async addSheet(suggestedName: string): Promise<string> {
     const name = uniqueName(suggestedName, 'Mooring', (n) => [...this.cells.sheets.keys()].some((s) => s.toLowerCase() === n.toLowerCase()), 31);
     this.cells.sheets.set(name, new Map());
+    this.viewChanged();
     return name;
   }
 
