@@ -47,5 +47,8 @@ export type ScreenShow = (typeof SCREEN_SHOW_WORDS)[number];
 /** What MOOR.HALFLIFE returns: the half-life, an end of its 95% interval, or the labelled table. */
 export const HALF_LIFE_SHOW_WORDS = ['value', 'low', 'high', 'all'] as const;
 
+/** What MOOR.MOVINGHEDGE spills: one column, or all six. */
+export const MOVING_HEDGE_SHOW_WORDS = ['ratio', 'smoothed', 'spread', 'zscore', 'all'] as const;
+
 export const ROLLING_SHOW_WORDS = ['all', 'pvalue', 'beta', 'halflife'] as const;
 export type RollingShow = (typeof ROLLING_SHOW_WORDS)[number];
