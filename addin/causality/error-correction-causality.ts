@@ -11,6 +11,7 @@
  * Without a given equilibrium error, u is the residual of OLS of the effect on a constant and the
  * cause over the whole sample (the first step of Engle & Granger 1987).
  */
+import { powerOfTwoScale, scaled } from '../linalg/power-of-two-scale';
 import { MooringInputError } from '../errors';
 import { chiSquareUpperP, fCriticalValues, fUpperP, studentTwoSidedP } from '../distributions';
 import { leastSquares } from '../regression/least-squares';
@@ -41,7 +42,14 @@ export interface ErrorCorrectionCausality {
 
 /** Short-run (lagged changes of the cause) and long-run (error-correction term) lead-lag tests. */
 export function errorCorrectionCausality(cause: ArrayLike<number>, effect: ArrayLike<number>, options: ErrorCorrectionOptions = {}, names: PairNames = DEFAULT_PAIR_NAMES): ErrorCorrectionCausality {
-  const [x, y] = checkedBlock([cause, effect], [names.cause, names.effect]);
+  const [rawX, rawY] = checkedBlock([cause, effect], [names.cause, names.effect]);
+  // The tests are free of units; the sums of squares are not (they overflow for prices of 1e300
+  // and vanish for 1e-300): both series (and a given equilibrium error, in the effect's units)
+  // are brought to a size near one by a power of two; the long-run line is converted back.
+  const fx = powerOfTwoScale(rawX);
+  const fy = powerOfTwoScale(rawY);
+  const x = scaled(rawX, fx);
+  const y = scaled(rawY, fy);
   const T = y.length;
   let p: number;
   let lagRule: 'fixed' | 'aic' | 'bic';
@@ -66,9 +74,10 @@ export function errorCorrectionCausality(cause: ArrayLike<number>, effect: Array
   if (options.equilibriumError === undefined) {
     const step1 = leastSquares(y, [new Float64Array(T).fill(1), x], { names: ['constant', names.cause], withoutCovariance: true });
     u = step1.residuals;
-    equilibrium = { intercept: step1.coefficients[0], slope: step1.coefficients[1] };
+    equilibrium = { intercept: step1.coefficients[0] / fy, slope: (step1.coefficients[1] * fx) / fy };
   } else {
     [u] = checkedBlock([options.equilibriumError], ['The equilibrium error']);
+    u = scaled(u, fy);
     if (u.length !== T) {
       throw new MooringInputError(`The equilibrium error has ${u.length} values but the series have ${T}: give one value per row of the pair.`);
     }

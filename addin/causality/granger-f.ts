@@ -12,6 +12,7 @@
  * Valid only when both series are stationary: on trending prices the F distribution no longer
  * applies (Sims, Stock & Watson 1990). leadLag chooses a valid form for the data.
  */
+import { powerOfTwoScale, scaled } from '../linalg/power-of-two-scale';
 import { MooringInputError } from '../errors';
 import { chiSquareUpperP, fCriticalValues, fUpperP } from '../distributions';
 import { leastSquares } from '../regression/least-squares';
@@ -32,7 +33,13 @@ export interface GrangerFOptions {
 
 /** F test (with chi-square and likelihood-ratio forms) that the cause's past helps predict the effect. */
 export function grangerF(cause: ArrayLike<number>, effect: ArrayLike<number>, options: GrangerFOptions = {}, names: PairNames = DEFAULT_PAIR_NAMES): TestResult {
-  const [x, y] = checkedBlock([cause, effect], [names.cause, names.effect]);
+  const [rawX, rawY] = checkedBlock([cause, effect], [names.cause, names.effect]);
+  // F is free of units; the sums of squares are not (they overflow for prices of 1e300 and vanish
+  // for 1e-300), so both series are brought to a size near one by a power of two, and the
+  // sums of squares reported below are converted back to the effect's units.
+  const fy = powerOfTwoScale(rawY);
+  const x = scaled(rawX, powerOfTwoScale(rawX));
+  const y = scaled(rawY, fy);
   const T = y.length;
   const resolved = resolveLags([x, y], options.lags, options.maxLags);
   const P = resolved.lags;
@@ -97,8 +104,8 @@ export function grangerF(cause: ArrayLike<number>, effect: ArrayLike<number>, op
       { key: 'chiSquarePValue', label: 'Chi-square form p-value', value: chiSquareUpperP(chiSquare, P) },
       { key: 'likelihoodRatio', label: 'Likelihood-ratio form, n ln(SSR_r / SSR_u)', value: likelihoodRatio },
       { key: 'likelihoodRatioPValue', label: 'Likelihood-ratio form p-value', value: chiSquareUpperP(likelihoodRatio, P) },
-      { key: 'ssrRestricted', label: `Residual sum of squares without ${possessive(names.cause)} lags`, value: ssrR },
-      { key: 'ssrUnrestricted', label: `Residual sum of squares with ${possessive(names.cause)} lags`, value: ssrU },
+      { key: 'ssrRestricted', label: `Residual sum of squares without ${possessive(names.cause)} lags`, value: ssrR / fy / fy },
+      { key: 'ssrUnrestricted', label: `Residual sum of squares with ${possessive(names.cause)} lags`, value: ssrU / fy / fy },
       { key: 'dataForm', label: 'Data tested', value: form },
     ],
   };

@@ -9,6 +9,7 @@
  * The coefficient covariance is the reference library's: sigma_e^2 (Z'Z)^{-1} with
  * sigma_e^2 = SSR_e / (n - K(p + dmax) - 1).
  */
+import { powerOfTwoScale, scaled } from '../linalg/power-of-two-scale';
 import { MooringInputError } from '../errors';
 import { chiSquareCriticalValues, chiSquareUpperP } from '../distributions';
 import type { TestResult } from '../result';
@@ -35,7 +36,12 @@ export interface TodaYamamotoOptions {
 
 /** Wald test that the cause's first p lags are zero in the effect's equation of a VAR(p + dmax) in levels. */
 export function todaYamamoto(cause: ArrayLike<number>, effect: ArrayLike<number>, options: TodaYamamotoOptions = {}, names: PairNames = DEFAULT_PAIR_NAMES): TestResult {
-  const pair = checkedBlock([cause, effect], [names.cause, names.effect]);
+  const given = checkedBlock([cause, effect], [names.cause, names.effect]);
+  // The Wald statistic is free of units; the VAR's moments are not (they overflow for prices of
+  // 1e300 and vanish for 1e-300): each series is brought to a size near one by a power of two,
+  // and the coefficients reported below are converted back (effect's units per cause's unit).
+  const factors = given.map((s) => powerOfTwoScale(s));
+  const pair = given.map((s, i) => scaled(s, factors[i]));
   const T = pair[0].length;
   let extra: ExtraLagsChoice;
   if (options.extraLags === undefined) {
@@ -88,7 +94,7 @@ export function todaYamamoto(cause: ArrayLike<number>, effect: ArrayLike<number>
       ...wald.coefficients.map((b, j) => ({
         key: `causeLag${j + 1}`,
         label: `Coefficient on ${possessive(names.cause)} lag ${j + 1} in ${possessive(names.effect)} equation`,
-        value: b,
+        value: (b * factors[0]) / factors[1],
       })),
     ],
   };

@@ -26,6 +26,7 @@
 import { normalCdf } from '../distributions';
 import { MooringInputError } from '../errors';
 import { HouseholderQr } from '../linalg/householder-qr';
+import { powerOfTwoScale, scaled } from '../linalg/power-of-two-scale';
 import { gaussianLogLikelihood, leastSquares } from '../regression/least-squares';
 import { bartlettLongRunVariance } from '../regression/long-run-variance';
 import { persistentBandwidth } from '../regression/persistent-bandwidth';
@@ -119,7 +120,28 @@ function chooseLeadsLags(y: ArrayLike<number>, x: ArrayLike<number>, kmax: numbe
   return best;
 }
 
+/**
+ * Dynamic OLS of y on x. The fit runs on y and x each brought to a size near one by a power of
+ * two (linalg/power-of-two-scale.ts), so the lead-and-lag choice and the long-run variance
+ * neither overflow for prices of 1e300 nor vanish for 1e-300; the slope, intercept, standard
+ * errors and residuals are converted back to the prices' units, the t-value needs nothing.
+ */
 export function dynamicOls(y: ArrayLike<number>, x: ArrayLike<number>, options: DynamicOlsOptions = {}): DynamicOlsFit {
+  const fy = powerOfTwoScale(y);
+  const fx = powerOfTwoScale(x);
+  const fit = dynamicOlsInUnits(scaled(y, fy), scaled(x, fx), options);
+  const slope = fx / fy;
+  return {
+    ...fit,
+    beta: fit.beta * slope,
+    intercept: fit.intercept / fy,
+    standardError: fit.standardError * slope,
+    olsStandardError: fit.olsStandardError * slope,
+    residuals: fit.residuals.map((e) => e / fy),
+  };
+}
+
+function dynamicOlsInUnits(y: ArrayLike<number>, x: ArrayLike<number>, options: DynamicOlsOptions): DynamicOlsFit {
   const T = y.length;
   const cap = largestLeadsLags(T);
   if (cap < 0) throw new MooringInputError(`${T} observations are too few for dynamic OLS: it needs at least ${4 + MIN_DEGREES_OF_FREEDOM}.`);

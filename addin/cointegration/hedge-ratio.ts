@@ -22,6 +22,7 @@
  */
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import { MooringInputError } from '../errors';
+import { powerOfTwoScale } from '../linalg/power-of-two-scale';
 import { leastSquares } from '../regression/least-squares';
 import { requireAlignedSeries } from './cointegrating-regression';
 import { dynamicOls, dynamicOlsStandardErrorText, type DynamicOlsFit, type DynamicOlsOptions } from './dynamic-ols';
@@ -97,11 +98,14 @@ export function reverseOlsHedgeRatio(y: ArrayLike<number>, x: ArrayLike<number>)
 export function totalLeastSquaresHedgeRatio(y: ArrayLike<number>, x: ArrayLike<number>): HedgeRatio {
   requirePair(y, x);
   const n = y.length;
+  // One power of two for both series (the line depends on their relative units, not on a common
+  // one): the sums below then neither overflow for prices of 1e300 nor vanish for 1e-300.
+  const f = powerOfTwoScale(y, x);
   let mx = 0;
   let my = 0;
   for (let i = 0; i < n; i++) {
-    mx += x[i];
-    my += y[i];
+    mx += x[i] * f;
+    my += y[i] * f;
   }
   mx /= n;
   my /= n;
@@ -109,8 +113,8 @@ export function totalLeastSquaresHedgeRatio(y: ArrayLike<number>, x: ArrayLike<n
   let syy = 0;
   let sxy = 0;
   for (let i = 0; i < n; i++) {
-    const dx = x[i] - mx;
-    const dy = y[i] - my;
+    const dx = x[i] * f - mx;
+    const dy = y[i] * f - my;
     sxx += dx * dx;
     syy += dy * dy;
     sxy += dx * dy;
@@ -128,7 +132,7 @@ export function totalLeastSquaresHedgeRatio(y: ArrayLike<number>, x: ArrayLike<n
     throw new MooringInputError('y hardly moves compared with x, so the orthogonal line is vertical and gives no hedge ratio.');
   }
   const beta = vx === 0 ? 0 : -vx / vy; // no signed zero for a flat y
-  return { method: 'total-least-squares', label: 'Total least squares (orthogonal regression)', beta, intercept: my - beta * mx, standardError: null, tValue: null, pValue: null, note: `depends on the units of both series; ${STATIC_NOTE}` };
+  return { method: 'total-least-squares', label: 'Total least squares (orthogonal regression)', beta, intercept: (my - beta * mx) / f, standardError: null, tValue: null, pValue: null, note: `depends on the units of both series; ${STATIC_NOTE}` };
 }
 
 /** Dynamic OLS with a HAC standard error, as a HedgeRatio. */

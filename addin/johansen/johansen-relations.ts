@@ -7,6 +7,11 @@
  * loadings are alpha_j = S01 w (w' S11 w)^{-1} (Johansen 1995, ch. 6, from memory; one column at a
  * time; the columns are S11-orthogonal, so this equals the joint estimate for any rank).
  * The product alpha_j w' does not depend on the scaling.
+ *
+ * Units: the fit may run on series i times a power of two f_i (johansen.ts). A relation w' on
+ * the scaled series, sum w'_i f_i y_i + d', is f_p times sum (w'_i f_i / f_p) y_i + d' / f_p
+ * with p the pivot, so the weights are w'_i f_i / f_p, the deterministic coefficient d' / f_p,
+ * and the loadings alpha'_ij f_p / f_i.
  */
 import type { ReducedRankFit } from './reduced-rank-regression';
 
@@ -29,7 +34,8 @@ export interface NormalisedRelations {
  * scaled so the first series has weight 1; where it has no weight, scaled by the largest
  * weight instead (with a warning).
  */
-export function normalisedRelations(fit: ReducedRankFit, m: number, names: readonly string[]): NormalisedRelations {
+export function normalisedRelations(fit: ReducedRankFit, m: number, names: readonly string[], scales?: readonly number[]): NormalisedRelations {
+  const f = (i: number) => scales?.[i] ?? 1;
   const p = fit.vectors.length;
   const beta: number[][] = Array.from({ length: m }, () => new Array<number>(m).fill(0));
   const alpha: number[][] = Array.from({ length: m }, () => new Array<number>(m).fill(0));
@@ -50,12 +56,12 @@ export function normalisedRelations(fit: ReducedRankFit, m: number, names: reado
       for (let b = 0; b < p; b++) quadratic += w[a] * fit.s11.get(a, b) * w[b];
     }
     for (let i = 0; i < m; i++) {
-      beta[i][j] = w[i];
+      beta[i][j] = (w[i] * f(i)) / f(pivot);
       let s = 0;
       for (let b = 0; b < p; b++) s += fit.s01.get(i, b) * w[b];
-      alpha[i][j] = s / quadratic;
+      alpha[i][j] = ((s / quadratic) * f(pivot)) / f(i);
     }
-    if (p > m) deterministic.push(w[m]);
+    if (p > m) deterministic.push(w[m] / f(pivot));
   }
   return { beta, alpha, deterministic, warnings };
 }

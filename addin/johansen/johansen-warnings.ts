@@ -5,6 +5,7 @@
  * published table where both exist).
  */
 import { studentTwoSidedP } from '../distributions';
+import { toUnitScale } from '../linalg/power-of-two-scale';
 import { leastSquares } from '../regression/least-squares';
 import simulated from '../tables/johansen-simulated.json';
 import type { JohansenCase } from './deterministic-case';
@@ -18,7 +19,9 @@ const DRIFT_LEVEL = 0.05;
  * it ignores autocorrelation in the changes, which is enough for a warning.
  */
 export function driftingSeries(block: readonly ArrayLike<number>[]): boolean[] {
-  return block.map((x) => {
+  return block.map((given) => {
+    // The t-ratio is free of units; the squares are not (they vanish for prices of 1e-300).
+    const x = toUnitScale(given).values;
     const N = x.length - 1;
     let mean = 0;
     for (let t = 1; t <= N; t++) mean += x[t] - x[t - 1];

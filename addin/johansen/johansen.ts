@@ -10,6 +10,7 @@
  * Conventions (the reference library's, so 'none' and 'constant' compare exactly):
  * n = T - K - 1 observations, S = R'R / n, eigenvalues in descending order.
  */
+import { powerOfTwoScale, scaled } from '../linalg/power-of-two-scale';
 import type { Deterministic, ResultDetail, TestResult } from '../result';
 import { JOHANSEN_CASE_LABEL, type JohansenCase, type JohansenStatisticKind } from './deterministic-case';
 import { johansenDesign } from './johansen-design';
@@ -77,7 +78,12 @@ export function johansenTest(block: ArrayLike<number>[], options: JohansenOption
   const input = checkJohansenInput(block, options, names);
   const { caseName, lags, alpha } = input;
   const m = input.block.length;
-  const design = johansenDesign(input.block, lags, caseName, input.names);
+  // Eigenvalues and statistics are free of units; the moment matrices are not (they overflow
+  // for prices of 1e300 and vanish for 1e-300). Each series is brought to a size near one by a
+  // power of two, and the relations and loadings are converted back (johansen-relations.ts).
+  const scales = input.block.map((s) => powerOfTwoScale(s));
+  const unitBlock = input.block.map((s, i) => scaled(s, scales[i]));
+  const design = johansenDesign(unitBlock, lags, caseName, input.names);
   const fit = reducedRankRegression(design);
   const n = fit.nobs;
   const eigenvalues = fit.eigenvalues.slice(0, m);
@@ -89,7 +95,7 @@ export function johansenTest(block: ArrayLike<number>[], options: JohansenOption
   const perEquation = design.shortRun.length + design.levels.length;
   const warnings = [
     ...simulatedTableWarning(caseName),
-    ...driftWarnings(caseName, input.block, input.names),
+    ...driftWarnings(caseName, unitBlock, input.names),
     ...sampleWarnings(n, perEquation, input.smallSampleCorrection),
     ...eigenvalueWarnings(eigenvalues),
   ];
@@ -142,7 +148,7 @@ export function johansenTest(block: ArrayLike<number>[], options: JohansenOption
     trace: sequentialRank(trace.map((t) => t.pValue as number), alpha),
     maxEigen: sequentialRank(maxEigen.map((t) => t.pValue as number), alpha),
   };
-  const relations = normalisedRelations(fit, m, input.names);
+  const relations = normalisedRelations(fit, m, input.names, scales);
   warnings.push(...relations.warnings);
 
   const result: JohansenResult = {

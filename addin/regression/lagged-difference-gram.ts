@@ -14,6 +14,7 @@
  * so residual sums of squares change only by one common factor and t-ratios not at all:
  * the lag choice is the same. The chosen model is refitted by QR on the original data.
  */
+import { powerOfTwoScale } from '../linalg/power-of-two-scale';
 import type { Deterministic } from '../result';
 
 export interface DickeyFullerGram {
@@ -145,9 +146,13 @@ function condition(v: Float64Array, deterministic: Deterministic): number {
     const slope = stt > 0 ? st / stt : 0;
     for (let i = 0; i < n; i++) v[i] -= m + slope * (i - tMean);
   }
+  // The root mean square of v * f, f a power of two that brings v near one (exact): the squares
+  // of v itself overflow for values past about 1e154 and vanish below about 1e-154.
+  const f = powerOfTwoScale(v);
   let ss = 0;
-  for (let i = 0; i < n; i++) ss += v[i] * v[i];
-  const rms = Math.sqrt(ss / n);
-  if (rms > 0) for (let i = 0; i < n; i++) v[i] /= rms;
-  return rms > 0 ? rms : 1;
+  for (let i = 0; i < n; i++) ss += v[i] * f * (v[i] * f);
+  const scaledRms = Math.sqrt(ss / n);
+  if (!(scaledRms > 0)) return 1;
+  for (let i = 0; i < n; i++) v[i] = (v[i] * f) / scaledRms;
+  return scaledRms / f;
 }

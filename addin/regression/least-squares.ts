@@ -7,9 +7,18 @@
  *
  * One step of iterative refinement (Golub & Van Loan 2013, sec. 5.3.8) recovers the digits
  * that ill-conditioned designs such as the NIST Longley data lose in the first solve.
+ *
+ * The response and each column are first brought to a largest |value| in [1, 2) by a power of
+ * two (linalg/power-of-two-scale.ts), the fit is made on those, and the answers that carry
+ * units are converted back. Prices of 1e300 or 1e-300 then fit as prices of 1 do (no sum of
+ * squares overflows or underflows, so no column looks constant), and for ordinary prices the
+ * numbers are those of the unscaled fit to the last bit. What is a ratio (t-values, R^2) needs
+ * no conversion; SSR, sigma^2 and the covariance carry squared units and can pass the range of
+ * doubles for extreme prices even when every statistic above is fine.
  */
 import { MooringInputError } from '../errors';
 import { HouseholderQr, assertFullRank } from '../linalg/householder-qr';
+import { powerOfTwoScale, scaled } from '../linalg/power-of-two-scale';
 
 export interface LeastSquaresFit {
   coefficients: Float64Array;
@@ -55,6 +64,51 @@ export function leastSquares(y: ArrayLike<number>, columns: readonly ArrayLike<n
   if (n <= k) {
     throw new MooringInputError(`Too few observations (${n}) for ${k} regressors: add rows or use fewer lags.`);
   }
+  const yScale = powerOfTwoScale(y);
+  const columnScales = columns.map((c) => powerOfTwoScale(c));
+  const fit = fitScaled(
+    yScale === 1 ? y : scaled(y, yScale),
+    columns.map((c, j) => (columnScales[j] === 1 ? c : scaled(c, columnScales[j]))),
+    options,
+  );
+  return yScale === 1 && columnScales.every((f) => f === 1) ? fit : inOriginalUnits(fit, yScale, columnScales);
+}
+
+/**
+ * A fit on y * yScale and columns * columnScales[j], in the units of y and the columns: each
+ * coefficient (and its standard error) times columnScales[j] / yScale, residuals over yScale,
+ * SSR and sigma^2 over yScale^2; t-values and R^2 are ratios and stay.
+ */
+function inOriginalUnits(fit: LeastSquaresFit, yScale: number, columnScales: readonly number[]): LeastSquaresFit {
+  const k = fit.k;
+  const unit = columnScales.map((c) => c / yScale);
+  const coefficients = fit.coefficients.map((b, j) => b * unit[j]);
+  const standardErrors = fit.standardErrors.map((se, j) => se * unit[j]);
+  const covariance = fit.covariance.map((row, i) => row.map((v, j) => v * unit[i] * unit[j]));
+  const residuals = fit.residuals.map((r) => r / yScale);
+  const ssr = fit.ssr / yScale / yScale;
+  // The log-likelihood from the scaled SSR, moved by n ln(yScale): finite even when SSR is not.
+  const logLikelihood = Number.isFinite(ssr) && ssr >= 2 ** -1022 ? gaussianLogLikelihood(ssr, fit.nobs) : fit.logLikelihood + fit.nobs * Math.log(yScale);
+  const n = fit.nobs;
+  return {
+    ...fit,
+    coefficients,
+    standardErrors,
+    covariance,
+    residuals,
+    ssr,
+    sigma2: fit.sigma2 / yScale / yScale,
+    logLikelihood,
+    aic: -2 * logLikelihood + 2 * k,
+    bic: -2 * logLikelihood + k * Math.log(n),
+    hqic: -2 * logLikelihood + 2 * k * Math.log(Math.log(n)),
+  };
+}
+
+/** The least-squares fit proper, on the response and columns as given (see the file comment). */
+function fitScaled(y: ArrayLike<number>, columns: readonly ArrayLike<number>[], options: LeastSquaresOptions): LeastSquaresFit {
+  const n = y.length;
+  const k = columns.length;
   const qr = new HouseholderQr(columns, n);
   assertFullRank(qr, options.names);
 

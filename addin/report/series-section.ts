@@ -3,6 +3,7 @@
  * decision (integrationOrder), the tests behind it, and its values for the chart, rebased to
  * 100 at the first row so series in different units share one axis.
  */
+import { toUnitScale } from '../linalg/power-of-two-scale';
 import type { Deterministic } from '../result';
 import { integrationOrder, type IntegrationOrderResult } from '../unitroot/integration-order';
 import type { SeriesReport } from './report-types';
@@ -27,13 +28,14 @@ export function chartLine(values: Float64Array, logged: boolean): SeriesReport['
   const first = values[0];
   if (logged) return { kind: 'rebased', values: Array.from(values, (v) => 100 * Math.exp(v - first)) };
   if (values.every((v) => v > 0)) return { kind: 'rebased', values: Array.from(values, (v) => (100 * v) / first) };
+  const unit = toUnitScale(values).values; // standardised values are free of units; squares of 1e300 are not
   let mean = 0;
-  for (const v of values) mean += v;
-  mean /= values.length;
+  for (const v of unit) mean += v;
+  mean /= unit.length;
   let ss = 0;
-  for (const v of values) ss += (v - mean) ** 2;
-  const sd = Math.sqrt(ss / (values.length - 1));
-  return { kind: 'standardised', values: Array.from(values, (v) => (v - mean) / sd) };
+  for (const v of unit) ss += (v - mean) ** 2;
+  const sd = Math.sqrt(ss / (unit.length - 1));
+  return { kind: 'standardised', values: Array.from(unit, (v) => (v - mean) / sd) };
 }
 
 /** The series section of one series. */

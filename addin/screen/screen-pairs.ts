@@ -124,7 +124,7 @@ export function finishScreen(universe: ScreenUniverse, settings: ScreenSettings,
     matrix[yi][xi] = fieldOrNull(records, d, FIELD.pValue);
     adjustedMatrix[yi][xi] = adjusted[f];
   });
-  const all = decodePairs(names, records, tested, adjusted, (d) => directedSeries(d, N), settings, orders);
+  const all = decodePairs(names, records, tested, adjusted, (d) => directedSeries(d, N), settings, orders, universe.scales);
   const position = new Map(names.map((n, i) => [n, i] as const));
   const pairs = rankByEvidence(all.filter((p) => withinHalfLifeRange(p, settings)), position);
   const rawPasses = all.filter((p) => p.pValue <= settings.alpha).length;

@@ -50,8 +50,10 @@ export type DirectedIndex = (d: number) => [number, number];
 /** Every tested directed record as a ScreenPair, with its adjusted p-value and the orders of its two series. */
 export function decodePairs(
   names: readonly string[], records: Float64Array, tested: readonly number[], adjusted: Float64Array, seriesOf: DirectedIndex, settings: ScreenSettings,
-  orders: readonly SeriesOrder[],
+  orders: readonly SeriesOrder[], scales?: ArrayLike<number>,
 ): ScreenPair[] {
+  // The records are in the universe's units (each series times a power of two, screen-universe.ts).
+  const scale = (i: number) => scales?.[i] ?? 1;
   return tested.map((d, f) => {
     const [yi, xi] = seriesOf(d);
     const at = (field: number) => records[d * RECORD_SIZE + field];
@@ -65,8 +67,8 @@ export function decodePairs(
       pValue: at(FIELD.pValue),
       adjustedPValue: adjusted[f],
       discovery: adjusted[f] <= settings.alpha,
-      beta: at(FIELD.beta),
-      intercept: at(FIELD.intercept),
+      beta: (at(FIELD.beta) * scale(xi)) / scale(yi),
+      intercept: at(FIELD.intercept) / scale(yi),
       halfLife: fieldOrNull(records, d, FIELD.halfLife),
       zscore: fieldOrNull(records, d, FIELD.zscore),
       lags: fieldOrNull(records, d, FIELD.lags),

@@ -5,8 +5,14 @@
  *
  * For a series without gaps the mean and the centred sum of squares are computed here once
  * (two passes, for accuracy), so a pair of complete series needs only its cross product.
+ *
+ * Each series is stored times a power of two that brings its largest |price| into [1, 2)
+ * (linalg/power-of-two-scale.ts): the statistics of a pair are free of units, and the sums of
+ * squares would overflow for prices of 1e300 and vanish for 1e-300. The factors travel with the
+ * data, and the hedge ratio and intercept are converted back when the pairs are read out.
  */
 import { MooringInputError } from '../errors';
+import { powerOfTwoScale } from '../linalg/power-of-two-scale';
 import type { SeriesOrder } from './series-orders';
 
 /** One named series as a caller hands it in: numbers, with null or NaN for a gap. */
@@ -28,6 +34,8 @@ export interface ScreenUniverse {
   means: Float64Array;
   /** Sum of squared deviations from the mean of each complete series (NaN for one with gaps). */
   centredSquares: Float64Array;
+  /** The power of two each series was multiplied by (data, means and centredSquares are in those units). */
+  scales: Float64Array;
   /**
    * Each series' order of integration (series-orders.ts), once decided: the chunk function then
    * tests only the pairs whose members share an order of 1 or more. Absent: every pair is tested.
@@ -58,6 +66,7 @@ export function screenUniverse(series: readonly NamedSeries[]): ScreenUniverse {
   const complete = new Uint8Array(N);
   const means = new Float64Array(N).fill(Number.NaN);
   const centredSquares = new Float64Array(N).fill(Number.NaN);
+  const scales = new Float64Array(N).fill(1);
   for (let j = 0; j < N; j++) {
     const values = series[j].values;
     if (values?.length !== rows) {
@@ -82,6 +91,9 @@ export function screenUniverse(series: readonly NamedSeries[]): ScreenUniverse {
         );
       }
     }
+    const factor = powerOfTwoScale(data.subarray(offset, offset + rows).filter((v) => v === v));
+    scales[j] = factor;
+    for (let t = 0; t < rows; t++) data[offset + t] *= factor;
     if (gaps === 0 && rows > 0) {
       complete[j] = 1;
       let m = 0;
@@ -93,7 +105,7 @@ export function screenUniverse(series: readonly NamedSeries[]): ScreenUniverse {
       centredSquares[j] = ss;
     }
   }
-  return { names, rows, data, complete, means, centredSquares };
+  return { names, rows, data, complete, means, centredSquares, scales };
 }
 
 /** Number of unordered pairs of N series. */

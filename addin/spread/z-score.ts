@@ -11,6 +11,7 @@
  */
 import { MooringInputError } from '../errors';
 import { requireAlignedSeries } from '../cointegration/cointegrating-regression';
+import { toUnitScale } from '../linalg/power-of-two-scale';
 import { SlidingComoments } from '../stability/sliding-comoments';
 
 /**
@@ -35,14 +36,17 @@ function meanOf(s: ArrayLike<number>): number {
 export function zScore(spread: ArrayLike<number>): ZScores {
   const n = requireAlignedSeries([spread], ['the spread']);
   if (n < 2) throw new MooringInputError(`${n} value is too few for a z-score: it needs at least 2.`);
-  const mean = meanOf(spread);
+  // z-scores are free of units; the sum of squares is not (it overflows for spreads of 1e300 and
+  // vanishes for 1e-300), so it runs on the spread brought to a size near one by a power of two.
+  const { values: unit, factor } = toUnitScale(spread);
+  const mean = meanOf(unit);
   let ss = 0;
-  for (let i = 0; i < n; i++) ss += (spread[i] - mean) ** 2;
+  for (let i = 0; i < n; i++) ss += (unit[i] - mean) ** 2;
   const standardDeviation = Math.sqrt(ss / (n - 1));
   if (!(standardDeviation > 0)) throw new MooringInputError('The spread is constant, so it has no z-score: every value equals the mean.');
   const values = new Float64Array(n);
-  for (let i = 0; i < n; i++) values[i] = (spread[i] - mean) / standardDeviation;
-  return { values, mean, standardDeviation };
+  for (let i = 0; i < n; i++) values[i] = (unit[i] - mean) / standardDeviation;
+  return { values, mean: mean / factor, standardDeviation: standardDeviation / factor };
 }
 
 /**
@@ -57,14 +61,15 @@ export function rollingZScore(spread: ArrayLike<number>, window: number): (numbe
   }
   if (window > n) throw new MooringInputError(`A rolling window of ${window} is longer than the spread (${n} values): use at most ${n}.`);
   const out: (number | null)[] = new Array(n).fill(null);
+  const { values: unit } = toUnitScale(spread); // as in zScore: no overflow or underflow in the squares
   const sliding = new SlidingComoments(1, (t, row) => {
-    row[0] = spread[t];
+    row[0] = unit[t];
   });
   for (let i = window - 1; i < n; i++) {
     sliding.moveTo(i - window + 1, i);
     const mean = sliding.moments.mean(0);
     const sd = Math.sqrt(Math.max(sliding.moments.comoment(0, 0), 0) / (window - 1));
-    out[i] = sd > 0 && sd > CONSTANT_WINDOW * Math.abs(mean) ? (spread[i] - mean) / sd : null;
+    out[i] = sd > 0 && sd > CONSTANT_WINDOW * Math.abs(mean) ? (unit[i] - mean) / sd : null;
   }
   return out;
 }

@@ -19,6 +19,7 @@
 import { EXACT_FIT_R_SQUARED, requireAlignedSeries } from '../cointegration/cointegrating-regression';
 import { residualTauPValue } from '../cointegration/residual-tables';
 import { MooringInputError } from '../errors';
+import { powerOfTwoScale, scaled } from '../linalg/power-of-two-scale';
 import { ResidualAdfWorkspace } from '../screen/residual-adf-workspace';
 import { halfLifeFromSpeed } from '../spread/half-life';
 import { resolveMaxLag } from '../unitroot/max-lag';
@@ -61,9 +62,16 @@ export interface RollingRelation {
 }
 
 /** Rolling or expanding Engle-Granger, hedge ratio and half-life of y on x (see the file comment). */
-export function rollingRelation(y: ArrayLike<number>, x: ArrayLike<number>, options: RollingOptions, names = { y: 'y', x: 'x' }): RollingRelation {
+export function rollingRelation(givenY: ArrayLike<number>, givenX: ArrayLike<number>, options: RollingOptions, names = { y: 'y', x: 'x' }): RollingRelation {
   if (!options || typeof options !== 'object') throw new MooringInputError('Give the window: rollingRelation(y, x, { window: 250 }).');
-  const T = requireAlignedSeries([y, x], [names.y, names.x]);
+  const T = requireAlignedSeries([givenY, givenX], [names.y, names.x]);
+  // Every statistic but the line is free of units; the co-moments are not (they overflow for
+  // prices of 1e300 and vanish for 1e-300): both series are brought to a size near one by a
+  // power of two, and the hedge ratio and intercept are converted back below.
+  const fy = powerOfTwoScale(givenY);
+  const fx = powerOfTwoScale(givenX);
+  const y = scaled(givenY, fy);
+  const x = scaled(givenX, fx);
   const step = options.step ?? 1;
   const expanding = options.expanding === true;
   const plan = windowPlan(T, options.window, step, expanding);
@@ -102,8 +110,8 @@ export function rollingRelation(y: ArrayLike<number>, x: ArrayLike<number>, opti
     const beta = cxy / cxx;
     const intercept = L.mean(1) - beta * L.mean(0);
     const rSquared = (cxy / cxx) * (cxy / cyy);
-    out.beta.push(beta);
-    out.intercept.push(intercept);
+    out.beta.push((beta * fx) / fy);
+    out.intercept.push(intercept / fy);
     out.rSquared.push(rSquared);
     if (rSquared >= EXACT_FIT_R_SQUARED) {
       out.halfLife.push(null);

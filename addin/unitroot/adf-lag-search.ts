@@ -51,7 +51,12 @@ export function chooseAdfLags(x: ArrayLike<number>, deterministic: Deterministic
   let bestValue = Number.POSITIVE_INFINITY;
   for (let p = 0; p <= usableLags; p++) {
     const k = base + p;
-    const llf = gaussianLogLikelihood(fits.ssr[k] * unit, n);
+    // In the data's units; from the scaled SSR and the log of the scale where the product would
+    // pass the range of doubles (the choice is the same either way: the shift is common to all lags).
+    const inUnits = fits.ssr[k] * unit;
+    const llf = Number.isFinite(inUnits) && inUnits >= 2 ** -1022
+      ? gaussianLogLikelihood(inUnits, n)
+      : gaussianLogLikelihood(fits.ssr[k], n) - n * Math.log(gram.responseScale);
     const value = rule === 'aic' ? -2 * llf + 2 * k : -2 * llf + k * Math.log(n);
     if (value < bestValue) {
       bestValue = value;

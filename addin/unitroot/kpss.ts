@@ -10,6 +10,7 @@
 import { MooringInputError } from '../errors';
 import { pValueBoundNote, pValueBoundText } from '../p-value-bound';
 import type { TestResult } from '../result';
+import { toUnitScale } from '../linalg/power-of-two-scale';
 import { leastSquares } from '../regression/least-squares';
 import { bartlettLongRunVariance, neweyWestBandwidth } from '../regression/long-run-variance';
 import { kpssCriticalValues, kpssPValue } from '../tables/kpss-table';
@@ -44,7 +45,10 @@ export function kpssTest(series: ArrayLike<number>, options: KpssOptions = {}, n
   }
   const n = series.length;
   if (n < 3) throw new MooringInputError(`${n} observations are too few for the KPSS test.`);
-  const e = detrendedResiduals(series, deterministic);
+  // The statistic is free of units; the sums below are not (they overflow for prices of 1e300
+  // and vanish for 1e-300), so they run on the series brought to a size near one.
+  const unit = toUnitScale(series);
+  const e = detrendedResiduals(unit.values, deterministic);
   const requested = options.bandwidth ?? 'auto';
   if (requested !== 'auto' && typeof requested !== 'number') {
     throw new MooringInputError(`Unknown bandwidth '${String(requested)}': use a whole number or auto.`);
@@ -85,7 +89,7 @@ export function kpssTest(series: ArrayLike<number>, options: KpssOptions = {}, n
     warnings,
     details: [
       { key: 'bandwidthRule', label: 'Bandwidth rule', value: requested === 'auto' ? 'Newey-West (1994) automatic' : 'fixed' },
-      { key: 'longRunVariance', label: 'Long-run variance of the residuals', value: lrv },
+      { key: 'longRunVariance', label: 'Long-run variance of the residuals', value: lrv / unit.factor / unit.factor },
     ],
   };
 }

@@ -14,6 +14,7 @@ import { DETERMINISTIC_WORDS, type Deterministic, type TestResult } from '../res
 import { bartlettLongRunVariance, neweyWestBandwidth } from '../regression/long-run-variance';
 import { mackinnonCriticalValues, mackinnonTauPValue, tableCaseOf } from '../tables/mackinnon-tau';
 import { mackinnonZPValue } from '../tables/mackinnon-z';
+import { toUnitScale } from '../linalg/power-of-two-scale';
 import { adfRegression } from './adf-regression';
 import { unitRootHypotheses } from './hypotheses';
 
@@ -29,9 +30,13 @@ export interface PhillipsPerronStatistics {
   nobs: number;
 }
 
-/** Z-tau and Z-alpha from the lag-0 Dickey-Fuller regression of x. */
+/**
+ * Z-tau and Z-alpha from the lag-0 Dickey-Fuller regression of x. Both are free of units, so x is
+ * first brought to a size near one (linalg/power-of-two-scale.ts): the variances below would
+ * overflow for prices of 1e300 and vanish for prices of 1e-300.
+ */
 export function phillipsPerronStatistics(x: ArrayLike<number>, deterministic: Deterministic, bandwidth: number | 'auto'): PhillipsPerronStatistics {
-  const { fit, gamma, tau, nobs: n } = adfRegression(x, 0, deterministic);
+  const { fit, gamma, tau, nobs: n } = adfRegression(toUnitScale(x).values, 0, deterministic);
   const u = fit.residuals;
   const L = bandwidth === 'auto' ? neweyWestBandwidth(u) : bandwidth;
   const lambda2 = bartlettLongRunVariance(u, L);

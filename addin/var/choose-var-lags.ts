@@ -19,6 +19,7 @@
  */
 import { CholeskyDecomposition, Matrix } from 'ml-matrix';
 import { MooringInputError } from '../errors';
+import { powerOfTwoScale, scaled } from '../linalg/power-of-two-scale';
 import { nestedVarResiduals } from './nested-var-residuals';
 import { checkedBlock, checkedLagCount } from './var-design';
 import { varLagCrossProductsByQr } from './var-lag-cross-products-qr';
@@ -139,7 +140,14 @@ export function chooseVarLags(
 
   const n = T - maxLags;
   const names = series.map((_, k) => options.names?.[k] ?? `series ${k + 1}`);
-  const { crossProducts, logScale } = residualCrossProducts(series, maxLags, names, options.method ?? 'auto');
+  // The orders are free of units; the cross products are not (they overflow for prices of 1e300
+  // and vanish for 1e-300): each series is brought near one by a power of two f_k (exact), and
+  // ln|Sigma| of the data is that of the scaled series less 2 sum ln f_k.
+  const factors = series.map((s) => powerOfTwoScale(s));
+  const unitSeries = series.map((s, k) => scaled(s, factors[k]));
+  const found = residualCrossProducts(unitSeries, maxLags, names, options.method ?? 'auto');
+  const { crossProducts } = found;
+  const logScale = found.logScale - 2 * factors.reduce((sum, f) => sum + Math.log(f), 0);
   const table: VarLagRow[] = [];
   for (let p = 0; p <= maxLags; p++) {
     const e = crossProducts[p];
