@@ -84,7 +84,7 @@ describe('the command line, the report and the formulas agree on one analysis', 
       const pair = report.pairs[0];
       const y: string = pair.relation.dependent.replace(/^ln\((.*)\)$/, '$1');
       const x: string = pair.relation.regressor.replace(/^ln\((.*)\)$/, '$1');
-      const cells = { [A]: columnCells(csv, A), [B]: columnCells(csv, B) };
+      const cells: Record<string, (number | null)[][]> = { [A]: columnCells(csv, A), [B]: columnCells(csv, B) };
       const yc = cells[y];
       const xc = cells[x];
 
