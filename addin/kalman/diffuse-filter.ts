@@ -20,8 +20,12 @@
 /** A symmetric 2 x 2 matrix [p11, p12, p22]. */
 export type Sym2 = [number, number, number];
 
-/** Below this F_inf (relative to the size of P_inf's diagonal) a row counts as no longer diffuse; the same tolerance ends the diffuse period. */
-const DIFFUSE_TOLERANCE = 1e-9;
+/**
+ * Below this F_inf, relative to the size of the terms it is summed from (|p11| + 2 |p12 x| + |p22| x^2),
+ * a row's F_inf is rounding and the row is not diffuse (its design repeats an earlier one). Each diffuse
+ * row lowers the rank of P_inf by one (P_inf - M M' / F_inf), so the period ends after two of them.
+ */
+const DIFFUSE_TOLERANCE = 1e-11;
 
 export interface FilterInput {
   y: ArrayLike<number>;
@@ -116,8 +120,8 @@ function runFilter(y: ArrayLike<number>, x: ArrayLike<number>, q: number, r: num
       mi0 = i11 + i12 * xt;
       mi1 = i12 + i22 * xt;
       Finf = mi0 + mi1 * xt;
-      const scale = Math.max(i11, i22, 1e-300) * (1 + xt * xt);
-      if (!(Finf > DIFFUSE_TOLERANCE * scale)) Finf = 0;
+      const size = Math.abs(i11) + 2 * Math.abs(i12 * xt) + Math.abs(i22) * xt * xt;
+      if (!(Finf > DIFFUSE_TOLERANCE * size)) Finf = 0;
     }
     if (Finf > 0) {
       // Diffuse row (Durbin & Koopman 2012, eqs. 5.12-5.14 with T = I):
@@ -154,8 +158,8 @@ function runFilter(y: ArrayLike<number>, x: ArrayLike<number>, q: number, r: num
       out.filteredInf[3 * t] = stillDiffuse ? i11 : 0; out.filteredInf[3 * t + 1] = stillDiffuse ? i12 : 0; out.filteredInf[3 * t + 2] = stillDiffuse ? i22 : 0;
     }
     if (stillDiffuse) {
-      // The diffuse period ends once P_inf has vanished (to rounding).
-      if (Math.abs(i11) + Math.abs(i22) < DIFFUSE_TOLERANCE) {
+      // The diffuse period ends once P_inf has lost both its dimensions (exactly zero, not rounding).
+      if (diffuseSteps === 2) {
         stillDiffuse = false;
         i11 = 0; i12 = 0; i22 = 0;
         diffuseRows = t + 1;

@@ -1,7 +1,8 @@
 """Times the reference library (Debian's python3-statsmodels) on the series the Mooring
 benchmark hands it, so `npm run bench` can print the ratio of our time to its time.
 
-Input: a JSON file {"adf": [[...series...]], "coint": [[y, x], ...], "johansen": [[[...], ...]]}.
+Input: a JSON file {"adf": [[...series...]], "coint": [[y, x], ...], "johansen": [[[...], ...]],
+"kalman": [[y, x]]}.
 Output: one JSON object on stdout with the median milliseconds per call of each routine.
 Only the benchmark runs this; tests and CI never do.
 """
@@ -12,7 +13,37 @@ import warnings
 
 import numpy as np
 from statsmodels.tsa.stattools import adfuller, coint
+from statsmodels.tsa.statespace.mlemodel import MLEModel
 from statsmodels.tsa.vector_ar.vecm import coint_johansen
+
+
+class WanderingLine(MLEModel):
+    """y_t = a_t + b_t x_t + e_t, (a, b) random walks with covariance Q I, exact diffuse start
+    (the model of tests/reference/makers/state_space.py); params (Q, R) in logs."""
+
+    def __init__(self, y, x):
+        super().__init__(y, k_states=2, k_posdef=2, initialization="diffuse")
+        design = np.zeros((1, 2, len(y)))
+        design[0, 0, :] = 1.0
+        design[0, 1, :] = x
+        self.ssm["design"] = design
+        self.ssm["transition"] = np.eye(2)
+        self.ssm["selection"] = np.eye(2)
+
+    @property
+    def start_params(self):
+        return np.array([1e-4, 1.0])
+
+    def transform_params(self, unconstrained):
+        return np.exp(unconstrained)
+
+    def untransform_params(self, constrained):
+        return np.log(constrained)
+
+    def update(self, params, **kwargs):
+        params = super().update(params, **kwargs)
+        self.ssm["state_cov"] = np.eye(2) * params[0]
+        self.ssm["obs_cov"] = np.array([[params[1]]])
 
 
 def median_ms(task, runs):
@@ -39,6 +70,12 @@ def main():
     if spec.get("johansen"):
         block = np.column_stack([np.asarray(v) for v in spec["johansen"][0]])
         out["cointJohansenMs"] = median_ms(lambda: coint_johansen(block, 0, 2), 10)
+    if spec.get("kalman"):
+        y, x = (np.asarray(v) for v in spec["kalman"][0])
+        # One maximum-likelihood fit from the default start, then the smoother at the estimate:
+        # the work `movingHedge` does (ours also searches a grid first).
+        model = WanderingLine(y, x)
+        out["kalmanMlMs"] = median_ms(lambda: model.smooth(model.fit(disp=False).params), 5)
     print(json.dumps(out))
 
 

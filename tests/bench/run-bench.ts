@@ -16,6 +16,7 @@ import { benchBlock, benchJohansen } from '../../addin/bench/johansen-bench';
 import { benchCausality } from '../../addin/bench/causality-bench';
 import { benchBreaks } from '../../addin/bench/breaks-bench';
 import { benchScreen } from '../../addin/bench/screen-bench';
+import { benchKalman, kalmanBenchPair } from '../../addin/bench/path-bench';
 import { benchFunctions } from './functions-bench';
 import type { Timing } from '../../addin/bench/timing';
 
@@ -23,6 +24,7 @@ interface ReferenceTimes {
   adfullerAicMs?: number;
   cointAicMs?: number;
   cointJohansenMs?: number;
+  kalmanMlMs?: number;
 }
 
 function referenceTimes(spec: object): ReferenceTimes | string {
@@ -49,12 +51,15 @@ function main(): void {
   const breaks = benchBreaks();
   const functions = benchFunctions();
   const screen = benchScreen();
+  const kalman = benchKalman();
+  const kalmanPair = kalmanBenchPair();
   const walk = Array.from(randomWalk(new SeededRandom(11), 10_000, { start: 100 }));
   const pair = benchPair();
   const reference = referenceTimes({
     adf: [walk],
     coint: [[Array.from(pair.y), Array.from(pair.x)]],
     johansen: [benchBlock().map((s) => Array.from(s))],
+    kalman: [[Array.from(kalmanPair.y), Array.from(kalmanPair.x)]],
   });
   const comparisons: Record<string, unknown> = {};
   if (typeof reference === 'object' && reference.adfullerAicMs) {
@@ -69,7 +74,11 @@ function main(): void {
     const ours = johansen[0].medianMs;
     comparisons.johansen6x2500 = { oursMs: ours, referenceMs: round(reference.cointJohansenMs), ratio: round(ours / reference.cointJohansenMs) };
   }
-  const all: Timing[] = [...unitRoot, ...cleaner, ...cointegration, ...johansen, ...causality, ...breaks, ...functions, ...screen];
+  if (typeof reference === 'object' && reference.kalmanMlMs) {
+    const ours = kalman[0].medianMs;
+    comparisons.kalmanMl2500 = { oursMs: ours, referenceMs: round(reference.kalmanMlMs), ratio: round(ours / reference.kalmanMlMs) };
+  }
+  const all: Timing[] = [...unitRoot, ...cleaner, ...cointegration, ...johansen, ...causality, ...breaks, ...functions, ...screen, ...kalman];
   const report = {
     machine: { node: process.version, cpus: cpus().length },
     benchmarks: all,
