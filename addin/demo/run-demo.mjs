@@ -2,7 +2,9 @@
 // The Mooring demo (`npm run demo`, which builds the command line first): runs the built
 // `mooring report` on the invented Quennel Delta market (addin/demo/data/quennel-delta.csv,
 // every series, in natural logs), prints the readable diagnostic, and writes the
-// self-contained HTML report under dist/demo/, which git ignores. The structure the
+// self-contained HTML report under demo-output/, which git ignores. It stays outside dist/
+// on purpose: `npm run build` empties dist/ (webpack's output.clean keeps only dist/cli), and
+// a report a person just made must survive the next build. The structure the
 // generator built into the file is described in addin/demo/README.md (DEMO_TRUTH).
 
 import { spawnSync } from 'node:child_process';
@@ -13,7 +15,7 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 const CLI = join('dist', 'cli', 'mooring.js');
 const DATA = join('addin', 'demo', 'data', 'quennel-delta.csv');
-const OUT_DIR = join('dist', 'demo');
+const OUT_DIR = 'demo-output';
 const OUT = join(OUT_DIR, 'mooring-demo-report.html');
 
 if (!existsSync(join(ROOT, CLI))) {
