@@ -1,15 +1,14 @@
-// Every custom function the add-in registers. The build's metadata plugin turns each
-// `@customfunction` JSDoc below into an entry of functions.json (types from the signature) and
-// appends the associate calls; each wrapper is thin, its work in ./analyses or ./version.ts.
-
+// Every custom function the add-in registers: the build's metadata plugin turns each `@customfunction`
+// JSDoc below into an entry of functions.json (types from the signature) and appends the associate calls.
+// Each wrapper is thin, its work in ./analyses or ./version.ts. Ranges are `any[][]` and options `any`, so
+// blanks, text and errors reach the shared cleaner untouched (cells/range-input.ts); answer() maps every
+// refusal to a cell error once.
 /// <reference types="custom-functions-runtime" />
-
-// Ranges are `any[][]` and options `any`, so blanks, text and errors reach the shared cleaner
-// untouched (cells/range-input.ts); answer() maps every refusal to a cell error once.
 
 import { answer } from './cells/answer';
 import { egCell, poCell } from './analyses/cointegration-cells';
 import { critCell } from './analyses/critical-value-cells';
+import { commonDatesCell } from './analyses/dates-cells';
 import { ecmCell } from './analyses/ecm-cells';
 import { johansenCell, rankCell } from './analyses/johansen-cells';
 import { grangerCell, varLagsCell } from './analyses/lead-lag-cells';
@@ -28,7 +27,6 @@ import { addinVersion } from './version';
 export function version(): string {
   return addinVersion();
 }
-
 /**
  * Augmented Dickey-Fuller test: does the series wander with no pull back (a unit root)? A small p-value says it reverts.
  * @customfunction ADF
@@ -43,7 +41,6 @@ export function version(): string {
 export function adf(series: any[][], deterministic?: any, lags?: any, show?: any, prep?: any): any[][] {
   return answer(() => adfCell(series, deterministic, lags, show, prep));
 }
-
 /**
  * KPSS test: is the series stationary around a level or a trend? A small p-value says it wanders.
  * @customfunction KPSS
@@ -58,7 +55,6 @@ export function adf(series: any[][], deterministic?: any, lags?: any, show?: any
 export function kpss(series: any[][], deterministic?: any, bandwidth?: any, show?: any, prep?: any): any[][] {
   return answer(() => kpssCell(series, deterministic, bandwidth, show, prep));
 }
-
 /**
  * Phillips-Perron test: a unit-root test that corrects for autocorrelation with a long-run variance instead of lags.
  * @customfunction PHILLIPSPERRON
@@ -73,7 +69,6 @@ export function kpss(series: any[][], deterministic?: any, bandwidth?: any, show
 export function phillipsperron(series: any[][], deterministic?: any, bandwidth?: any, show?: any, prep?: any): any[][] {
   return answer(() => ppCell(series, deterministic, bandwidth, show, prep));
 }
-
 /**
  * Order of integration: 0 if the series is stationary, 1 if its changes are, 2 if its changes of changes are.
  * @customfunction ORDER
@@ -87,7 +82,6 @@ export function phillipsperron(series: any[][], deterministic?: any, bandwidth?:
 export function order(series: any[][], alpha?: any, deterministic?: any, prep?: any): any[][] {
   return answer(() => orderCell(series, alpha, deterministic, prep));
 }
-
 /**
  * Engle-Granger test: is y tied to x in the long run (cointegrated)? A small p-value says the gap between them reverts.
  * @customfunction ENGLEGRANGER
@@ -103,7 +97,6 @@ export function order(series: any[][], alpha?: any, deterministic?: any, prep?: 
 export function englegranger(y: any[][], x: any[][], deterministic?: any, lags?: any, show?: any, prep?: any): any[][] {
   return answer(() => egCell(y, x, deterministic, lags, show, prep));
 }
-
 /**
  * Phillips-Ouliaris test: cointegration of y with x, correcting the residual test with a long-run variance.
  * @customfunction PHILLIPSOULIARIS
@@ -119,7 +112,6 @@ export function englegranger(y: any[][], x: any[][], deterministic?: any, lags?:
 export function phillipsouliaris(y: any[][], x: any[][], deterministic?: any, bandwidth?: any, show?: any, prep?: any): any[][] {
   return answer(() => poCell(y, x, deterministic, bandwidth, show, prep));
 }
-
 /**
  * Johansen test: do the series share any long-run relation? The headline is the p-value of the trace test of none.
  * @customfunction JOHANSEN
@@ -134,7 +126,6 @@ export function phillipsouliaris(y: any[][], x: any[][], deterministic?: any, ba
 export function johansen(block: any[][], lags?: any, deterministic?: any, show?: any, prep?: any): any[][] {
   return answer(() => johansenCell(block, lags, deterministic, show, prep));
 }
-
 /**
  * Number of long-run relations among the series, by Johansen's trace test taken step by step.
  * @customfunction RANK
@@ -149,7 +140,6 @@ export function johansen(block: any[][], lags?: any, deterministic?: any, show?:
 export function rank(block: any[][], lags?: any, deterministic?: any, alpha?: any, prep?: any): number {
   return answer(() => rankCell(block, lags, deterministic, alpha, prep));
 }
-
 /**
  * Hedge ratio: units of x that offset one unit of y in the long-run line y = intercept + beta x.
  * @customfunction HEDGE
@@ -164,7 +154,6 @@ export function rank(block: any[][], lags?: any, deterministic?: any, alpha?: an
 export function hedge(y: any[][], x: any[][], method?: any, show?: any, prep?: any): number {
   return answer(() => hedgeCell(y, x, method, show, prep));
 }
-
 /**
  * Spread of a pair, row by row: y - beta x for a given beta, or the least-squares gap y - intercept - beta x.
  * @customfunction SPREAD
@@ -178,7 +167,6 @@ export function hedge(y: any[][], x: any[][], method?: any, show?: any, prep?: a
 export function spread(y: any[][], x: any[][], beta?: any, prep?: any): any[][] {
   return answer(() => spreadCell(y, x, beta, prep));
 }
-
 /**
  * Half-life: periods for a gap in the spread to halve. One argument: that spread. Two: the Engle-Granger spread of y on x.
  * @customfunction HALFLIFE
@@ -192,7 +180,6 @@ export function spread(y: any[][], x: any[][], beta?: any, prep?: any): any[][] 
 export function halflife(y: any[][], x?: any[][], show?: any, prep?: any): any[][] {
   return answer(() => halfLifeCell(y, x, show, prep));
 }
-
 /**
  * Z-score of the spread, row by row: how many standard deviations it stands from its mean.
  * @customfunction ZSCORE
@@ -206,7 +193,6 @@ export function halflife(y: any[][], x?: any[][], show?: any, prep?: any): any[]
 export function zscore(y: any[][], x?: any[][], window?: any, prep?: any): any[][] {
   return answer(() => zScoreCell(y, x, window, prep));
 }
-
 /**
  * Error-correction model: how fast y moves back toward its long-run relation with x. The headline is y's speed.
  * @customfunction ECM
@@ -221,7 +207,6 @@ export function zscore(y: any[][], x?: any[][], window?: any, prep?: any): any[]
 export function ecm(y: any[][], x: any[][], lags?: any, show?: any, prep?: any): any[][] {
   return answer(() => ecmCell(y, x, lags, show, prep));
 }
-
 /**
  * Granger lead-lag test: does the past of one series help predict the other? A small p-value says it leads.
  * @customfunction GRANGER
@@ -237,7 +222,6 @@ export function ecm(y: any[][], x: any[][], lags?: any, show?: any, prep?: any):
 export function granger(cause: any[][], effect: any[][], lags?: any, method?: any, show?: any, prep?: any): any[][] {
   return answer(() => grangerCell(cause, effect, lags, method, show, prep));
 }
-
 /**
  * Lag order of a vector autoregression of the series, chosen by an information criterion.
  * @customfunction VARLAGS
@@ -251,7 +235,6 @@ export function granger(cause: any[][], effect: any[][], lags?: any, method?: an
 export function varlags(block: any[][], criterion?: any, maxlags?: any, prep?: any): number {
   return answer(() => varLagsCell(block, criterion, maxlags, prep));
 }
-
 /**
  * Pair screen: every pair of series wandering with the same order, tested both ways, p-values adjusted for the number tested, ranked.
  * @customfunction SCREEN
@@ -265,7 +248,6 @@ export function varlags(block: any[][], criterion?: any, maxlags?: any, prep?: a
 export function screen(block: any[][], alpha?: any, show?: any, prep?: any): any[][] {
   return answer(() => screenCell(block, alpha, show, prep));
 }
-
 /**
  * Rolling relation: the Engle-Granger p-value, hedge ratio and half-life of y on x in each window of rows.
  * @customfunction ROLLING
@@ -281,7 +263,6 @@ export function screen(block: any[][], alpha?: any, show?: any, prep?: any): any
 export function rolling(y: any[][], x: any[][], window: any, step?: any, show?: any, prep?: any): any[][] {
   return answer(() => rollingCell(y, x, window, step, show, prep));
 }
-
 /**
  * Critical value from the published tables: reject when a statistic is beyond it.
  * @customfunction CRIT
@@ -295,4 +276,16 @@ export function rolling(y: any[][], x: any[][], window: any, step?: any, show?: 
  */
 export function crit(test: any, observations?: any, variables?: any, deterministic?: any, level?: any): number {
   return answer(() => critCell(test, observations, variables, deterministic, level));
+}
+/**
+ * Joins two ranges kept on different calendars on the dates they share and spills one block: the dates, then the prices.
+ * @customfunction COMMONDATES
+ * @helpurl https://localhost:3000/docs/functions.md#commondates
+ * @param first A range: dates in its first column (oldest or newest first), prices in the columns beside them.
+ * @param second Another such range, on its own calendar. Nest COMMONDATES to join a third.
+ * @param [fillforward] Carry a price over at most this many missing dates of its own range. Default 0: only the dates both have.
+ * @returns The shared dates, oldest first, and the prices on them, for the other functions to read.
+ */
+export function commondates(first: any[][], second: any[][], fillforward?: any): any[][] {
+  return answer(() => commonDatesCell(first, second, fillforward));
 }

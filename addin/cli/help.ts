@@ -27,7 +27,7 @@ export function overallHelp(commands: readonly Command[]): string {
   return [
     'mooring: unit-root and cointegration tests on price histories in CSV files',
     '',
-    'Usage:  mooring <command> <file.csv> [options]',
+    'Usage:  mooring <command> <file.csv> [more.csv ...] [options]',
     '        mooring <command> --help      the options of one command',
     '',
     'Commands:',
@@ -36,9 +36,12 @@ export function overallHelp(commands: readonly Command[]): string {
     'Options of every command:',
     ...optionLines(COMMON_OPTIONS),
     '',
-    paragraph('The first line of the file names the columns. A date column (headed date, time, period and the like, or ' +
-      'holding ISO dates such as 2024-03-15) is found by itself and labels the rows; it is never read as numbers. ' +
-      'Give - as the file to read standard input.'),
+    paragraph('The first line of the file names the columns. Date columns (headed date, time, period and the like, ' +
+      'a header naming a date over spreadsheet day numbers, or dates such as 2024-03-15, 15/03/2024 or 3/15/2024) are found ' +
+      'by themselves (or named with --dates); they are never read as numbers. Rows that run newest first are put in date order; ' +
+      'repeated or shuffled dates are refused. Several files, or several date columns, are joined on the dates every series ' +
+      'has, and the output says how many rows each lost. Semicolon files with decimal commas are read. Half-lives and windows ' +
+      'are given in the spacing of the dates (days, weeks, months). Give - as the file to read standard input.'),
     '',
     'Exit status: 0 done; 2 bad input, with one line on standard error; 1 an internal error.',
     '',

@@ -55,6 +55,7 @@ const SURFACE: Record<string, { args: string[]; spills: boolean }> = {
   SCREEN: { args: ['block[]', 'alpha?', 'show?', 'prep?'], spills: true },
   ROLLING: { args: ['y[]', 'x[]', 'window', 'step?', 'show?', 'prep?'], spills: true },
   CRIT: { args: ['test', 'observations?', 'variables?', 'deterministic?', 'level?'], spills: false },
+  COMMONDATES: { args: ['first[]', 'second[]', 'fillforward?'], spills: true },
 };
 
 function argsOf(f: FunctionEntry): string[] {
