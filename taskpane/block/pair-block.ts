@@ -30,9 +30,14 @@ export interface BlockPlacement {
   anchor: string;
 }
 
-/** The workbook-level name of a pair's block: Mooring_<a>_<b>. */
-export function blockNameFor(a: string, b: string): string {
-  return safeName(`Mooring_${a}_${b}`, 'Mooring');
+/**
+ * The workbook-level name of a pair's block: Mooring_<a>_<b> for the first, Mooring_<a>_<b>_2,
+ * _3, ... for further blocks of the same pair elsewhere, so each placement keeps its own name
+ * (and its chart, which carries the same name).
+ */
+export function blockNameFor(a: string, b: string, copy = 1): string {
+  const tail = copy > 1 ? `_${copy}` : '';
+  return safeName(`Mooring_${a}_${b}`, 'Mooring').slice(0, 200 - tail.length) + tail;
 }
 
 /** Two columns to the right of the region, level with its header row. */
@@ -54,15 +59,15 @@ export function findPair(report: DiagnosticReport, a: string, b: string): PairRe
 const CHART_COLS = ['Date', 'Spread', 'Upper band (+2 sd)', 'Lower band (-2 sd)', 'z-score'];
 const TOP_ROWS = { title: 0, heads: 1, spill: 2 };
 
-/** Builds the block of one pair of the report over the region its data came from. */
-export function buildPairBlock(report: DiagnosticReport, pair: { a: string; b: string }, region: DataRegion, placement: BlockPlacement = besideRegion(region)): PairBlock {
+/** Builds the block of one pair of the report over the region its data came from, under `blockName` (default the pair's first name). */
+export function buildPairBlock(report: DiagnosticReport, pair: { a: string; b: string }, region: DataRegion, placement: BlockPlacement = besideRegion(region), blockName?: string): PairBlock {
   const p = findPair(report, pair.a, pair.b);
   const refs = new SeriesReferences(region);
   const y = p.relation?.dependent ?? p.a;
   const x = p.relation?.regressor ?? p.b;
   const g = new BlockGrid(placement.anchor, COL.chart + CHART_COLS.length);
   const { data } = report;
-  const name = blockNameFor(p.a, p.b);
+  const name = blockName ?? blockNameFor(p.a, p.b);
 
   // Title and source.
   const from = data.first.date ?? data.first.label;

@@ -41,7 +41,8 @@ export async function refreshBlock(port: WorkbookPort, name: string, options: Di
     : {};
   const report = regionReport(region, [note.a, note.b], { ...recorded, ...options });
   const old = parseRange(found.address);
-  const { block, chart } = buildPairBlock(report, { a: note.a, b: note.b }, region, { sheet: found.sheet, anchor: cellAddress({ row: old.top, col: old.left }) });
+  // The block keeps its own name (a second block of the same pair elsewhere has another).
+  const { block, chart } = buildPairBlock(report, { a: note.a, b: note.b }, region, { sheet: found.sheet, anchor: cellAddress({ row: old.top, col: old.left }) }, name);
   const plan = await planBlockWrite(port, block, chart);
   if (!plan.safe) return writePlannedBlock(port, plan, false);
   return writePlannedBlock(port, plan, true);
