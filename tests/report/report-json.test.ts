@@ -61,7 +61,7 @@ describe('mooring report --json', () => {
     const run = runMooring(['report', DEMO_CSV, '--series', 'GateGasoil,DockDiesel', '--log', '--json']);
     expect(run.code, run.stderr).toBe(0);
     const object = JSON.parse(run.stdout) as Record<string, unknown>;
-    expect(Object.keys(object).sort()).toEqual(['cautions', 'command', 'file', 'htmlFile', 'leftOut', 'report']);
+    expect(Object.keys(object).sort()).toEqual(['cautions', 'command', 'file', 'halfLifeUnit', 'htmlFile', 'leftOut', 'report', 'spacing', 'warnings']);
     expect(object.command).toBe('report');
     expect(object.htmlFile).toBeNull();
     expect(object.cautions).toEqual([...CAUTIONS]);
@@ -72,7 +72,7 @@ describe('mooring report --json', () => {
   });
 
   it('takes every column of numbers without --series, and names the columns it left out', () => {
-    const csv = 'Date,A,Region,B\n' + Array.from({ length: 40 }, (_, i) => `2024-01-${String((i % 28) + 1).padStart(2, '0')},${100 + i + Math.sin(i)},north,${50 + i * 0.5 + Math.cos(i * 1.7)}`).join('\n');
+    const csv = 'Date,A,Region,B\n' + Array.from({ length: 40 }, (_, i) => `${new Date(Date.UTC(2024, 0, 1 + i)).toISOString().slice(0, 10)},${100 + i + Math.sin(i)},north,${50 + i * 0.5 + Math.cos(i * 1.7)}`).join('\n');
     const run = runMooring(['report', 'mixed.csv', '--json'], { 'mixed.csv': csv });
     expect(run.code, run.stderr).toBe(0);
     const object = JSON.parse(run.stdout) as { report: typeof report; leftOut: string[] };
