@@ -75,6 +75,8 @@ function paneNumbers(report: DiagnosticReport, tableRows: number): Record<string
     [`Does ${p.adjustment.ecm.dependent.series} move back?`]: p.adjustment.ecm.dependent.speed,
     'Is that pull significant?': p.adjustment.ecm.dependent.speed / p.adjustment.ecm.dependent.standardError,
     'Does the spread revert? Half-life': p.adjustment.spreadAr1.halfLife,
+    'Half-life, low end of its 95% interval': p.adjustment.spreadAr1.halfLifeInterval.low,
+    'Half-life, high end of its 95% interval': p.adjustment.spreadAr1.halfLifeInterval.high,
     'Is the spread stretched now?': p.spread.latestZ,
     [`Does ${p.leadLag.aLeadsB.cause} lead`]: p.leadLag.aLeadsB.test.pValue,
     [`Does ${p.leadLag.bLeadsA.cause} lead`]: p.leadLag.bLeadsA.test.pValue,
