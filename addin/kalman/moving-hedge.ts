@@ -57,6 +57,9 @@ export interface MovingHedge {
   /** Smoothed (from every row). */
   betaSmoothed: number[];
   betaSmoothedStd: number[];
+  /** The smoothed slope's 95% band, row by row. */
+  betaSmoothedLow: number[];
+  betaSmoothedHigh: number[];
   interceptSmoothed: number[];
   interceptSmoothedStd: number[];
   /** One-step-ahead spread y_t - a_t - b_t x_t on the line known the row before, and that over its standard deviation. */
@@ -113,6 +116,8 @@ export function movingHedge(y: ArrayLike<number>, x: ArrayLike<number>, names: {
   const interceptSmoothedStd = Array.from(smooth.interceptVar, root);
 
   const z = normalQuantile(0.975);
+  const betaSmoothedLow = betaSmoothed.map((b, t) => b - z * betaSmoothedStd[t]);
+  const betaSmoothedHigh = betaSmoothed.map((b, t) => b + z * betaSmoothedStd[t]);
   const last = n - 1;
   const latestBeta = path.filteredB[last];
   const latestStd = betaStd[last] as number;
@@ -142,7 +147,7 @@ export function movingHedge(y: ArrayLike<number>, x: ArrayLike<number>, names: {
   return {
     names, rows: n, stateVar, obsVar, variances: estimate ? 'estimated' : 'given',
     logLikelihood: path.logLikelihood, diffuseRows: d,
-    beta, intercept, betaStd, interceptStd, betaSmoothed, betaSmoothedStd, interceptSmoothed, interceptSmoothedStd,
+    beta, intercept, betaStd, interceptStd, betaSmoothed, betaSmoothedStd, betaSmoothedLow, betaSmoothedHigh, interceptSmoothed, interceptSmoothedStd,
     spread, spreadStandardised, latest, fixedBeta, shareOutsideBand, smoothedRange: { low, high }, driftText,
     assumptions: MOVING_HEDGE_ASSUMPTIONS, driftMeaning: DRIFT_MEANING, warnings,
   };

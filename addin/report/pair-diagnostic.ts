@@ -18,6 +18,7 @@ import { pairSpread } from '../spread/pair-spread';
 import { spreadSeries } from '../spread/spread-series';
 import { longRunRelation } from './long-run-relation';
 import { adjustmentSection, spreadSection } from './pair-adjustment';
+import { movingHedgeSection } from './pair-moving-hedge';
 import { engleGrangerPair, pairCointegration, phillipsOuliarisSummary } from './pair-cointegration';
 import type { PairReport, UnavailablePart } from './pair-types';
 import { cointegrationVerdict, pairVerdicts } from './pair-verdicts';
@@ -99,6 +100,8 @@ export function diagnosePair(a: Float64Array, b: Float64Array, names: { a: strin
     ? null
     : attempt('error-correction model', unavailable, () => adjustmentSection(y, x, pair, yx, { alpha, deterministic, period: context.period }));
 
+  const movingHedge = exactFit ? null : attempt('moving hedge ratio', unavailable, () => movingHedgeSection(y, x, yx));
+
   const orderNumbers = { [names.a]: factsA.order, [names.b]: factsB.order };
   const verdict = cointegrationVerdict({ engleGranger: eg, evidence: eg.evidence, bothIntegrated }, yx.y, yx.x, orderNumbers);
   const partial: Omit<PairReport, 'verdicts' | 'warnings'> = {
@@ -109,6 +112,7 @@ export function diagnosePair(a: Float64Array, b: Float64Array, names: { a: strin
     relation,
     adjustment,
     spread,
+    movingHedge,
     unavailable,
   };
   return {

@@ -189,6 +189,32 @@ export interface PairWarning {
 }
 
 /** The full diagnosis of one pair. */
+/** The hedge ratio through time by the Kalman filter (report/pair-moving-hedge.ts), one value per row. */
+export interface MovingHedgeReport {
+  dependent: string;
+  regressor: string;
+  stateVar: number;
+  obsVar: number;
+  logLikelihood: number;
+  diffuseRows: number;
+  /** Filtered (from the rows up to each one), null in the set-up rows. */
+  beta: (number | null)[];
+  betaStd: (number | null)[];
+  /** Smoothed (from every row) with its 95% band. */
+  betaSmoothed: number[];
+  betaSmoothedLow: number[];
+  betaSmoothedHigh: number[];
+  /** The one-step-ahead spread over its standard deviation, null in the set-up rows. */
+  spreadStandardised: (number | null)[];
+  latest: { beta: number; betaStd: number; low: number; high: number; text: string };
+  fixedBeta: number;
+  shareOutsideBand: number;
+  driftText: string;
+  assumptions: string;
+  driftMeaning: string;
+  warnings: string[];
+}
+
 export interface PairReport {
   a: string;
   b: string;
@@ -197,6 +223,8 @@ export interface PairReport {
   relation: LongRunRelation | null;
   adjustment: AdjustmentReport | null;
   spread: SpreadReport | null;
+  /** The hedge ratio through time (Kalman filter); null when it could not be estimated. */
+  movingHedge: MovingHedgeReport | null;
   unavailable: UnavailablePart[];
   /** Plain-language verdicts at the report's level, in reading order. */
   verdicts: string[];

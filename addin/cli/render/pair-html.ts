@@ -13,7 +13,7 @@ import { fixed1, fixed4 } from './number-text';
 import { lineChart } from './svg-chart';
 
 /** Colours of the pair charts. */
-export const PAIR_COLOURS = { spread: '#1f5f66', mean: '#6d6a60', band: '#b4552f', zscore: '#5a4a86', zero: '#6d6a60' };
+export const PAIR_COLOURS = { spread: '#1f5f66', mean: '#6d6a60', band: '#b4552f', zscore: '#5a4a86', zero: '#6d6a60', filtered: '#8a6d1f', smoothedBand: '#9fb7b9' };
 
 function statusOf(pair: PairReport): { text: string; className: string } {
   const c = pair.cointegration;
@@ -100,6 +100,30 @@ function details(pair: PairReport, report: DiagnosticReport): string {
   return out.join('\n');
 }
 
+/** The hedge ratio through time: the Kalman filter's path with its band against the fixed least-squares ratio. */
+function movingHedgeSection(pair: PairReport, report: DiagnosticReport): string {
+  const m = pair.movingHedge;
+  if (!m) return '';
+  const chart = lineChart({
+    title: `Hedge ratio of ${m.dependent} on ${m.regressor} through time (Kalman filter)`,
+    width: 860,
+    height: 240,
+    xLabels: report.data.dates ?? report.data.rowLabels,
+    lines: [
+      { values: m.betaSmoothedLow, colour: PAIR_COLOURS.smoothedBand, label: 'smoothed, 95% band (low)' },
+      { values: m.betaSmoothedHigh, colour: PAIR_COLOURS.smoothedBand, label: 'smoothed, 95% band (high)' },
+      { values: m.beta, colour: PAIR_COLOURS.filtered, label: 'filtered (rows up to each)' },
+      { values: m.betaSmoothed, colour: PAIR_COLOURS.spread, label: 'smoothed (every row)' },
+    ],
+    rules: [{ y: m.fixedBeta, colour: PAIR_COLOURS.band, label: 'fixed least-squares ratio', dashed: true }],
+  });
+  const variances = `Q = ${m.stateVar.toPrecision(4)}, R = ${m.obsVar.toPrecision(4)} by maximum likelihood (exact diffuse log-likelihood ${formatStatistic(m.logLikelihood)}); the first ${m.diffuseRows} rows set the filter up.`;
+  return '<h4>The hedge ratio through time</h4>' +
+    `<figure>${chart}${el('figcaption', `${m.latest.text.charAt(0).toUpperCase()}${m.latest.text.slice(1)}. ${m.driftText}`)}</figure>` +
+    el('p', `${m.assumptions} ${m.driftMeaning} ${variances}`, 'note') +
+    (m.warnings.length > 0 ? `<ul class="warnings">${m.warnings.map((w) => el('li', w)).join('')}</ul>` : '');
+}
+
 /** The article of one pair. */
 export function renderPairHtml(pair: PairReport, report: DiagnosticReport, anchor: string): string {
   const c = pair.cointegration;
@@ -127,6 +151,7 @@ export function renderPairHtml(pair: PairReport, report: DiagnosticReport, ancho
       el('p', `${ll.why} Lags: ${leadLagLags(pair)}.`, 'note'));
   }
   if (c.cointegrated) parts.push(details(pair, report));
+  if (c.cointegrated) parts.push(movingHedgeSection(pair, report));
   if (pair.warnings.length > 0) parts.push(`<h4>Warnings</h4><ul class="warnings">${pair.warnings.map((w) => el('li', w.text)).join('')}</ul>`);
   parts.push('</article>');
   return parts.filter((p) => p !== '').join('\n');

@@ -61,6 +61,10 @@ export function renderPairTerminal(pair: PairReport, report: DiagnosticReport): 
     const side = (s: typeof adj.ecm.dependent): string => `${s.series} ${fixed4(s.speed)} (p ${formatPValue(s.pValue)}${s.corrects ? ', closes the gap' : ''})`;
     out.push(labelled('Speed of adjustment', `${side(adj.ecm.dependent)}; ${side(adj.ecm.regressor)}`));
   }
+  const moving = pair.movingHedge;
+  if (moving) {
+    out.push(labelled('Ratio through time', `${moving.latest.text} (Kalman filter). ${moving.driftText} ${moving.driftMeaning}`));
+  }
   const sp = pair.spread;
   if (sp) {
     const rolling = sp.latestRollingZ === null ? '' : `, ${formatStatistic(sp.latestRollingZ)} over the last ${sp.rollingWindow} ${period}s`;
