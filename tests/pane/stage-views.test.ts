@@ -29,7 +29,7 @@ beforeAll(async () => {
 describe('How each series moves', () => {
   it('says every price wanders when all are I(1), with a mark in words and the rebased chart', () => {
     const v = seriesStepView(two);
-    expect(v.headline).toBe('All 2 prices wander: each can be tested for a tie with the others.');
+    expect(v.headline).toBe('Both prices wander: they can be tested for a tie.');
     expect(v.items.map((i) => [i.name, i.mark.word, i.orderText])).toEqual([['GateGasoil', 'Wanders', 'I(1)'], ['DockDiesel', 'Wanders', 'I(1)']]);
     expect(v.items[1].verdict).toBe(two.series[1].verdict);
     expect(v.chart.time).toBe(true);
@@ -49,7 +49,7 @@ describe('How each series moves', () => {
 
   it('marks a stationary series apart and says not every price wanders', () => {
     const v = seriesStepView(five);
-    expect(v.headline).toBe('4 of 5 prices wander; pairs with the others are not read as long-run ties.');
+    expect(v.headline).toBe('4 of 5 prices wander; pairs with the other are not read as long-run ties.');
     expect(v.items.find((i) => i.name === 'TankPremium')?.mark).toEqual({ word: 'Returns to a level', tone: 'unsure' });
   });
 
@@ -70,7 +70,7 @@ describe('Tied together?', () => {
   it('marks the tight pair tied, with both residual tests, Phillips-Ouliaris and the Johansen reasons', () => {
     const v = tiedStepView(two, two.pairs[0]);
     expect(v.mark).toEqual({ word: 'Tied', tone: 'yes' });
-    expect(v.verdict).toBe(two.pairs[0].cointegration.verdict);
+    expect(v.verdict).toBe(`${two.pairs[0].cointegration.verdict} Johansen's rank test agrees.`);
     expect(v.tests.map((t) => t.label)).toEqual(['Engle-Granger, GateGasoil on DockDiesel', 'Engle-Granger, DockDiesel on GateGasoil', 'Phillips-Ouliaris']);
     expect(v.tests.every((t) => t.decision === 'rejects')).toBe(true);
     expect(v.johansen?.rows.map((r) => r.label)).toEqual(['Johansen: no relation', 'Johansen: at most 1']);
@@ -85,14 +85,14 @@ describe('Tied together?', () => {
     expect(v.system?.verdict).toBe(five.system?.verdict);
   });
 
-  it('says the tests do not apply to a pair with a stationary series, and no tie for unrelated prices', () => {
-    expect(tiedStepView(five, pairOf(five, 'GateGasoil', 'TankPremium')).mark).toEqual({ word: 'Tests do not apply', tone: 'unsure' });
+  it('marks a pair with a stationary series as not two wandering prices, and no tie for unrelated prices', () => {
+    expect(tiedStepView(five, pairOf(five, 'GateGasoil', 'TankPremium')).mark).toEqual({ word: 'Not two wandering prices', tone: 'unsure' });
     expect(tiedStepView(five, pairOf(five, 'GateGasoil', 'HeavyFuel')).mark).toEqual({ word: 'No tie found', tone: 'no' });
   });
 
   it('puts the tied pairs first in the picker and shows the first of them by default', () => {
     const options = pairOptions(five);
-    expect(options.slice(0, 2).map((o) => o.label)).toEqual(['GateGasoil and DockDiesel (tied)', 'HeavyFuel and BunkerBlend (tied)']);
+    expect(options.slice(0, 2).map((o) => o.label)).toEqual(['GateGasoil and DockDiesel (tied)', 'HeavyFuel and BunkerBlend (mixed evidence)']);
     expect(options).toHaveLength(10);
     expect(chosenPair(five, null)?.pair.b).toBe('DockDiesel');
     expect(chosenPair(five, 9)?.index).toBe(9);

@@ -65,15 +65,28 @@ export function seriesItem(s: SeriesReport, period: string): SeriesItemView {
   };
 }
 
+/** The step's first line: how many of the prices wander, with the verb agreeing with its subject. */
+export function seriesHeadline(wandering: number, total: number): string {
+  if (wandering === total) {
+    return total === 2
+      ? 'Both prices wander: they can be tested for a tie.'
+      : `All ${total} prices wander: each can be tested for a tie with the others.`;
+  }
+  if (wandering === 0) {
+    return total === 2
+      ? 'Neither price wanders like a random walk, so the tie tests that follow do not apply to them.'
+      : 'None of these prices wanders like a random walk, so the tie tests that follow do not apply to them.';
+  }
+  const verb = wandering === 1 ? 'wanders' : 'wander';
+  const rest = total - wandering === 1 ? 'the other' : 'the others';
+  return `${wandering} of ${total} prices ${verb}; pairs with ${rest} are not read as long-run ties.`;
+}
+
 /** The view of the step from the report. */
 export function seriesStepView(report: DiagnosticReport): SeriesStepView {
   const wandering = report.series.filter((s) => s.order === 1).length;
   const total = report.series.length;
-  const headline = wandering === total
-    ? `All ${total} prices wander: each can be tested for a tie with the others.`
-    : wandering === 0
-      ? 'None of these prices wanders like a random walk, so the tie tests that follow do not apply to them.'
-      : `${wandering} of ${total} prices wander; pairs with the others are not read as long-run ties.`;
+  const headline = seriesHeadline(wandering, total);
   return {
     headline,
     items: report.series.map((s) => seriesItem(s, report.data.period)),
