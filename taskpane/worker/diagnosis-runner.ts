@@ -2,14 +2,17 @@
  * Runs a diagnosis for the pane and lets the user cancel it. The worker runner sends the
  * work to a Web Worker (a fresh one after a cancel, since cancelling terminates it); the
  * inline runner is the fallback for a page without workers, running on the pane's thread
- * after the pane has painted its progress bar.
+ * after the pane has painted its progress bar. Either also answers, on demand, how one pair's
+ * relation held through time (stability-job.ts); that work gets a worker of its own, so
+ * cancelling it never stops a diagnosis.
  */
 import { isMooringInputError } from '../../addin/errors';
 import type { DiagnosticOptions } from '../../addin/report/check-input';
 import { diagnose } from '../../addin/report/pairwise-diagnostic';
 import type { DiagnosticInput } from '../../addin/report/prepare-input';
 import type { DiagnosticReport } from '../../addin/report/report-types';
-import type { RunRequest, WorkerReply } from './messages';
+import type { RunRequest, StabilityRequest, WorkerReply } from './messages';
+import { pairStability, type PairStability, type StabilityPair } from './stability-job';
 
 /** How a run ended. */
 export type RunOutcome =
@@ -30,11 +33,25 @@ export interface RunHandle {
   cancel(): void;
 }
 
+/** How a stability request ended. */
+export type StabilityOutcome =
+  | { kind: 'done'; stability: PairStability }
+  | { kind: 'failed'; message: string; inputError: boolean }
+  | { kind: 'cancelled' };
+
+/** A stability request in progress. */
+export interface StabilityHandle {
+  outcome: Promise<StabilityOutcome>;
+  cancel(): void;
+}
+
 /** Something that runs diagnoses. */
 export interface DiagnosisRunner {
   /** Whether the work leaves the pane's thread. */
   readonly offThread: boolean;
   run(input: DiagnosticInput, options: DiagnosticOptions, onStart?: (size: RunSize) => void): RunHandle;
+  /** How one pair's relation held through time, on the rows `input` and `options` give the diagnosis. */
+  stability(input: DiagnosticInput, options: DiagnosticOptions, pair: StabilityPair): StabilityHandle;
 }
 
 /** Runs each diagnosis in a Web Worker made by `makeWorker`. */
@@ -60,7 +77,7 @@ export function workerRunner(makeWorker: () => Worker): DiagnosisRunner {
         if (!reply || reply.id !== id) return;
         if (reply.type === 'started') onStart?.({ series: reply.series, pairs: reply.pairs, rows: reply.rows });
         else if (reply.type === 'done') stop({ kind: 'done', report: reply.report });
-        else stop({ kind: 'failed', message: reply.message, inputError: reply.inputError });
+        else if (reply.type === 'failed') stop({ kind: 'failed', message: reply.message, inputError: reply.inputError });
       };
       const onError = (event: ErrorEvent): void => {
         event.preventDefault();
@@ -81,6 +98,29 @@ export function workerRunner(makeWorker: () => Worker): DiagnosisRunner {
         },
       };
     },
+    stability(input, options, pair) {
+      const own = makeWorker();
+      let settle: (o: StabilityOutcome) => void = () => undefined;
+      const outcome = new Promise<StabilityOutcome>((resolve) => {
+        settle = resolve;
+      });
+      const stop = (o: StabilityOutcome): void => {
+        own.terminate();
+        settle(o);
+      };
+      own.addEventListener('message', (event: MessageEvent<WorkerReply>) => {
+        const reply = event.data;
+        if (reply?.type === 'stability-done') stop({ kind: 'done', stability: reply.stability });
+        else if (reply?.type === 'failed') stop({ kind: 'failed', message: reply.message, inputError: reply.inputError });
+      });
+      own.addEventListener('error', (event: ErrorEvent) => {
+        event.preventDefault();
+        stop({ kind: 'failed', message: `The check through time stopped with an internal error: ${event.message || 'unknown'}.`, inputError: false });
+      });
+      const request: StabilityRequest = { type: 'stability', id: nextId++, input, options, pair };
+      own.postMessage(request);
+      return { outcome, cancel: () => stop({ kind: 'cancelled' }) };
+    },
   };
 }
 
@@ -100,6 +140,28 @@ export function inlineRunner(): DiagnosisRunner {
         onStart?.({ series, pairs: (series * (series - 1)) / 2, rows: input.series[0]?.values.length ?? 0 });
         try {
           settle({ kind: 'done', report: diagnose(input, options) });
+        } catch (e) {
+          settle({ kind: 'failed', message: e instanceof Error ? e.message : String(e), inputError: isMooringInputError(e) });
+        }
+      }, 30);
+      return {
+        outcome,
+        cancel() {
+          cancelled = true;
+          settle({ kind: 'cancelled' });
+        },
+      };
+    },
+    stability(input, options, pair) {
+      let cancelled = false;
+      let settle: (o: StabilityOutcome) => void = () => undefined;
+      const outcome = new Promise<StabilityOutcome>((resolve) => {
+        settle = resolve;
+      });
+      setTimeout(() => {
+        if (cancelled) return;
+        try {
+          settle({ kind: 'done', stability: pairStability(input, options, pair) });
         } catch (e) {
           settle({ kind: 'failed', message: e instanceof Error ? e.message : String(e), inputError: isMooringInputError(e) });
         }
