@@ -2,9 +2,18 @@
  * The guided pane: holds the walk's state and draws the current step from its view model.
  * It reaches the workbook only through the port, runs the engine only through the runner
  * (a Web Worker), and re-renders after every change, putting keyboard focus back on the
- * control that had it. Alt+Right and Alt+Left move between steps from anywhere on the page.
+ * control that had it. Alt+Right and Alt+Left move between steps from anywhere on the page;
+ * Esc cancels a running diagnosis (or a running check through time). The standing cautions are
+ * shown once, in one box under the step strip: open the first time results appear, then
+ * folded to its summary line on every step, one click away.
  */
+import type { DiagnosticOptions } from '../../addin/report/check-input';
+import type { DiagnosticInput } from '../../addin/report/prepare-input';
 import type { DiagnosticReport } from '../../addin/report/report-types';
+import type { PairStability } from '../worker/stability-job';
+import { cautionsBox } from './render/parts';
+import { cautionsView } from './views/cautions-view';
+import { DEFAULT_OVERVIEW_SORT, type OverviewSort } from './views/pair-overview';
 import type { DataRegion, WorkbookPort } from '../workbook/port';
 import type { DiagnosisRunner } from '../worker/diagnosis-runner';
 import { defaultPick, describeColumns } from './data/columns';
@@ -49,8 +58,16 @@ export interface PaneState {
   notice: string | null;
   pairIndex: number | null;
   write: WriteState;
-  /** The block written, to write again when the data grow. */
-  written: { pair: { a: string; b: string }; placement: BlockPlacement } | null;
+  /** The blocks written, each by its own workbook-level name, to write again when the data grow. */
+  written: { name: string; pair: { a: string; b: string }; placement: BlockPlacement }[];
+  /** The input and options the report was made from (the check through time runs on the same rows). */
+  reportInput: { input: DiagnosticInput; options: DiagnosticOptions } | null;
+  /** How the overview of all pairs is sorted. */
+  overviewSort: OverviewSort;
+  /** Whether the cautions box is open. */
+  cautionsOpen: boolean;
+  /** The check through time of one pair of the report (null: not asked, or cancelled). */
+  stability: { pairIndex: number; status: 'running' | 'done' | 'failed'; result: PairStability | null; problem: string | null; cancel: () => void } | null;
 }
 
 /** The mounted pane. */
@@ -73,7 +90,8 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
     step: 'data', region: null, regionProblem: null,
     choice: { columns: [], log: true, skipGaps: true, from: null, to: null, alpha: 0.05 },
     prepared: null, prepareProblem: null, stage: { ...DEFAULT_CHOICES }, report: null, reportRows: 0, reportOf: null,
-    running: null, runProblem: null, notice: null, pairIndex: null, write: initialWriteState(), written: null,
+    running: null, runProblem: null, notice: null, pairIndex: null, write: initialWriteState(), written: [],
+    reportInput: null, overviewSort: DEFAULT_OVERVIEW_SORT, cautionsOpen: false, stability: null,
   };
   let charts: DrawnChart[] = [];
   let ticker: ReturnType<typeof setInterval> | null = null;
@@ -114,6 +132,9 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
       s.notice ? el('p', { class: 'notice', role: 'status', 'data-role': 'notice' }, s.notice) : null,
       s.running ? renderProgressPanel(s.running.size, Math.floor((Date.now() - s.running.started) / 1000), () => s.running?.cancel()) : null,
       s.runProblem ? el('p', { class: 'problem', role: 'alert', 'data-role': 'run-problem' }, s.runProblem) : null,
+      s.report && s.step !== 'data' ? cautionsBox(cautionsView(s.report), s.cautionsOpen, (open) => {
+        s.cautionsOpen = open;
+      }) : null,
       renderStep(s, actions),
       footer());
     charts = drawChartSlots(root);
@@ -132,8 +153,12 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
 
   const open = (id: StepId): void => {
     if (STEPS[stepIndex(id)].needsReport && !s.report) return;
-    // A notice is read where it appeared; moving on clears it.
-    if (id !== s.step) s.notice = null;
+    // A notice is read where it appeared; moving on clears it. The cautions, once shown open,
+    // fold to their summary line when the reader moves on.
+    if (id !== s.step) {
+      s.notice = null;
+      if (s.step !== 'data') s.cautionsOpen = false;
+    }
     s.step = id;
     render();
     root.querySelector<HTMLElement>('#step-title')?.focus();
@@ -143,7 +168,8 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
     if (!s.prepared || s.running) return;
     const prepared = s.prepared;
     const regionRows = prepared.regionRows;
-    const handle = deps.runner.run(prepared.input, { log: s.choice.log, alpha: s.choice.alpha, window: prepared.window, preparation: prepared.prepText, ...s.stage }, (size) => {
+    const options: DiagnosticOptions = { log: s.choice.log, alpha: s.choice.alpha, window: prepared.window, preparation: prepared.prepText, ...s.stage };
+    const handle = deps.runner.run(prepared.input, options, (size) => {
       if (s.running) s.running.size = size;
       render();
     });
@@ -165,7 +191,12 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
         s.runProblem = outcome.message;
       } else {
         const before = s.reportRows;
+        // The first results open the cautions box; later runs leave it as the reader left it.
+        if (!s.report) s.cautionsOpen = true;
         s.report = outcome.report;
+        s.reportInput = { input: prepared.input, options };
+        s.stability?.cancel();
+        s.stability = null;
         s.reportRows = regionRows;
         s.reportOf = coverage(prepared);
         if (s.pairIndex !== null && s.pairIndex >= outcome.report.pairs.length) s.pairIndex = null;
@@ -206,9 +237,13 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
       return;
     }
     run(null, async (before) => {
-      let refreshed: boolean | null = null;
-      if (s.written && s.report && s.region) refreshed = await actions.rewrite(s.report, s.written.pair, s.region, s.written.placement);
-      return refreshNotice(before, s.reportRows, refreshed);
+      const report = s.report;
+      const region = s.region;
+      if (s.written.length === 0 || !report || !region) return refreshNotice(before, s.reportRows, null);
+      // One block after another: each write plans against the sheet as the previous one left it.
+      let refreshed = 0;
+      for (const w of s.written) if (await actions.rewrite(report, w.pair, region, w.placement, w.name)) refreshed += 1;
+      return refreshNotice(before, s.reportRows, { refreshed, total: s.written.length });
     });
   };
 
@@ -232,6 +267,16 @@ export function mountPane(root: HTMLElement, deps: PaneDeps): PaneHandle {
   const actions = createActions(s, deps, { render, run, prepare, open, rewatch: async () => { unwatch?.(); unwatch = null; await ensureWatching(); }, detectAgain: () => void detect() });
 
   const onKey = (event: KeyboardEvent): void => {
+    if (event.key === 'Escape' && !event.altKey && !event.ctrlKey && !event.metaKey) {
+      if (s.running) {
+        event.preventDefault();
+        s.running.cancel();
+      } else if (s.stability?.status === 'running') {
+        event.preventDefault();
+        actions.cancelStability();
+      }
+      return;
+    }
     if (!event.altKey || (event.key !== 'ArrowRight' && event.key !== 'ArrowLeft')) return;
     const i = stepIndex(s.step) + (event.key === 'ArrowRight' ? 1 : -1);
     if (i < 0 || i >= STEPS.length) return;

@@ -1,6 +1,6 @@
 /**
  * The strip of step buttons at the top of the pane: one Fluent button per step with its
- * number and name, the current one marked with aria-current and a bar under it (not by
+ * number and its short name in view (the full title in its accessible name), the current one marked with aria-current and a bar under it (not by
  * colour alone). Keys: Left/Right (and Up/Down) move focus along the strip, Home/End jump,
  * Enter or Space opens the step; steps that need a finished diagnosis are disabled until
  * there is one.
@@ -21,7 +21,7 @@ export function renderStepStrip(current: StepId, reportReady: boolean, onOpen: (
       title: s.title,
       tabindex: s.id === current ? '0' : '-1',
       disabled: !enabled,
-    }, String(i + 1));
+    }, el('span', { class: 'step-number', 'aria-hidden': 'true' }, String(i + 1)), el('span', { class: 'step-name', 'aria-hidden': 'true' }, s.short));
     b.addEventListener('click', () => onOpen(s.id));
     return b;
   });

@@ -11,6 +11,8 @@ export type StepId = 'data' | 'series' | 'tied' | 'relation' | 'leader' | 'write
 export interface StepInfo {
   id: StepId;
   title: string;
+  /** The step's name on the strip: one or two words, shown beside its number. */
+  short: string;
   /** One line: what this step answers. */
   purpose: string;
   /** Whether the step needs a finished diagnosis. */
@@ -19,12 +21,12 @@ export interface StepInfo {
 
 /** The steps, in reading order. */
 export const STEPS: readonly StepInfo[] = [
-  { id: 'data', title: 'Choose prices', purpose: 'Pick the table, the series to compare and the rows to use.', needsReport: false },
-  { id: 'series', title: 'How each series moves', purpose: 'Does each price wander, or keep coming back to a fixed level?', needsReport: true },
-  { id: 'tied', title: 'Tied together?', purpose: 'Do two wandering prices stay tied by a long-run relation?', needsReport: true },
-  { id: 'relation', title: 'The relation and its pull', purpose: 'How the prices line up, how fast a gap closes, and where the gap is now.', needsReport: true },
-  { id: 'leader', title: 'Who moves first', purpose: 'Does one price move before the other?', needsReport: true },
-  { id: 'write', title: 'Put it in the sheet', purpose: 'Write the results block into the workbook.', needsReport: true },
+  { id: 'data', title: 'Choose prices', short: 'Prices', purpose: 'Pick the table, the series to compare and the rows to use.', needsReport: false },
+  { id: 'series', title: 'How each series moves', short: 'Series', purpose: 'Does each price wander, or keep coming back to a fixed level?', needsReport: true },
+  { id: 'tied', title: 'Tied together?', short: 'Tied?', purpose: 'Do two wandering prices stay tied by a long-run relation?', needsReport: true },
+  { id: 'relation', title: 'The relation and its pull', short: 'Relation', purpose: 'How the prices line up, how fast a gap closes, and where the gap is now.', needsReport: true },
+  { id: 'leader', title: 'Who moves first', short: 'Leader', purpose: 'Does one price move before the other?', needsReport: true },
+  { id: 'write', title: 'Put it in the sheet', short: 'To sheet', purpose: 'Write the results block into the workbook.', needsReport: true },
 ];
 
 /** Position of a step in the walk (0-based). */

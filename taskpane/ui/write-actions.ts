@@ -6,7 +6,8 @@
  */
 import { MooringInputError } from '../../addin/errors';
 import type { DiagnosticReport } from '../../addin/report/report-types';
-import { besideRegion, buildPairBlock, type BlockPlacement } from '../block/pair-block';
+import { besideRegion, blockNameFor, buildPairBlock, type BlockPlacement } from '../block/pair-block';
+import { parseCell, parseRange } from '../workbook/a1-address';
 import { planBlockWrite, writePlannedBlock, type BlockPlan, type PlannedWriteOutcome } from '../block/plan-block-write';
 import type { DataRegion, WorkbookPort } from '../workbook/port';
 import type { PlaceKind } from './views/write-view';
@@ -35,9 +36,37 @@ export async function placementFor(port: WorkbookPort, region: DataRegion, place
   return { sheet, anchor: 'A1' };
 }
 
-/** Plans the block of a pair at a placement (writes nothing). */
-export async function planPairWrite(port: WorkbookPort, report: DiagnosticReport, pair: { a: string; b: string }, region: DataRegion, placement: BlockPlacement): Promise<BlockPlan> {
-  const { block, chart } = buildPairBlock(report, pair, region, placement);
+/** Most blocks of one pair the pane names apart. */
+const MOST_COPIES = 99;
+
+/**
+ * The name of a pair's block at a placement: the name of the pair's block already there (to
+ * write it again in place), else the first of the pair's names no block holds yet. A block of
+ * the same pair elsewhere keeps its name and its chart.
+ */
+export async function blockNameAt(port: WorkbookPort, pair: { a: string; b: string }, placement: BlockPlacement): Promise<string> {
+  const at = parseCell(placement.anchor);
+  let free: string | null = null;
+  for (let copy = 1; copy <= MOST_COPIES; copy++) {
+    const name = blockNameFor(pair.a, pair.b, copy);
+    const found = await port.findBlock(name);
+    if (!found) {
+      free ??= name;
+      // Names are handed out in order, so past two free ones no later block is likely; stop looking.
+      if (copy > 1) break;
+      continue;
+    }
+    const r = parseRange(found.address);
+    if (found.sheet.toLowerCase() === placement.sheet.toLowerCase() && r.top === at.row && r.left === at.col) return name;
+  }
+  if (free) return free;
+  throw new MooringInputError(`${MOST_COPIES} blocks of ${pair.a} and ${pair.b} are already in this workbook: remove some, or write this one over one of them.`);
+}
+
+/** Plans the block of a pair at a placement (writes nothing), under `name` (default: found by blockNameAt). */
+export async function planPairWrite(port: WorkbookPort, report: DiagnosticReport, pair: { a: string; b: string }, region: DataRegion, placement: BlockPlacement, name?: string): Promise<BlockPlan> {
+  const blockName = name ?? (await blockNameAt(port, pair, placement));
+  const { block, chart } = buildPairBlock(report, pair, region, placement, blockName);
   return planBlockWrite(port, block, chart);
 }
 
@@ -50,8 +79,8 @@ export function writePlan(port: WorkbookPort, plan: BlockPlan, confirmed: boolea
  * Writes the block again from a new report at the same place. Only the block's own cells
  * are replaced without asking; when anything else is now in the way nothing is written.
  */
-export async function rewriteBlock(port: WorkbookPort, report: DiagnosticReport, pair: { a: string; b: string }, region: DataRegion, placement: BlockPlacement): Promise<boolean> {
-  const plan = await planPairWrite(port, report, pair, region, placement);
+export async function rewriteBlock(port: WorkbookPort, report: DiagnosticReport, pair: { a: string; b: string }, region: DataRegion, placement: BlockPlacement, name: string): Promise<boolean> {
+  const plan = await planPairWrite(port, report, pair, region, placement, name);
   if (!plan.safe) return false;
   return (await writePlan(port, plan, false)).ok;
 }

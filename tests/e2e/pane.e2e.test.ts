@@ -74,6 +74,8 @@ describe('the pane in a browser', () => {
     expect(await title()).toBe('3. Tied together?');
     expect(await page.locator('.verdict-mark').first().textContent()).toBe('Tied');
     await shot(page, '03-tied-together');
+    // The choices of how the tests run are folded under their summary line.
+    await page.locator('[data-role="tied-choices"] > summary').click();
     await page.locator('fluent-radio[value="bic"]').click();
     await idle();
     expect((await state()).lagRule).toBe('bic');

@@ -54,8 +54,10 @@ describe('the inline runner (no workers)', () => {
 describe('sentences of the pane', () => {
   it('says how many rows arrived and what happened to the block', () => {
     expect(refreshNotice(780, 792, null)).toBe('12 new rows since the last run: results updated.');
-    expect(refreshNotice(780, 781, true)).toBe('1 new row since the last run: results updated. The block in the sheet was refreshed too.');
-    expect(refreshNotice(780, 790, false)).toMatch(/could not be refreshed: write it again/);
+    expect(refreshNotice(780, 781, { refreshed: 1, total: 1 })).toBe('1 new row since the last run: results updated. The block in the sheet was refreshed too.');
+    expect(refreshNotice(780, 790, { refreshed: 0, total: 1 })).toMatch(/could not be refreshed: write it again/);
+    expect(refreshNotice(780, 790, { refreshed: 2, total: 2 })).toBe('10 new rows since the last run: results updated. Both blocks in the sheet were refreshed too.');
+    expect(refreshNotice(780, 790, { refreshed: 2, total: 3 })).toBe('10 new rows since the last run: results updated. 2 of 3 blocks in the sheet were refreshed; the other one could not be: write it again from the last step.');
   });
 
   it('says what the worker is doing, with the seconds so far', () => {
@@ -145,10 +147,10 @@ describe('writing the block through the port', () => {
     const placement = { sheet: 'Prices', anchor: 'J2' };
     const plan = await planPairWrite(workbook, report, { a: 'GateGasoil', b: 'DockDiesel' }, region, placement);
     expect((await writePlan(workbook, plan, false)).ok).toBe(true);
-    expect(await rewriteBlock(workbook, report, { a: 'GateGasoil', b: 'DockDiesel' }, region, placement)).toBe(true);
+    expect(await rewriteBlock(workbook, report, { a: 'GateGasoil', b: 'DockDiesel' }, region, placement, plan.block.name)).toBe(true);
     // Over the data themselves the rewrite refuses and leaves every cell as it was.
     const before = workbook.shownValue('Prices', 'B5');
-    expect(await rewriteBlock(workbook, report, { a: 'GateGasoil', b: 'DockDiesel' }, region, { sheet: 'Prices', anchor: 'A1' })).toBe(false);
+    expect(await rewriteBlock(workbook, report, { a: 'GateGasoil', b: 'DockDiesel' }, region, { sheet: 'Prices', anchor: 'A1' }, plan.block.name)).toBe(false);
     expect(workbook.shownValue('Prices', 'B5')).toBe(before);
     expect(occupiedLine({ address: 'K9', value: 2, formula: '=1+1' })).toBe('K9 holds the formula =1+1');
   });

@@ -5,7 +5,7 @@
  * Layout only: each piece shows what its view model holds.
  */
 import { el, type Child } from '../dom';
-import type { CautionsView } from '../views/cautions-view';
+import { cautionsSummary, type CautionsView } from '../views/cautions-view';
 import type { ChoiceView } from '../views/choices';
 import type { FactView } from '../views/relation-view';
 import type { TestRowView } from '../views/test-row';
@@ -52,11 +52,21 @@ export function warningsBox(title: string, warnings: readonly string[]): HTMLEle
     el('div', {}, el('strong', {}, title), el('ul', {}, ...warnings.map((w) => el('li', {}, w)))));
 }
 
-/** The cautions box, always shown beside verdicts. */
-export function cautionsBox(view: CautionsView): HTMLElement {
-  return el('aside', { class: 'cautions', 'aria-label': view.title },
-    el('h3', {}, view.title),
+/**
+ * The pane's one cautions box: a disclosure under the step strip, open when `open`, its summary
+ * always in view on every step of the results; `onToggle` hears the reader open or close it.
+ */
+export function cautionsBox(view: CautionsView, open: boolean, onToggle: (open: boolean) => void): HTMLElement {
+  const box = el('details', { class: 'cautions', 'data-role': 'cautions', open },
+    el('summary', {}, cautionsSummary(view)),
     el('ul', {}, ...view.items.map((c) => el('li', {}, c))));
+  box.addEventListener('toggle', () => onToggle((box as HTMLDetailsElement).open));
+  return box;
+}
+
+/** A disclosure: a summary line and what it hides, closed until opened. */
+export function disclosure(summary: string, role: string, ...children: Child[]): HTMLElement {
+  return el('details', { class: 'more', 'data-role': role }, el('summary', {}, summary), ...children);
 }
 
 /** A choice as a radio group with its why; `onChange` gets the new value. */

@@ -2,10 +2,10 @@
 import { el } from '../dom';
 import type { RelationStepView } from '../views/relation-view';
 import { chartSlot } from './chart-slot';
-import { cautionsBox, factList, section, warningsBox } from './parts';
+import { factList, section, warningsBox } from './parts';
 
-/** The step's content. */
-export function renderRelationStep(view: RelationStepView, picker: HTMLElement | null): HTMLElement {
+/** The step's content; `throughTime` is the section on the relation through time. */
+export function renderRelationStep(view: RelationStepView, picker: HTMLElement | null, throughTime: HTMLElement | null = null): HTMLElement {
   return el('div', { class: 'step-body' },
     picker,
     el('h3', { class: 'pair-title' }, view.pairLabel),
@@ -23,5 +23,5 @@ export function renderRelationStep(view: RelationStepView, picker: HTMLElement |
     view.charts ? chartSlot(view.charts.spread) : null,
     view.charts ? chartSlot(view.charts.rollingZ) : null,
     warningsBox('Worth knowing', [...view.warnings, ...view.unavailable]),
-    cautionsBox(view.cautions));
+    throughTime);
 }

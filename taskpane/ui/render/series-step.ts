@@ -3,7 +3,7 @@ import { el } from '../dom';
 import type { ChoiceKey } from '../views/choices';
 import type { SeriesStepView } from '../views/series-view';
 import { chartSlot } from './chart-slot';
-import { cautionsBox, choiceControl, testTable, verdictLine, warningsBox } from './parts';
+import { choiceControl, testTable, verdictLine, warningsBox } from './parts';
 
 /** The step's content; `onChoice` re-runs the diagnosis with a changed choice. */
 export function renderSeriesStep(view: SeriesStepView, onChoice: (key: ChoiceKey, value: string) => void): HTMLElement {
@@ -18,6 +18,5 @@ export function renderSeriesStep(view: SeriesStepView, onChoice: (key: ChoiceKey
     chartSlot(view.chart),
     ...items,
     ...view.choices.map((c) => choiceControl(c, (v) => onChoice(c.key, v))),
-    warningsBox('About the data', view.warnings),
-    cautionsBox(view.cautions));
+    warningsBox('About the data', view.warnings));
 }

@@ -5,8 +5,7 @@
  */
 import { el } from '../dom';
 import type { PlaceKind, WriteState, WriteStepView } from '../views/write-view';
-import { cautionsBox, checkboxField, nextId } from './parts';
-import type { CautionsView } from '../views/cautions-view';
+import { checkboxField, nextId } from './parts';
 
 /** What the write step asks of the pane. */
 export interface WriteStepHandlers {
@@ -22,7 +21,7 @@ const PLACES: { value: PlaceKind; label: string }[] = [
 ];
 
 /** The step's content. */
-export function renderWriteStep(view: WriteStepView, state: WriteState, cautions: CautionsView, picker: HTMLElement | null, handlers: WriteStepHandlers): HTMLElement {
+export function renderWriteStep(view: WriteStepView, state: WriteState, picker: HTMLElement | null, handlers: WriteStepHandlers): HTMLElement {
   const legendId = nextId('place');
   const group = el('fluent-radio-group', { orientation: 'vertical', name: 'place', value: state.place, 'aria-labelledby': legendId, 'data-choice': 'place', disabled: state.busy });
   for (const p of PLACES) {
@@ -65,6 +64,5 @@ export function renderWriteStep(view: WriteStepView, state: WriteState, cautions
     write,
     confirm,
     view.problem ? el('p', { class: 'problem', role: 'alert' }, view.problem) : null,
-    result,
-    cautionsBox(cautions));
+    result);
 }

@@ -28,6 +28,8 @@ export interface LeaderStepView {
   directions: DirectionView[];
   choices: ChoiceView[];
   cautions: CautionsView;
+  /** The lead-lag test's own cautions (timing is not cause and effect), shown in the step; the standing ones are shown once by the pane. */
+  timingCautions: string[];
 }
 
 const METHOD_NAMES: Record<string, string> = {
@@ -49,7 +51,7 @@ export function leaderStepView(report: DiagnosticReport, pair: PairReport): Lead
   const choices = choiceViews(['lagRule'], report.settings);
   if (!ll) {
     const reason = pair.unavailable.find((u) => u.part === 'lead-lag test')?.reason ?? 'the engine could not run it on these data';
-    return { pairLabel: `${pair.a} and ${pair.b}`, mark: null, verdict: `No lead-lag test for this pair: ${reason}`, method: null, why: null, directions: [], choices, cautions: cautionsView(report) };
+    return { pairLabel: `${pair.a} and ${pair.b}`, mark: null, verdict: `No lead-lag test for this pair: ${reason}`, method: null, why: null, directions: [], choices, cautions: cautionsView(report), timingCautions: [] };
   }
   const verdictMark = ll.pattern === 'one-way' && ll.leader
     ? mark(`${ll.leader} moves first`, 'yes')
@@ -63,5 +65,6 @@ export function leaderStepView(report: DiagnosticReport, pair: PairReport): Lead
     directions: [direction(ll.aLeadsB), direction(ll.bLeadsA)],
     choices,
     cautions: cautionsView(report, ll.cautions ?? []),
+    timingCautions: (ll.cautions ?? []).filter((c) => !report.cautions.includes(c)),
   };
 }
