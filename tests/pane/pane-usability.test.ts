@@ -21,6 +21,7 @@ import { pairOverview } from '../../taskpane/ui/views/pair-overview';
 import { seriesHeadline } from '../../taskpane/ui/views/series-view';
 import { stabilityView } from '../../taskpane/ui/views/stability-view';
 import { tieReading, tiedStepView } from '../../taskpane/ui/views/tied-view';
+import { initialWriteState, writeStepView } from '../../taskpane/ui/views/write-view';
 import { blockNameAt, planPairWrite, writePlan } from '../../taskpane/ui/write-actions';
 import { handleStabilityRequest } from '../../taskpane/worker/diagnose-worker';
 import type { WorkerReply } from '../../taskpane/worker/messages';
@@ -140,7 +141,11 @@ describe('several blocks coexist by name', () => {
     const second = await planPairWrite(workbook, two, pair, region, there);
     expect(second.block.name).toBe('Mooring_GateGasoil_DockDiesel_2');
     expect(second.replacesEarlierBlock).toBe(false);
-    expect((await writePlan(workbook, second, false)).ok).toBe(true);
+    const outcome = await writePlan(workbook, second, false);
+    expect(outcome.ok).toBe(true);
+    // The pane says so, rather than moving the first block's name in silence.
+    expect(writeStepView(region, pair, { ...initialWriteState(), plan: second, outcome }).result?.lines).toContain(
+      'The block of this pair written elsewhere keeps its own name (Mooring_GateGasoil_DockDiesel) and chart; both are refreshed when rows are pasted into the table.');
     // The first block still has its name where it was written, and each its chart.
     expect(await workbook.findBlock('Mooring_GateGasoil_DockDiesel')).toMatchObject({ sheet: 'Prices' });
     expect(await workbook.findBlock('Mooring_GateGasoil_DockDiesel_2')).toMatchObject({ sheet });

@@ -4,6 +4,7 @@
  * and what it holds, for an explicit yes), and exactly what was written or what failed.
  */
 import type { BlockPlan, PlannedWriteOutcome } from '../../block/plan-block-write';
+import { blockNameFor } from '../../block/pair-block';
 import { cellAddress, parseCell } from '../../workbook/a1-address';
 import type { DataRegion, OccupiedCell } from '../../workbook/port';
 
@@ -75,6 +76,9 @@ export function writeStepView(region: DataRegion, pair: { a: string; b: string }
       const beyond = o.written.length - rows * cols;
       if (beyond > 0) lines.push(`${beyond} more cell${beyond === 1 ? ' was' : 's were'} cleared below it, for the columns that spill down.`);
       if (plan.replacesEarlierBlock) lines.push('It replaced the earlier block of this pair.');
+      else if (plan.block.name !== blockNameFor(pair.a, pair.b)) {
+        lines.push(`The block of this pair written elsewhere keeps its own name (${blockNameFor(pair.a, pair.b)}) and chart; both are refreshed when rows are pasted into the table.`);
+      }
       lines.push(o.chart.added ? `Added the chart '${plan.chart?.title ?? ''}'.` : `No chart: ${o.chart.error ?? 'none was asked for'}.`);
       if (state.tableNote) lines.push(state.tableNote);
       result = { ok: true, lines };
