@@ -93,7 +93,7 @@ export function diagnose(input: DiagnosticInput, options: DiagnosticOptions = {}
     pairs,
     system,
     findings: reportFindings(series, pairs, system),
-    warnings: reportWarnings(data, series),
+    warnings: [...(input.notices ?? []), ...reportWarnings(data, series)],
     cautions: reportCautions(pairs.length, settings.alpha),
     screening: screeningCount(pairs.length, settings.alpha),
   };

@@ -21,6 +21,8 @@ export interface DiagnosticInput {
   source?: string;
   /** Whether the values are natural logs (informational; options.log wins when given). */
   logged?: boolean;
+  /** What the surface did to the rows before the diagnostic (put in date order, joined ...), said first among the report's warnings. */
+  notices?: string[];
 }
 
 /** What prepareDiagnosticInput needs besides the series. */

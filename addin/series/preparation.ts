@@ -9,7 +9,9 @@
  *   skip gaps         drop rows where any series of the analysis has a blank or text cell
  *   from row N        start at the N-th row of the range (1 = its first cell)
  *   to row N          stop at the N-th row of the range
- *   last N            the last N usable rows (after the other words)
+ *   last N            the last N usable rows in time (after the other words)
+ *   newest first      the range runs newest row first: the rows are read in reverse, so
+ *                     every test sees them oldest first (positions still count from the top)
  *   skip rows N M ... leave out these rows of the range (the results block uses it for rows
  *                     the analysis dropped because a series outside the pair had a gap)
  *
@@ -32,12 +34,14 @@ export interface Preparation {
   lastRows: number | null;
   /** Rows left out by number, ascending, without repeats. */
   skipRows: number[];
+  /** The range runs newest first: the rows are read bottom up. */
+  newestFirst: boolean;
 }
 
 /** The prices as they are: no logs, gaps refused, every row. */
-export const AS_GIVEN: Readonly<Preparation> = Object.freeze({ log: false, skipGaps: false, fromRow: null, toRow: null, lastRows: null, skipRows: [] as number[] });
+export const AS_GIVEN: Readonly<Preparation> = Object.freeze({ log: false, skipGaps: false, fromRow: null, toRow: null, lastRows: null, skipRows: [] as number[], newestFirst: false });
 
-const WORDS_HELP = 'log, skip gaps, from row N, to row N, last N or skip rows N M, separated by commas (for example "log, skip gaps, from row 260")';
+const WORDS_HELP = 'log, skip gaps, newest first, from row N, to row N, last N or skip rows N M, separated by commas (for example "log, skip gaps, from row 260")';
 
 /**
  * Reads the preparation from its text (any case, words separated by commas or semicolons).
@@ -59,6 +63,7 @@ export function parsePreparation(text: unknown, option = 'prep'): Preparation {
     let m: RegExpMatchArray | null;
     if (part === 'log' || part === 'logs' || part === 'ln') out.log = true;
     else if (part === 'skip gaps' || part === 'skip gap') out.skipGaps = true;
+    else if (part === 'newest first') out.newestFirst = true;
     else if ((m = part.match(/^from row (\d{1,7})$/))) out.fromRow = positive(Number(m[1]), part, option);
     else if ((m = part.match(/^to row (\d{1,7})$/))) out.toRow = positive(Number(m[1]), part, option);
     else if ((m = part.match(/^last (\d{1,7})(?: rows?)?$/))) out.lastRows = positive(Number(m[1]), part, option);
@@ -81,6 +86,7 @@ export function describePreparation(p: Preparation): string {
   const words: string[] = [];
   if (p.log) words.push('log');
   if (p.skipGaps) words.push('skip gaps');
+  if (p.newestFirst) words.push('newest first');
   if (p.fromRow !== null) words.push(`from row ${p.fromRow}`);
   if (p.toRow !== null) words.push(`to row ${p.toRow}`);
   if (p.lastRows !== null) words.push(`last ${p.lastRows}`);
@@ -90,7 +96,7 @@ export function describePreparation(p: Preparation): string {
 
 /** Whether the preparation cuts rows (a window or rows by number). */
 export function hasWindow(p: Preparation): boolean {
-  return p.fromRow !== null || p.toRow !== null || p.lastRows !== null || p.skipRows.length > 0;
+  return p.fromRow !== null || p.toRow !== null || p.lastRows !== null || p.skipRows.length > 0 || p.newestFirst;
 }
 
 /**
@@ -104,7 +110,11 @@ export function windowPositions(rows: ArrayLike<number>, p: Preparation, minLeng
   let end = n;
   if (p.fromRow !== null) while (start < n && rows[start] < p.fromRow - 1) start++;
   if (p.toRow !== null) while (end > start && rows[end - 1] > p.toRow - 1) end--;
-  if (p.lastRows !== null && end - start > p.lastRows) start = end - p.lastRows;
+  // The last N rows in time: at the bottom of the range, or at its top when it runs newest first.
+  if (p.lastRows !== null && end - start > p.lastRows) {
+    if (p.newestFirst) end = start + p.lastRows;
+    else start = end - p.lastRows;
+  }
   const used = end - start;
   if (used < minLength) {
     const what = describePreparation({ ...AS_GIVEN, fromRow: p.fromRow, toRow: p.toRow, lastRows: p.lastRows, skipRows: p.skipRows });
@@ -118,6 +128,15 @@ export function cutWindow(series: readonly CleanSeries[], p: Preparation, minLen
   if (series.length === 0 || !hasWindow(p)) return series.slice();
   if (p.skipRows.length > 0) series = leaveOutRows(series, p.skipRows);
   const { start, end } = windowPositions(series[0].rows, p, minLength);
+  if (p.newestFirst) {
+    // Oldest first for every test; `rows` keep the source positions, now falling.
+    return series.map((s) => ({
+      ...s,
+      values: s.values.slice(start, end).reverse(),
+      rows: s.rows.slice(start, end).reverse(),
+      dropped: s.dropped.filter((d) => d.index >= s.rows[start] && d.index <= s.rows[end - 1]).reverse(),
+    }));
+  }
   if (start === 0 && end === series[0].rows.length) return series.slice();
   const first = series[0].rows[start];
   const last = series[0].rows[end - 1];

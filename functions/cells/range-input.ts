@@ -153,7 +153,8 @@ export function readSeriesSet(range: unknown, name: string, orientation: Orienta
  * blank ends are trimmed are refused, naming the longer series.
  */
 export function readRelation(yRange: unknown, xRange: unknown, names: { y: string; x: string } = { y: 'y', x: 'x' }, prep: Preparation = AS_GIVEN): RangeRelation {
-  const y = readSeries(yRange, names.y, { ...prep, fromRow: null, toRow: null, lastRows: null });
+  // y is cleaned alone first (for its orientation), then rows are cut once, after the lining up.
+  const y = readSeries(yRange, names.y, { ...AS_GIVEN, log: prep.log, skipGaps: prep.skipGaps });
   const xs = readSeriesSet(xRange, names.x, y.orientation, prep);
   const [ya, ...xa] = cutWindow(alignAll([y.series, ...xs]), prep);
   return { y: ya, xs: xa, orientation: y.orientation };

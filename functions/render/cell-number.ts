@@ -22,7 +22,8 @@ export function cellNumber(value: number | null | undefined, what: string, why?:
  * was read from. null (no value at that row) is an empty cell too.
  */
 export function spillByRow(values: ArrayLike<number | null>, rows: ArrayLike<number>, what: string): (number | string)[] {
-  const length = rows.length === 0 ? 0 : rows[rows.length - 1] + 1;
+  let length = 0;
+  for (let k = 0; k < rows.length; k++) if (rows[k] + 1 > length) length = rows[k] + 1;
   const out: (number | string)[] = new Array(length).fill('');
   for (let k = 0; k < values.length; k++) {
     const v = values[k];

@@ -10,6 +10,7 @@
  * the block.
  */
 import { normalQuantile } from '../../addin/distributions';
+import { parsePreparation } from '../../addin/series/preparation';
 import type { PairReport } from '../../addin/report/pair-types';
 import type { DiagnosticReport } from '../../addin/report/report-types';
 import type { BlockCell } from '../workbook/port';
@@ -128,7 +129,11 @@ export function lineStage(g: BlockGrid, c: StageContext): void {
     'the shortest half-life the data allow: the speed\'s 95% interval, corrected for its small-sample bias, carried through the half-life');
   numberRow(g, 'Half-life, high end of its 95% interval', { formula: `=MOOR.HALFLIFE(${y},${x},"high",${c.prep})` }, periodsFormat(period), null,
     'the longest; #N/A when the interval reaches no reversion (no upper bound): the message on the cell says so');
-  numberRow(g, 'Is the spread stretched now? Latest z-score', { formula: `=INDEX(${c.zSpill}#,ROWS(${c.zSpill}#))` }, NUMBER_FORMAT.statistic,
+  // The latest row is the spill's last cell, or its first filled one when the rows run newest first.
+  const latest = parsePreparation(c.report.settings.preparation ?? '').newestFirst
+    ? `=INDEX(${c.zSpill}#,MATCH(TRUE,ISNUMBER(${c.zSpill}#),0))`
+    : `=INDEX(${c.zSpill}#,ROWS(${c.zSpill}#))`;
+  numberRow(g, 'Is the spread stretched now? Latest z-score', { formula: latest }, NUMBER_FORMAT.statistic,
     stretchReading, 'standard deviations from its mean on the last row, over the whole sample');
 }
 

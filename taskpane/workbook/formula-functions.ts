@@ -3,7 +3,7 @@
  * through the very implementations functions/functions.ts registers with Excel (so a test
  * of the block exercises the same code a user's cell runs), and the handful of Excel
  * built-ins the results block uses (IF, ISNUMBER, NA, ABS, AVERAGE, STDEV.S, COUNT, ROWS,
- * ROW, INDEX, HSTACK, ISNA). Any other name is #NAME?, as in Excel for an unknown function.
+ * ROW, INDEX, HSTACK, ISNA, MATCH). Any other name is #NAME?, as in Excel for an unknown function.
  */
 import * as registered from '../../functions/functions';
 import {
@@ -133,6 +133,16 @@ const BUILTINS: Record<string, Builtin> = {
       return new FormulaError('#REF!', 'INDEX points outside the array.');
     }
     return row[(c as number) - 1];
+  },
+  // MATCH(value, array, 0): the position of the first exact match (the block looks for TRUE in ISNUMBER(...)).
+  MATCH: (call) => {
+    const want = scalarOf(arg(call, 0), call.read);
+    const mode = call.args[2] === undefined ? 1 : toNumber(scalarOf(arg(call, 2), call.read));
+    if (want instanceof FormulaError) return want;
+    if (mode !== 0) return new FormulaError('#N/A', 'The in-memory workbook evaluates MATCH with match type 0 only.');
+    const cells = gridOf(arg(call, 1), call.read).flat();
+    const k = cells.findIndex((x) => x === want);
+    return k < 0 ? new FormulaError('#N/A', 'MATCH found no such value.') : k + 1;
   },
   HSTACK: (call) => {
     const grids = call.args.map((a) => gridOf(a ?? null, call.read));

@@ -32,6 +32,8 @@ interface Combo {
   lagRule: 'aic' | 'bic';
   /** Extra series selected besides the pair (their gaps drop rows of the pair too). */
   extra: string[];
+  /** The table runs newest row first (a common vendor export). */
+  newestFirst?: boolean;
 }
 
 const COMBOS: Combo[] = [
@@ -42,7 +44,14 @@ const COMBOS: Combo[] = [
   { name: 'logs on, from a date, a skipped gap inside the window, BIC', log: true, from: '2023-06-01', to: null, gaps: ['C700'], lagRule: 'bic', extra: [] },
   { name: 'logs off, a closed window, a skipped gap', log: false, from: '2022-06-01', to: '2024-06-28', gaps: ['B400'], lagRule: 'aic', extra: [] },
   { name: 'logs on, a third series whose gap drops a row of the pair', log: true, from: null, to: null, gaps: ['D200'], lagRule: 'aic', extra: ['HeavyFuel'] },
+  { name: 'newest row first, logs on, a window and a skipped gap', log: true, from: '2023-01-02', to: '2024-06-28', gaps: ['C100'], lagRule: 'aic', extra: [], newestFirst: true },
 ];
+
+/** The demo CSV with its rows newest first. */
+function newestFirstCsv(): string {
+  const [head, ...rows] = DEMO_CSV.trimEnd().split('\n');
+  return `${[head, ...rows.reverse()].join('\n')}\n`;
+}
 
 /** Twelve business days after the demo's last day, near the pair's line. */
 function twelveRows(region: DataRegion): CellContent[][] {
@@ -141,7 +150,7 @@ function expectSameNumbers(wb: MemoryWorkbook, built: PairBlock, pane: Record<st
 describe('the pane and the block it writes show the same numbers', () => {
   for (const combo of COMBOS) {
     it(`${combo.name}: when written and after 12 appended rows`, async () => {
-      const wb = loadCsvTable(DEMO_CSV);
+      const wb = loadCsvTable(combo.newestFirst ? newestFirstCsv() : DEMO_CSV);
       for (const cell of combo.gaps) wb.setValues('Prices', cell, [['']]);
       let region = await wb.readTable('QuennelPrices');
       let report = paneReport(region, combo);
@@ -161,6 +170,23 @@ describe('the pane and the block it writes show the same numbers', () => {
       expect(fact('Half-life of the spread')).toBe(`${showNumber(cell('Does the spread revert? Half-life'), 1)} ${report.data.period}s`);
       expect(fact(report.data.logged ? 'Elasticity, dynamic' : 'Hedge ratio, dynamic')).toBe(showNumber(cell(report.data.logged ? 'Elasticity (dynamic OLS)' : 'Hedge ratio (dynamic OLS)'), 4));
       if (report.data.logged) expect(fact('Units of')).toBe(showNumber(cell('Hedge at the latest prices'), 4));
+
+      if (combo.newestFirst) {
+        // The pane read the rows oldest first: its sample starts and ends where the window says.
+        expect(report.data.first.date).toBe('2023-01-02');
+        expect(report.data.last.date).toBe('2024-06-28');
+        expect(report.warnings[0]).toMatch(/run newest first; Mooring reads them oldest first/);
+        expect(prepText).toMatch(/newest first/);
+        // The same rows oldest first give the same numbers: the order of the sheet is not a statistic.
+        const ascending = loadCsvTable(DEMO_CSV);
+        ascending.setValues('Prices', `C${DEMO_CSV.trimEnd().split('\n').length + 2 - 100}`, [['']]);
+        const same = paneNumbers(paneReport(await ascending.readTable('QuennelPrices'), { ...combo, newestFirst: false }));
+        for (const [label, v] of Object.entries(paneNumbers(report))) {
+          if (v === null) expect(same[label]).toBeNull();
+          else expect(Math.abs((same[label] as number) - v) / Math.max(Math.abs(v), 1e-300), label).toBeLessThan(1e-12);
+        }
+        return; // new rows of a newest-first table arrive at its top, which a fixed row window does not follow
+      }
 
       // Rows arrive: the pane runs again on the grown table; the live block follows by itself.
       wb.appendRows('QuennelPrices', twelveRows(region));

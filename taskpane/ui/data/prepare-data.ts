@@ -10,6 +10,8 @@ import { MooringInputError } from '../../../addin/errors';
 import type { DiagnosticOptions } from '../../../addin/report/check-input';
 import { prepareDiagnosticInput, type DiagnosticInput } from '../../../addin/report/prepare-input';
 import type { DroppedRow } from '../../../addin/report/report-types';
+import { dateDirection } from '../../../addin/dates/date-order';
+import { isoDayNumber } from '../../../addin/dates/read-dates';
 import { cleanBlock } from '../../../addin/series/clean-block';
 import { AS_GIVEN, describePreparation, windowPositions, type Preparation } from '../../../addin/series/preparation';
 import type { DataRegion } from '../../workbook/port';
@@ -68,26 +70,42 @@ export function prepareData(region: DataRegion, choice: DataChoice): PreparedDat
     throw new MooringInputError('Choose at least two series: the diagnosis compares prices in pairs.');
   }
   const names = choice.columns.map((j) => columns[j]?.header ?? `column ${j + 1}`);
-  const cells = choice.columns.map((j) => region.rows.map((row) => row[j] ?? null));
+  const n = region.rows.length;
   const first = region.firstDataRow;
-  const dates = region.dateColumn === null ? null : region.rows.map((row) => dateCellText(row[region.dateColumn as number] ?? null));
-  const label = (i: number): string => (dates?.[i] ? `row ${first + i} (${dates[i]})` : `row ${first + i}`);
+  const sheetDates = region.dateColumn === null ? null : region.rows.map((row) => dateCellText(row[region.dateColumn as number] ?? null));
+  const sheetLabel = (i: number): string => (sheetDates?.[i] ? `row ${first + i} (${sheetDates[i]})` : `row ${first + i}`);
+  // Rows that run newest first are read bottom up, so every test sees them oldest first; the
+  // preparation says so ("newest first") and the block's formulas read them the same way.
+  const newestFirst = runsNewestFirst(sheetDates, sheetLabel, region);
+  const sheetIndex = (i: number): number => (newestFirst ? n - 1 - i : i);
+  const inTimeOrder = <T>(xs: T[]): T[] => (newestFirst ? xs.slice().reverse() : xs);
+  const cells = choice.columns.map((j) => inTimeOrder(region.rows.map((row) => row[j] ?? null)));
+  const dates = sheetDates && inTimeOrder(sheetDates);
+  const label = (i: number): string => sheetLabel(sheetIndex(i));
   const block = cleanBlock(cells, names, { log: choice.log, skipGaps: choice.skipGaps, firstRow: first, rowLabel: label });
   const input = prepareDiagnosticInput(block, {
     dateOf: (i) => dates?.[i] ?? null,
     source: `${region.sheet}!${region.address}`,
   });
-  const sourceRows = Array.from(block[0].rows);
-  const range = windowFromBounds({ from: choice.from, to: choice.to }, sourceRows, dates, first);
-  // The window as rows of the region, read back through the one window rule every formula uses.
+  if (newestFirst) input.notices = [`The rows of ${region.sheet}!${region.address} run newest first; Mooring reads them oldest first.`];
+  const timeRows = Array.from(block[0].rows);
+  const range = windowFromBounds({ from: choice.from, to: choice.to }, timeRows, dates, first);
+  // The window as rows of the region (positions from the top), read back through the one
+  // window rule every formula uses.
+  const firstIn = range && range.start > 0 ? sheetIndex(timeRows[range.start]) + 1 : null;
+  const lastIn = range && range.end < timeRows.length ? sheetIndex(timeRows[range.end - 1]) + 1 : null;
   const prep: Preparation = {
     ...AS_GIVEN,
     log: choice.log,
     skipGaps: choice.skipGaps,
-    fromRow: range && range.start > 0 ? sourceRows[range.start] + 1 : null,
-    toRow: range && range.end < sourceRows.length ? sourceRows[range.end - 1] + 1 : null,
+    newestFirst,
+    fromRow: newestFirst ? lastIn : firstIn,
+    toRow: newestFirst ? firstIn : lastIn,
   };
-  const { start, end } = windowPositions(sourceRows, prep, 1);
+  const sourceRows = timeRows.map(sheetIndex);
+  const { start, end } = newestFirst
+    ? reversedWindow(windowPositions(sourceRows.slice().reverse(), prep, 1), sourceRows.length)
+    : windowPositions(sourceRows, prep, 1);
   const window = start === 0 && end === sourceRows.length ? undefined : { start, end };
   return {
     input,
@@ -95,12 +113,32 @@ export function prepareData(region: DataRegion, choice: DataChoice): PreparedDat
     regionRows: region.rows.length,
     cleanRows: sourceRows.length,
     usedRows: end - start,
-    firstUsed: label(sourceRows[start]),
-    lastUsed: label(sourceRows[end - 1]),
+    firstUsed: sheetLabel(sourceRows[start]),
+    lastUsed: sheetLabel(sourceRows[end - 1]),
     dropped: input.dropped ?? [],
     outsideWindow: sourceRows.length - (end - start),
     names,
     prep,
     prepText: describePreparation(prep),
   };
+}
+
+/** Whether the region's dates run newest first (repeated or shuffled dates are refused, naming the rows). */
+function runsNewestFirst(dates: (string | null)[] | null, label: (i: number) => string, region: DataRegion): boolean {
+  if (!dates) return false;
+  const known: number[] = [];
+  const at: number[] = [];
+  dates.forEach((d, i) => {
+    const day = d ? isoDayNumber(d) : null;
+    if (day !== null) {
+      known.push(day);
+      at.push(i);
+    }
+  });
+  return dateDirection(known, (k) => label(at[k]), `${region.sheet}!${region.address}`) === 'newest first';
+}
+
+/** A window over positions in sheet order, as positions in time order. */
+function reversedWindow(w: { start: number; end: number }, n: number): { start: number; end: number } {
+  return { start: n - w.end, end: n - w.start };
 }
