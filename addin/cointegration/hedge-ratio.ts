@@ -28,6 +28,8 @@ import { requireAlignedSeries } from './cointegrating-regression';
 import { dynamicOls, dynamicOlsStandardErrorText, type DynamicOlsFit, type DynamicOlsOptions } from './dynamic-ols';
 import { hedgeUnits, type HedgeUnits } from './hedge-units';
 import { formatCoefficient } from './wording';
+import { roundingNoiseOf } from '../spread/rounding-noise';
+import { spreadSeries } from '../spread/spread-series';
 
 export type HedgeRatioMethod = 'ols' | 'reverse-ols' | 'total-least-squares' | 'dynamic-ols';
 
@@ -135,10 +137,31 @@ export function totalLeastSquaresHedgeRatio(y: ArrayLike<number>, x: ArrayLike<n
   return { method: 'total-least-squares', label: 'Total least squares (orthogonal regression)', beta, intercept: (my - beta * mx) / f, standardError: null, tValue: null, pValue: null, note: `depends on the units of both series; ${STATIC_NOTE}` };
 }
 
-/** Dynamic OLS with a HAC standard error, as a HedgeRatio. */
-export function dynamicOlsHedgeRatio(y: ArrayLike<number>, x: ArrayLike<number>, options: DynamicOlsOptions = {}): { ratio: HedgeRatio; fit: DynamicOlsFit } {
+/**
+ * Dynamic OLS with a HAC standard error, as a HedgeRatio. When y is an exact line in x the
+ * residuals are rounding noise and so would be the standard error (about 1e-30, t about 1e30):
+ * it is left out, with the one sentence of spread/rounding-noise.ts as the note.
+ */
+export function dynamicOlsHedgeRatio(y: ArrayLike<number>, x: ArrayLike<number>, options: DynamicOlsOptions = {}, names = { y: 'y', x: 'x' }): { ratio: HedgeRatio; fit: DynamicOlsFit } {
   requirePair(y, x);
   const fit = dynamicOls(y, x, options);
+  const line = olsHedgeRatio(y, x);
+  const noise = roundingNoiseOf(y, spreadSeries(y, x, line.beta, line.intercept), { y: names.y, xs: [names.x] });
+  if (noise) {
+    return {
+      ratio: {
+        method: 'dynamic-ols',
+        label: `Dynamic OLS (${fit.leadsLags} leads and lags of the change in x)`,
+        beta: fit.beta,
+        intercept: fit.intercept,
+        standardError: null,
+        tValue: null,
+        pValue: null,
+        note: `no standard error: ${noise.message}`,
+      },
+      fit,
+    };
+  }
   return {
     ratio: {
       method: 'dynamic-ols',
@@ -168,14 +191,14 @@ export function hedgeRatios(
 ): HedgeRatios {
   const resolved = { y: names.y ?? 'y', x: names.x ?? 'x' };
   requirePair(y, x, resolved);
-  const dols = dynamicOlsHedgeRatio(y, x, options);
+  const dols = dynamicOlsHedgeRatio(y, x, options, resolved);
   const ols = olsHedgeRatio(y, x);
   const reverseOls = reverseOlsHedgeRatio(y, x);
   const tls = totalLeastSquaresHedgeRatio(y, x);
   const d = dols.ratio;
   const unitsOf = (r: HedgeRatio): HedgeUnits => hedgeUnits(r.beta, y, x, logged, resolved);
   const units = { ols: unitsOf(ols), reverseOls: unitsOf(reverseOls), totalLeastSquares: unitsOf(tls), dynamicOls: unitsOf(d) };
-  const se = `standard error ${formatCoefficient(d.standardError as number)} ${dynamicOlsStandardErrorText(dols.fit)}`;
+  const se = d.standardError === null ? (d.note ?? 'no standard error') : `standard error ${formatCoefficient(d.standardError)} ${dynamicOlsStandardErrorText(dols.fit)}`;
   const others = `OLS of ${resolved.y} on ${resolved.x} gives ${formatCoefficient(ols.beta)}, the reverse regression ${formatCoefficient(reverseOls.beta)}, the orthogonal line ${formatCoefficient(tls.beta)}.`;
   const verdict = logged
     ? `Dynamic OLS of ln ${resolved.y} on ln ${resolved.x}: ${units.dynamicOls.text}; ${se}. In logs, ${others}`

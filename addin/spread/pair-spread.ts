@@ -15,6 +15,7 @@
  */
 import { olsHedgeRatio } from '../cointegration/hedge-ratio';
 import { halfLife, type SpreadHalfLife } from './half-life';
+import { refuseRoundingNoise } from './rounding-noise';
 import { spreadSeries } from './spread-series';
 
 /** Which line the spread is built on, in words, for every surface that shows the spread. */
@@ -39,5 +40,7 @@ export function pairSpread(y: ArrayLike<number>, x: ArrayLike<number>, names: { 
   const ols = olsHedgeRatio(y, x);
   const line = { beta: ols.beta, intercept: ols.intercept };
   const values = spreadSeries(y, x, line.beta, line.intercept, names);
+  // A copied column leaves a spread of rounding noise, whose half-life would describe rounding.
+  refuseRoundingNoise(y, values, { y: names.y, xs: [names.x] });
   return { line, values, halfLife: halfLife(values, period) };
 }

@@ -7,6 +7,7 @@
 import { cointegratingRegression } from '../../addin/cointegration/cointegrating-regression';
 import { dynamicOlsHedgeRatio, olsHedgeRatio, reverseOlsHedgeRatio, totalLeastSquaresHedgeRatio, type HedgeRatio } from '../../addin/cointegration/hedge-ratio';
 import { halfLife } from '../../addin/spread/half-life';
+import { roundingNoiseOf } from '../../addin/spread/rounding-noise';
 import { spreadSeries } from '../../addin/spread/spread-series';
 import { rollingZScore, zScore } from '../../addin/spread/z-score';
 import { NoValue } from '../cells/no-value';
@@ -63,11 +64,9 @@ function spreadOf(y: unknown, x: unknown, prep: unknown): SpreadOf {
   }
   const input = readRelation(y, x, undefined, how);
   const step1 = cointegratingRegression(input.y.values, input.xs.map((s) => s.values), 'const', { y: input.y.name, xs: input.xs.map((s) => s.name) });
-  if (step1.exactFit) {
-    throw new NoValue(
-      `${step1.names.y} is an exact combination of ${step1.names.xs.join(', ')} (R² = ${step1.rSquared.toFixed(7)}), so the spread is rounding noise: ` +
-        'check that one column is not a copy or a formula of another.');
-  }
+  // The one check of every surface (addin/spread/rounding-noise.ts): #N/A with its sentence.
+  const noise = roundingNoiseOf(input.y.values, step1.residuals, step1.names);
+  if (noise) throw new NoValue(noise.message);
   return { values: step1.residuals, orientation: input.orientation, rows: input.y.rows };
 }
 

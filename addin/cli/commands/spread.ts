@@ -4,6 +4,7 @@ import { MooringInputError } from '../../errors';
 import { halfLife } from '../../spread/half-life';
 import { HALF_LIFE_DEFINITION, pairSpread } from '../../spread/pair-spread';
 import { HALF_LIFE_INTERVAL_METHOD, halfLifeIntervalJson } from '../../spread/half-life-interval';
+import { refuseRoundingNoise } from '../../spread/rounding-noise';
 import { spreadSeries } from '../../spread/spread-series';
 import { rollingZScore, zScore } from '../../spread/z-score';
 import { rowPeriod } from '../../report/row-period';
@@ -77,6 +78,8 @@ export const spreadCommand: Command = {
       : method === 'tls' ? totalLeastSquaresHedgeRatio(y, x)
       : dynamicOlsHedgeRatio(y, x).ratio;
     const values = standard ? standard.values : spreadSeries(y, x, line.beta, line.intercept, names);
+    // The one check of every surface (pairSpread makes it for the default line).
+    if (!standard) refuseRoundingNoise(y, values, { y: names.y, xs: [names.x] });
     const life = standard ? standard.halfLife : halfLife(values, period);
     const definition = standard
       ? HALF_LIFE_DEFINITION
