@@ -44,42 +44,36 @@ export interface ScreenPair {
   note?: string;
 }
 
-/** The index of the series pair of directed record d: [y, x]. */
-export type DirectedIndex = (d: number) => [number, number];
-
-/** Every tested directed record as a ScreenPair, with its adjusted p-value and the orders of its two series. */
-export function decodePairs(
-  names: readonly string[], records: Float64Array, tested: readonly number[], adjusted: Float64Array, seriesOf: DirectedIndex, settings: ScreenSettings,
+/** Directed record r of `records` (series yi on xi) as a ScreenPair with its adjusted p-value; hedge ratio and intercept back in the prices' units. */
+export function decodePair(
+  names: readonly string[], records: Float64Array, r: number, yi: number, xi: number, adjusted: number, settings: ScreenSettings,
   orders: readonly SeriesOrder[], scales?: ArrayLike<number>,
-): ScreenPair[] {
+): ScreenPair {
   // The records are in the universe's units (each series times a power of two, screen-universe.ts).
   const scale = (i: number) => scales?.[i] ?? 1;
-  return tested.map((d, f) => {
-    const [yi, xi] = seriesOf(d);
-    const at = (field: number) => records[d * RECORD_SIZE + field];
-    const exact = at(FIELD.status) === PAIR_STATUS.exactFit;
-    const pair: ScreenPair = {
-      y: names[yi],
-      x: names[xi],
-      orderY: orders[yi].order as number,
-      orderX: orders[xi].order as number,
-      statistic: fieldOrNull(records, d, FIELD.tau),
-      pValue: at(FIELD.pValue),
-      adjustedPValue: adjusted[f],
-      discovery: adjusted[f] <= settings.alpha,
-      beta: (at(FIELD.beta) * scale(xi)) / scale(yi),
-      intercept: at(FIELD.intercept) / scale(yi),
-      halfLife: fieldOrNull(records, d, FIELD.halfLife),
-      zscore: fieldOrNull(records, d, FIELD.zscore),
-      lags: fieldOrNull(records, d, FIELD.lags),
-      nobs: at(FIELD.nobs),
-      lastRow: at(FIELD.lastRow),
-      rSquared: at(FIELD.rSquared),
-    };
-    if (settings.johansen) pair.johansenRank = fieldOrNull(records, d, FIELD.johansenRank);
-    if (exact) pair.note = `${pair.y} is an exact multiple of ${pair.x} plus a constant on the shared rows: one column is probably copied or computed from the other`;
-    return pair;
-  });
+  const at = (field: number) => records[r * RECORD_SIZE + field];
+  const exact = at(FIELD.status) === PAIR_STATUS.exactFit;
+  const pair: ScreenPair = {
+    y: names[yi],
+    x: names[xi],
+    orderY: orders[yi].order as number,
+    orderX: orders[xi].order as number,
+    statistic: fieldOrNull(records, r, FIELD.tau),
+    pValue: at(FIELD.pValue),
+    adjustedPValue: adjusted,
+    discovery: adjusted <= settings.alpha,
+    beta: (at(FIELD.beta) * scale(xi)) / scale(yi),
+    intercept: at(FIELD.intercept) / scale(yi),
+    halfLife: fieldOrNull(records, r, FIELD.halfLife),
+    zscore: fieldOrNull(records, r, FIELD.zscore),
+    lags: fieldOrNull(records, r, FIELD.lags),
+    nobs: at(FIELD.nobs),
+    lastRow: at(FIELD.lastRow),
+    rSquared: at(FIELD.rSquared),
+  };
+  if (settings.johansen) pair.johansenRank = fieldOrNull(records, r, FIELD.johansenRank);
+  if (exact) pair.note = `${pair.y} is an exact multiple of ${pair.x} plus a constant on the shared rows: one column is probably copied or computed from the other`;
+  return pair;
 }
 
 /** True when the pair's half-life lies in the settings' range (a pair without one fails any bound). */

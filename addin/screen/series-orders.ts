@@ -111,23 +111,52 @@ export function setAsideReason(y: SeriesOrder, x: SeriesOrder): string {
 }
 
 /**
- * The set-aside pairs in a few lines, grouped: one line per series that pairs with nothing
- * (order 0 or undecided), then one per combination of two different orders of 1 or more.
+ * The set-aside directed pairs, in the order of the screen's records ((i, j) then (j, i) for
+ * each unordered pair i < j), at most `limit` of them: they follow from the orders alone.
  */
-export function setAsideSummary(orders: readonly SeriesOrder[], setAside: readonly SetAsidePair[]): string[] {
+export function setAsidePairs(orders: readonly SeriesOrder[], limit = Number.POSITIVE_INFINITY): SetAsidePair[] {
+  const out: SetAsidePair[] = [];
+  const N = orders.length;
+  for (let i = 0; i < N && out.length < limit; i++) {
+    for (let j = i + 1; j < N && out.length < limit; j++) {
+      if (canPair(orders[i], orders[j])) continue;
+      for (const [y, x] of [[orders[i], orders[j]], [orders[j], orders[i]]]) {
+        if (out.length < limit) out.push({ y: y.name, x: x.name, orderY: y.order, orderX: x.order, reason: setAsideReason(y, x) });
+      }
+    }
+  }
+  return out;
+}
+
+/**
+ * The set-aside pairs in a few lines, grouped: one line per series that pairs with nothing
+ * (order 0 or undecided: all 2 (N - 1) of its directed pairs), then one per combination of two
+ * different orders of 1 or more (2 n_a n_b directed pairs), in the order the records first meet it.
+ */
+export function setAsideSummary(orders: readonly SeriesOrder[]): string[] {
   const lines: string[] = [];
+  const N = orders.length;
   for (const s of orders) {
     const lone = loneReason(s);
-    if (lone === null) continue;
-    const count = setAside.filter((p) => p.y === s.name || p.x === s.name).length;
-    if (count > 0) lines.push(`${lone}: its ${count} directed pair${count === 1 ? '' : 's'} set aside`);
+    if (lone !== null && N > 1) lines.push(`${lone}: its ${2 * (N - 1)} directed pairs set aside`);
   }
+  const alone = orders.map((s) => loneReason(s) !== null);
+  const wandering = new Map<number, number>();
+  orders.forEach((s, i) => {
+    if (!alone[i]) wandering.set(s.order as number, (wandering.get(s.order as number) ?? 0) + 1);
+  });
+  // Each combination of two orders in the order the records first meet it (orders are 1..3).
+  const met = new Set<number>();
   const mixed = new Map<string, number>();
-  for (const p of setAside) {
-    if (p.orderY === null || p.orderX === null || p.orderY === 0 || p.orderX === 0) continue;
-    const [low, high] = [p.orderY, p.orderX].sort((a, b) => a - b);
-    const key = `a series of ${orderWords(low)} with one of ${orderWords(high)}`;
-    mixed.set(key, (mixed.get(key) ?? 0) + 1);
+  for (let i = 0; i < N; i++) {
+    if (alone[i]) continue;
+    for (let j = i + 1; j < N; j++) {
+      if (alone[j] || orders[i].order === orders[j].order) continue;
+      const [low, high] = [orders[i].order as number, orders[j].order as number].sort((u, v) => u - v);
+      if (met.has(10 * low + high)) continue;
+      met.add(10 * low + high);
+      mixed.set(`a series of ${orderWords(low)} with one of ${orderWords(high)}`, 2 * (wandering.get(low) as number) * (wandering.get(high) as number));
+    }
   }
   for (const [key, count] of mixed) lines.push(`${key}: ${count} directed pair${count === 1 ? '' : 's'} set aside`);
   return lines;
