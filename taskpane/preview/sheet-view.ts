@@ -33,7 +33,8 @@ export function mountSheetView(root: HTMLElement, workbook: MemoryWorkbook, rows
   let selected = workbook.selected()?.address.split(':')[0] ?? 'A1';
   let fresh = new Set<number>();
   let grid: RenderedGrid | null = null;
-  let knownNames = new Set(workbook.nameList());
+  /** Where each named block was at the last look: name -> sheet. */
+  let blockSheets = new Map<string, string>();
 
   const nameBox = el('span', { class: 'cell-name', 'data-role': 'sheet-address', 'aria-label': 'Selected cell' });
   const formulaBar = el('output', { class: 'formula-bar', 'data-role': 'formula-bar', 'aria-label': 'Formula or value of the selected cell' });
@@ -144,18 +145,24 @@ export function mountSheetView(root: HTMLElement, workbook: MemoryWorkbook, rows
   });
 
   workbook.onAnyChange(() => {
-    // A block written under a new name opens its sheet, so the user sees it appear.
-    const names = workbook.nameList();
-    const added = names.filter((n) => !knownNames.has(n));
-    knownNames = new Set(names);
     render();
-    if (added.length > 0) {
-      void workbook.findBlock(added[added.length - 1]).then((found) => {
-        if (found && found.sheet !== current) show(found.sheet);
-      });
-    }
+    void followNewBlocks();
   });
 
+  /** A block written under a new name, or moved to another sheet, opens its sheet, so the user sees it appear. */
+  async function followNewBlocks(): Promise<void> {
+    const now = new Map<string, string>();
+    for (const name of workbook.nameList()) {
+      const found = await workbook.findBlock(name);
+      if (found) now.set(name, found.sheet);
+    }
+    const moved = [...now].filter(([name, sheet]) => blockSheets.get(name) !== sheet);
+    blockSheets = now;
+    const target = moved.length > 0 ? moved[moved.length - 1][1] : null;
+    if (target && target !== current) show(target);
+  }
+
   render();
+  void followNewBlocks();
   return { sheet: () => current, show };
 }

@@ -282,6 +282,30 @@ describe('the preview shows the sheet, and the block it gets matches the pane', 
     await shot(page, 'sheet-05-refreshed-block');
   });
 
+  it('a block written on a new sheet opens that sheet\'s tab; the first tab still holds the table', async () => {
+    await page.locator('[data-step="write"]').click();
+    await page.locator('fluent-radio[value="new-sheet"]').click();
+    await page.locator('[data-role="write"]').click();
+    await page.waitForSelector('[data-role="written"]', { timeout: 60_000 });
+    await expect.poll(() => page.locator('#sheet [data-sheet]').count()).toBe(2);
+    const tabs = await page.locator('#sheet [data-sheet]').allTextContents();
+    expect(tabs[0]).toBe('Prices');
+    await expect.poll(() => page.locator('#sheet [data-sheet][aria-selected="true"]').textContent()).toBe(tabs[1]);
+    const title = await page.evaluate((sheet) => {
+      const wb = window.__mooringWorkbook!;
+      for (let r = 1; r <= 5; r++) for (const c of 'ABCDEF') {
+        const v = wb.shownValue(sheet, `${c}${r}`);
+        if (typeof v === 'string' && v.startsWith('GateGasoil and DockDiesel')) return { cell: `${c}${r}`, text: v };
+      }
+      return null;
+    }, tabs[1]);
+    expect(title).not.toBeNull();
+    expect(await cellText(title!.cell)).toBe(title!.text);
+    await shot(page, 'sheet-06-new-sheet-tab');
+    await page.locator('#sheet [data-sheet="Prices"]').click();
+    expect(await cellText('A1')).toBe('Date');
+  });
+
   it('made no request outside the page and broke no content security rule', () => {
     expect(session.foreignRequests).toEqual([]);
     expect(session.errors).toEqual([]);
