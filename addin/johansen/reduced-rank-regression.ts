@@ -33,6 +33,8 @@ export interface ReducedRankFit {
   s01: Matrix;
   /** S11 = R1' R1 / n, p x p. */
   s11: Matrix;
+  /** S00 = R0' R0 / n, m x m, for the tests on the relations and loadings (restrictions.ts). */
+  s00: Matrix;
 }
 
 /** Eigenvalues this close to 1 mean a combination of the changes is fitted exactly. */
@@ -97,7 +99,7 @@ export function reducedRankRegression(design: JohansenDesign): ReducedRankFit {
   }
   const v = solve(lower.transpose(), u); // v = L^{-T} u, so v' S11 v = u'u = I
   const vectors = Array.from({ length: p }, (_, j) => v.getColumn(j));
-  return { nobs: n, eigenvalues, vectors, s01, s11 };
+  return { nobs: n, eigenvalues, vectors, s01, s11, s00 };
 }
 
 /** Cross products a_i' b_j / n of two lists of equal-length vectors, as a matrix. */
