@@ -289,3 +289,6 @@ export function crit(test: any, observations?: any, variables?: any, determinist
 export function commondates(first: any[][], second: any[][], fillforward?: any): any[][] {
   return answer(() => commonDatesCell(first, second, fillforward));
 }
+
+// The functions of the relation through time, scanned from their own file (FUNCTION_SOURCES).
+export * from './path-functions';

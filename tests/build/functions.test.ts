@@ -101,11 +101,16 @@ describe('guarding the associate calls', () => {
     expect(expectedIds(undefined, '/x/functions.ts')).toBeNull();
   });
 
-  it('the real functions file, once the plugin has appended its calls, guards them all', async () => {
-    const file = FUNCTION_SOURCES[0]!;
+  it('each real scanned file, once the plugin has appended its calls (those of that file, as its loader does), guards them all', async () => {
     const result = await generateCustomFunctionsMetadata(FUNCTION_SOURCES, true);
-    const guarded = guardAssociations(appendAssociations(readFileSync(file, 'utf8'), result.associate));
-    expect(guarded.ids).toEqual(expectedIds(result, file));
+    const seen: string[] = [];
+    for (const file of FUNCTION_SOURCES) {
+      const own = result.associate.filter((a) => a.sourceFileName === file);
+      const guarded = guardAssociations(appendAssociations(readFileSync(file, 'utf8'), own));
+      expect(guarded.ids).toEqual(expectedIds(result, file));
+      seen.push(...guarded.ids);
+    }
+    expect(seen.sort()).toEqual(result.associate.map((a) => a.id).sort());
   });
 });
 

@@ -56,6 +56,7 @@ const SURFACE: Record<string, { args: string[]; spills: boolean }> = {
   ROLLING: { args: ['y[]', 'x[]', 'window', 'step?', 'show?', 'prep?'], spills: true },
   CRIT: { args: ['test', 'observations?', 'variables?', 'deterministic?', 'level?'], spills: false },
   COMMONDATES: { args: ['first[]', 'second[]', 'fillforward?'], spills: true },
+  MOVINGHEDGE: { args: ['y[]', 'x[]', 'show?', 'statevar?', 'obsvar?', 'prep?'], spills: true },
 };
 
 function argsOf(f: FunctionEntry): string[] {
