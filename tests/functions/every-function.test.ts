@@ -34,6 +34,7 @@ const CALLS: Record<string, (y: Range, x: Range) => unknown> = {
   VARLAGS: (y, x) => moor.varlags(sideBySide(y, x), 'bic', 4),
   SCREEN: (y, x) => moor.screen(sideBySide(y, x), null, 'list'),
   ROLLING: (y, x) => moor.rolling(y, x, 100, 20),
+  MOVINGHEDGE: (y, x) => moor.movinghedge(y, x),
 };
 
 /** ROLLING's first column is where each window ends in the range, so two blanks above the prices move it down by two rows. */
@@ -63,7 +64,7 @@ for (const [name, call] of Object.entries(CALLS)) {
     it('gives the same answer for the used range, blanks around it as null or as "", and whole columns', () => {
       expect(used).toBeDefined();
       expect(call(column([null, null, ...Y, null]), column([null, null, ...X, '']))).toEqual(
-        name === 'SPREAD' || name === 'ZSCORE' ? [[''], [''], ...(used as unknown[][])] : name === 'ROLLING' ? shiftedByTwoRows(used as unknown[][]) : used,
+        name === 'SPREAD' || name === 'ZSCORE' || name === 'MOVINGHEDGE' ? [[''], [''], ...(used as unknown[][])] : name === 'ROLLING' ? shiftedByTwoRows(used as unknown[][]) : used,
       );
       expect(call(wholeColumn(Y), wholeColumn(X))).toEqual(used);
       expect(call(wholeColumn(Y, ''), wholeColumn(X, ''))).toEqual(used);
