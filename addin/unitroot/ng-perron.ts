@@ -1,0 +1,78 @@
+/**
+ * Ng-Perron unit-root tests (Ng & Perron 2001): MZa, MZt, MSB and MPT (m-statistics.ts) on the
+ * GLS-detrended series, with the autoregressive spectral estimate from the lag the modified AIC
+ * chooses (by default). Null: a unit root; small values of each reject.
+ *
+ * The headline is MZa, the statistic Ng & Perron put first and whose size with the modified AIC
+ * they found closest to nominal; MZt, MSB and MPT follow as details, each with its p-value and
+ * critical values. Critical values: Ng & Perron (2001), Table 1 (asymptotic). p-values: the
+ * asymptotic end of Mooring's simulated surfaces (tables/gls-unitroot-table.ts), so that a
+ * p-value below 5% and a statistic beyond the 5% value tell the same story.
+ */
+import type { ResultDetail, TestResult } from '../result';
+import { glsPValue, ngPerronTableCritical, type CriticalLevels } from '../tables/gls-unitroot-table';
+import { boundNote, GLS_DEFAULT_LAG_RULE, glsWarnings } from './dfgls';
+import { glsCore, type GlsTestOptions } from './gls-core';
+import { unitRootHypotheses } from './hypotheses';
+import { M_STATISTIC_NAMES, mStatistics, type MStatisticName } from './m-statistics';
+
+export interface MStatisticAnswer {
+  statistic: number;
+  pValue: number;
+  pValueBound: 'below' | 'above' | null;
+  critical: CriticalLevels;
+}
+
+export interface NgPerronResult extends TestResult {
+  /** All four statistics with their p-values and Table 1 critical values. */
+  statistics: Record<MStatisticName, MStatisticAnswer>;
+}
+
+const LABELS: Record<MStatisticName, string> = {
+  MZa: 'MZa (modified normalised bias)',
+  MZt: 'MZt (modified t-ratio)',
+  MSB: 'MSB (modified Sargan-Bhargava)',
+  MPT: 'MPT (modified point-optimal)',
+};
+
+export function ngPerronTest(series: ArrayLike<number>, options: GlsTestOptions = {}, name = 'the series'): NgPerronResult {
+  const core = glsCore(series, options, GLS_DEFAULT_LAG_RULE);
+  const { deterministic, regression, choice } = core;
+  const m = mStatistics(core.detrended.values, regression, deterministic, core.detrended.cbar);
+  const statistics = Object.fromEntries(M_STATISTIC_NAMES.map((s) => {
+    const p = glsPValue(s, deterministic, m[s], null);
+    return [s, { statistic: m[s], pValue: p.pValue, pValueBound: p.bound, critical: ngPerronTableCritical(s, deterministic) }];
+  })) as Record<MStatisticName, MStatisticAnswer>;
+  const head = statistics.MZa;
+  const { nullHypothesis, alternative } = unitRootHypotheses(name, deterministic);
+  const details: ResultDetail[] = [];
+  for (const s of M_STATISTIC_NAMES.slice(1)) {
+    details.push({ key: s, label: LABELS[s], value: statistics[s].statistic });
+    details.push({ key: `${s}PValue`, label: `p-value of ${s}`, value: statistics[s].pValue });
+  }
+  details.push(
+    { key: 'spectralVariance', label: 'Autoregressive long-run variance of the detrended changes (unit scale)', value: m.s2AR },
+    { key: 'cbar', label: 'GLS non-centrality c (a = 1 + c/T)', value: core.detrended.cbar },
+    { key: 'maxLags', label: 'Largest lag searched', value: choice ? core.maxLags : null },
+    { key: 'criterion', label: `Lag criterion at the choice (${core.lagRule})`, value: choice ? choice.criterion : null },
+  );
+  return {
+    test: 'Ng-Perron',
+    title: `Unit-root tests (Ng-Perron) on ${name}`,
+    statisticName: 'MZa',
+    statistic: head.statistic,
+    pValue: head.pValue,
+    ...(head.pValueBound ? { pValueBound: head.pValueBound, pValueNote: boundNote(head.pValueBound) } : {}),
+    critical: { ...head.critical },
+    rejectTail: 'lower',
+    lags: regression.lags,
+    lagRule: core.lagRule,
+    nobs: regression.nobs,
+    deterministic,
+    nullHypothesis,
+    alternative,
+    warnings: glsWarnings(core.maxLags, choice?.lags ?? null, series.length, regression.nobs),
+    details,
+    statistics,
+  };
+}
