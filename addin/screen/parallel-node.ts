@@ -1,12 +1,16 @@
 /**
  * The screen on several threads in Node (node:worker_threads): threads - 1 workers plus the
- * main thread take chunks of pairs from one shared queue (chunk-queue.ts) and write into one
- * shared result buffer; the answer is then finished exactly as on one thread, so it is the
- * same to the last bit (each pair's numbers depend only on its series and the settings).
+ * main thread take chunks of each batch of pairs from one shared queue (chunk-queue.ts) and
+ * write into one shared batch buffer; the main thread hands each finished batch on, in the
+ * order of the pairs, and opens the next. Memory is one batch of records whatever the number
+ * of pairs; what is kept of them is the caller's choice (screen-tally.ts keeps a p-value per
+ * pair and the best pairs asked for; a part file keeps them all on disk). The records are the
+ * same to the last bit on any number of threads: each pair's numbers depend only on its series
+ * and the settings.
  *
  * Each series' order of integration is decided once, on the main thread, before any pair
  * (series-orders.ts); the workers receive the orders with the series and skip the pairs the
- * screen sets aside, exactly as one thread does.
+ * screen sets aside, exactly as one thread does. The series travel in shared memory.
  *
  * The call is synchronous: the main thread works through chunks itself and then waits on the
  * queue's finished count (Atomics.wait), so the command line keeps its synchronous commands.
@@ -19,10 +23,13 @@
  */
 import { availableParallelism } from 'node:os';
 import { MessageChannel, Worker, receiveMessageOnPort, type MessagePort } from 'worker_threads';
-import { drainChunks, finishedChunks, screenJob } from './chunk-queue';
+import { batchRecords, drainBatch, finishedChunks, batchChunks, screenJob, startBatch, stopJob, threadScratch, waitForChunks, BATCH_BYTES } from './chunk-queue';
+import { RECORD_SIZE } from './pair-record';
+import { PairWorkspace } from './pair-relation';
+import { screenChunkInto } from './screen-chunk';
 import { finishScreen, type ScreenResult } from './screen-pairs';
-import { resolveScreenOptions, type ScreenOptions } from './screen-options';
-import { screenUniverse, unorderedPairCount, type NamedSeries } from './screen-universe';
+import { resolveScreenOptions, type ScreenOptions, type ScreenSettings } from './screen-options';
+import { screenUniverse, unorderedPairCount, type NamedSeries, type ScreenUniverse } from './screen-universe';
 import { withSeriesOrders } from './series-orders';
 import { MooringInputError } from '../errors';
 
@@ -38,6 +45,8 @@ export interface ThreadOptions {
   mainThreadJoins?: boolean;
   /** Work, in pairs times rows, that earns each thread beyond the first (default WORK_PER_THREAD). */
   workPerThread?: number;
+  /** Most unordered pairs in one batch (default: 16 MB of records, about 80,000 pairs). */
+  batchPairs?: number;
 }
 
 /** What the threads did. */
@@ -49,6 +58,8 @@ export interface ThreadReport {
   /** Chunks the main thread ran again because a worker still held them. */
   chunksRetaken: number;
   chunks: number;
+  /** Batches the pairs went through. */
+  batches: number;
   /** Why fewer threads helped than were asked for, if so. */
   note?: string;
 }
@@ -75,19 +86,61 @@ function readErrors(ports: readonly MessagePort[], errors: string[]): boolean {
   return found;
 }
 
-/** Screens every pair of the series on several threads; the result equals screenPairs' (see the file comment). */
-export function screenPairsInThreads(series: readonly NamedSeries[], options: ScreenOptions = {}, threading: ThreadOptions = {}): { result: ScreenResult; report: ThreadReport } {
-  const settings = resolveScreenOptions(options);
-  const universe = withSeriesOrders(screenUniverse(series), settings);
+/** The universe with its numbers in shared memory, so the workers read the one copy. */
+function sharedUniverse(universe: ScreenUniverse): ScreenUniverse {
+  const share = <T extends Float64Array | Uint8Array>(a: T, make: (b: SharedArrayBuffer) => T): T => {
+    const copy = make(new SharedArrayBuffer(a.byteLength));
+    copy.set(a);
+    return copy;
+  };
+  return {
+    ...universe,
+    data: share(universe.data, (b) => new Float64Array(b)),
+    complete: share(universe.complete, (b) => new Uint8Array(b)),
+    means: share(universe.means, (b) => new Float64Array(b)),
+    centredSquares: share(universe.centredSquares, (b) => new Float64Array(b)),
+    scales: share(universe.scales, (b) => new Float64Array(b)),
+  };
+}
+
+/** Threads worth starting for `pairs` pairs of `rows` rows (see WORK_PER_THREAD), or a refusal of a bad count. */
+export function threadsFor(pairs: number, rows: number, threading: ThreadOptions): { threads: number; requested: number } {
   const requested = threading.threads ?? Math.min(availableParallelism(), 16);
   if (!Number.isInteger(requested) || requested < 1 || requested > 64) {
     throw new MooringInputError(`The number of threads must be a whole number from 1 to 64; got ${String(requested)}.`);
   }
-  const total = unorderedPairCount(universe.names.length);
-  const work = total * universe.rows;
   const perThread = threading.workPerThread ?? WORK_PER_THREAD;
-  const threads = Math.max(1, Math.min(requested, total, Math.floor(work / Math.max(perThread, 1)) + 1));
-  const job = screenJob(universe, settings, threads);
+  return { requested, threads: Math.max(1, Math.min(requested, pairs, Math.floor((pairs * rows) / Math.max(perThread, 1)) + 1)) };
+}
+
+/**
+ * Runs unordered pairs [first, end) of the universe (which carries its orders) in batches on
+ * several threads, and hands each batch's records to `onBatch` in order: onBatch(firstPair,
+ * records), 2 directed records per pair. The records view is reused for the next batch: copy
+ * what must be kept.
+ */
+export function screenRecordsInThreads(
+  universe: ScreenUniverse, settings: ScreenSettings, first: number, end: number, threading: ThreadOptions,
+  onBatch: (first: number, records: Float64Array) => void,
+): ThreadReport {
+  const { threads, requested } = threadsFor(end - first, universe.rows, threading);
+  const batchPairs = threading.batchPairs ?? Math.floor(BATCH_BYTES / (2 * RECORD_SIZE * 8));
+  const batches = Math.ceil((end - first) / batchPairs);
+  const batchEnd = (b: number) => Math.min(end, first + (b + 1) * batchPairs);
+  if (threads === 1) {
+    const workspace = new PairWorkspace(universe.rows);
+    const out = new Float64Array(2 * Math.min(batchPairs, end - first) * RECORD_SIZE);
+    for (let b = 0; b < batches; b++) {
+      const from = first + b * batchPairs;
+      const to = batchEnd(b);
+      screenChunkInto(universe, settings, from, to, out, 0, workspace);
+      onBatch(from, out.subarray(0, 2 * (to - from) * RECORD_SIZE));
+    }
+    const report: ThreadReport = { threads, workersStarted: 0, chunksOnMainThread: batches, chunksRetaken: 0, chunks: batches, batches };
+    if (threads < requested) report.note = `${requested} threads were asked for; ${end - first} pairs of ${universe.rows} rows keep ${threads} busy.`;
+    return report;
+  }
+  const job = screenJob(sharedUniverse(universe), settings, threads, Math.min(batchPairs, end - first));
   const errors: string[] = [];
   const workers: Worker[] = [];
   const ports: MessagePort[] = [];
@@ -107,45 +160,71 @@ export function screenPairsInThreads(series: readonly NamedSeries[], options: Sc
   }
   const joins = threading.mainThreadJoins !== false || workers.length === 0;
   const patience = threading.patienceMs ?? 60_000;
+  const scratch = threadScratch(job);
   let chunksOnMainThread = 0;
   let chunksRetaken = 0;
-  let straggler = patience;
-  if (joins) {
-    const started = performance.now();
-    chunksOnMainThread = drainChunks(job);
-    // A worker's first chunks run before its compiler has warmed up, so the last chunk it holds
-    // can take far longer than on the warm main thread. Rather than wait for it, the main thread
-    // runs such a chunk again once twice its own time per chunk has passed without progress
-    // (the numbers are the same, whichever thread writes them).
-    if (chunksOnMainThread > 0) straggler = Math.min(patience, Math.max(2, (2 * (performance.now() - started)) / chunksOnMainThread));
-  }
-  const states = new Int32Array(job.states);
-  const count = job.chunks.length;
-  let done = finishedChunks(job);
-  let since = performance.now();
-  while (done < count) {
-    Atomics.wait(states, count, done, Math.min(50, straggler));
-    const failed = readErrors(ports, errors);
-    const now = finishedChunks(job);
-    if (now !== done && !failed) {
-      done = now;
-      since = performance.now();
-    } else if (failed || performance.now() - since > straggler) {
-      if (!failed && straggler === patience) errors.push(`a worker thread left a chunk unfinished for ${patience} ms`);
-      const again = drainChunks(job, true);
-      chunksOnMainThread += again;
-      chunksRetaken += again;
-      done = finishedChunks(job);
-      since = performance.now();
+  let chunks = 0;
+  try {
+    for (let b = 0; b < batches; b++) {
+      const from = first + b * batchPairs;
+      const batch = startBatch(job, from, batchEnd(b));
+      const count = batchChunks(job);
+      chunks += count;
+      let straggler = patience;
+      if (joins) {
+        const started = performance.now();
+        const ran = drainBatch(job, batch, scratch);
+        chunksOnMainThread += ran;
+        // A worker's first chunks run before its compiler has warmed up, so the last chunk it holds
+        // can take far longer than on the warm main thread. Rather than wait for it, the main thread
+        // runs such a chunk again once twice its own time per chunk has passed without progress
+        // (the numbers are the same, whichever thread writes them).
+        if (ran > 0) straggler = Math.min(patience, Math.max(2, (2 * (performance.now() - started)) / ran));
+      }
+      let done = finishedChunks(job);
+      let since = performance.now();
+      while (done < count) {
+        waitForChunks(job, done, Math.min(50, straggler));
+        const failed = readErrors(ports, errors);
+        const now = finishedChunks(job);
+        if (now !== done && !failed) {
+          done = now;
+          since = performance.now();
+        } else if (failed || performance.now() - since > straggler) {
+          if (!failed && straggler === patience) errors.push(`a worker thread left a chunk unfinished for ${patience} ms`);
+          const again = drainBatch(job, batch, scratch, true);
+          chunksOnMainThread += again;
+          chunksRetaken += again;
+          done = finishedChunks(job);
+          since = performance.now();
+        }
+      }
+      onBatch(from, batchRecords(job));
     }
+  } finally {
+    stopJob(job);
+    readErrors(ports, errors);
+    for (const port of ports) port.close();
+    for (const worker of workers) void worker.terminate();
   }
-  readErrors(ports, errors);
-  for (const port of ports) port.close();
-  for (const worker of workers) void worker.terminate();
-  const result = finishScreen(universe, settings, new Float64Array(job.results));
-  const report: ThreadReport = { threads, workersStarted: workers.length, chunksOnMainThread, chunksRetaken, chunks: count };
-  if (threads < requested) report.note = `${requested} threads were asked for; ${total} pairs of ${universe.rows} rows keep ${threads} busy.`;
+  const report: ThreadReport = { threads, workersStarted: workers.length, chunksOnMainThread, chunksRetaken, chunks, batches };
+  if (threads < requested) report.note = `${requested} threads were asked for; ${end - first} pairs of ${universe.rows} rows keep ${threads} busy.`;
   if (errors.length > 0) report.note = `Some work moved to the main thread: ${errors.join('; ')}.`;
-  else if (workers.length > 0 && chunksOnMainThread - chunksRetaken === count) report.note = 'The main thread had run every chunk before the worker threads were ready.';
-  return { result, report };
+  else if (workers.length > 0 && chunksOnMainThread - chunksRetaken === chunks) report.note = 'The main thread had run every chunk before the worker threads were ready.';
+  return report;
+}
+
+/**
+ * Screens every pair of the series on several threads, every pair kept (the matrices and the
+ * full ranking); the result equals screenPairs'. For a universe too large to keep every pair,
+ * run screenRecordsInThreads into a ScreenTally.
+ */
+export function screenPairsInThreads(series: readonly NamedSeries[], options: ScreenOptions = {}, threading: ThreadOptions = {}): { result: ScreenResult; report: ThreadReport } {
+  const settings = resolveScreenOptions(options);
+  const universe = withSeriesOrders(screenUniverse(series), settings);
+  const total = unorderedPairCount(universe.names.length);
+  threadsFor(total, universe.rows, threading);
+  const records = new Float64Array(2 * total * RECORD_SIZE);
+  const report = screenRecordsInThreads(universe, settings, 0, total, threading, (from, batch) => records.set(batch, 2 * from * RECORD_SIZE));
+  return { result: finishScreen(universe, settings, records), report };
 }

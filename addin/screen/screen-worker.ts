@@ -1,15 +1,15 @@
 /**
  * Entry of a Node worker thread of the screen (started by parallel-node.ts): takes chunks of
- * the job it was handed until none is left, then ends. Errors go back on the port it was
- * given; the main thread runs any chunk a failed worker left unfinished.
+ * each batch the main thread opens until it says stop, then ends. Errors go back on the port
+ * it was given; the main thread runs any chunk a failed worker left unfinished.
  */
 import { isMainThread, workerData, type MessagePort } from 'node:worker_threads';
-import { drainChunks, type ScreenJob } from './chunk-queue';
+import { workBatches, type ScreenJob } from './chunk-queue';
 
 if (!isMainThread) {
   const { job, port } = workerData as { job: ScreenJob; port: MessagePort };
   try {
-    drainChunks(job);
+    workBatches(job);
   } catch (e) {
     port.postMessage({ error: e instanceof Error ? e.message : String(e) });
   } finally {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { drainChunks, finishedChunks, screenJob } from '../../addin/screen/chunk-queue';
+import { CHUNK_STATES_AT, CHUNK_TAKEN, batchChunks, batchRecords, drainBatch, finishedChunks, screenJob, startBatch, threadScratch } from '../../addin/screen/chunk-queue';
 import { RECORD_SIZE } from '../../addin/screen/pair-record';
 import { chunkRanges, screenChunk } from '../../addin/screen/screen-chunk';
 import { finishScreen, screenPairs } from '../../addin/screen/screen-pairs';
@@ -66,32 +66,55 @@ describe('the shared chunk queue, drained on this thread', () => {
     expect(universe.orders?.map((o) => o.order)).toEqual([...generated.map(() => 1), 0]);
   });
 
-  it('fills the shared buffer with the same records as one chunk, and its result equals screenPairs', () => {
-    const job = screenJob(universe, settings, 3);
-    expect(drainChunks(job)).toBe(job.chunks.length);
-    expect(finishedChunks(job)).toBe(job.chunks.length);
-    expect(Array.from(new Float64Array(job.results))).toEqual(Array.from(whole));
-    const result = finishScreen(universe, settings, new Float64Array(job.results));
+  it('one batch drained on this thread fills the shared buffer with the same records as one chunk, and its result equals screenPairs', () => {
+    const job = screenJob(universe, settings, 3, total);
+    const batch = startBatch(job, 0, total);
+    expect(drainBatch(job, batch, threadScratch(job))).toBe(batchChunks(job));
+    expect(finishedChunks(job)).toBe(batchChunks(job));
+    expect(Array.from(batchRecords(job))).toEqual(Array.from(whole));
+    const result = finishScreen(universe, settings, Float64Array.from(batchRecords(job)));
     expect(result).toEqual(screenPairs(series, { johansen: true }));
     expect(result.setAside).toHaveLength(2 * generated.length);
+  });
+
+  it('batches of 7 pairs through one reused buffer give the same records in order', () => {
+    const job = screenJob(universe, settings, 2, 7);
+    const scratch = threadScratch(job);
+    const joined: number[] = [];
+    for (let from = 0; from < total; from += 7) {
+      const batch = startBatch(job, from, Math.min(total, from + 7));
+      drainBatch(job, batch, scratch);
+      joined.push(...batchRecords(job));
+    }
+    expect(joined).toEqual(Array.from(whole));
   });
 
   it('finishing needs the orders the records were made with', () => {
     expect(() => finishScreen(screenUniverse(series), settings, whole)).toThrow(/carries no orders/);
   });
 
-  it('a second drain finds nothing left; a retake reruns taken-but-unfinished chunks with the same numbers', () => {
-    const job = screenJob(universe, settings, 2);
-    drainChunks(job);
-    expect(drainChunks(job)).toBe(0);
+  it('a second drain finds nothing left; a retake reruns taken-but-unfinished chunks with the same numbers; a late thread of an old batch writes nothing', () => {
+    const job = screenJob(universe, settings, 2, total);
+    const scratch = threadScratch(job);
+    const batch = startBatch(job, 0, total);
+    drainBatch(job, batch, scratch);
+    expect(drainBatch(job, batch, scratch)).toBe(0);
     // As if a thread had taken chunk 0 and died before finishing it: taken, not counted, records lost.
-    const states = new Int32Array(job.states);
-    Atomics.store(states, 0, 1);
-    Atomics.sub(states, job.chunks.length, 1);
-    new Float64Array(job.results).fill(0, 0, 2 * job.chunks[0][1] * RECORD_SIZE);
-    expect(drainChunks(job)).toBe(0);
-    expect(drainChunks(job, true)).toBe(1);
-    expect(Array.from(new Float64Array(job.results))).toEqual(Array.from(whole));
-    expect(finishedChunks(job)).toBe(job.chunks.length);
+    const control = new Int32Array(job.control);
+    Atomics.store(control, CHUNK_STATES_AT, 4 * batch + CHUNK_TAKEN);
+    Atomics.sub(control, 1, 1);
+    const size = 2 * total * RECORD_SIZE;
+    new Float64Array(job.results).fill(0, 0, 2 * RECORD_SIZE);
+    expect(drainBatch(job, batch, scratch)).toBe(0);
+    expect(drainBatch(job, batch, scratch, true)).toBe(1);
+    expect(Array.from(batchRecords(job))).toEqual(Array.from(whole));
+    expect(finishedChunks(job)).toBe(batchChunks(job));
+    // The next batch opens in the same buffer: a thread still holding batch 1 finds every state changed.
+    const next = startBatch(job, 0, total);
+    new Float64Array(job.results).fill(0, 0, size);
+    expect(drainBatch(job, batch, scratch, true)).toBe(0);
+    expect(new Float64Array(job.results).every((v) => v === 0)).toBe(true);
+    expect(drainBatch(job, next, scratch)).toBe(batchChunks(job));
+    expect(Array.from(batchRecords(job))).toEqual(Array.from(whole));
   });
 });

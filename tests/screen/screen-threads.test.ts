@@ -38,6 +38,13 @@ describe('screen on worker threads (built worker dist/cli/screen-worker.js)', ()
     expect(result).toEqual(single);
   });
 
+  it('in batches of 10 pairs through one shared buffer (16 batches), the workers alone: the same result', () => {
+    const { result, report } = screenPairsInThreads(series, { johansen: true }, { threads: 3, workerFile: WORKER, workPerThread: 1, batchPairs: 10, mainThreadJoins: false });
+    expect(report.batches).toBe(16);
+    expect(report.chunksOnMainThread).toBe(0);
+    expect(result).toEqual(single);
+  });
+
   it('when a worker cannot start, the main thread runs its chunks: still the same result, with a note', () => {
     const { result, report } = screenPairsInThreads(series, { johansen: true }, { threads: 2, workerFile: join(DIST_CLI, 'no-such-worker.js'), workPerThread: 1 });
     expect(result).toEqual(single);
