@@ -5,6 +5,7 @@
 import type { Command } from '../command';
 import { adfCommand } from './adf';
 import { breaksCommand } from './breaks';
+import { dfglsCommand } from './dfgls';
 import { ecmCommand } from './ecm';
 import { egCommand } from './eg';
 import { grangerCommand } from './granger';
@@ -12,6 +13,7 @@ import { hedgeCommand } from './hedge';
 import { johansenCommand } from './johansen';
 import { kalmanCommand } from './kalman';
 import { kpssCommand } from './kpss';
+import { ngperronCommand } from './ngperron';
 import { orderCommand } from './order';
 import { poCommand } from './po';
 import { ppCommand } from './pp';
@@ -23,7 +25,7 @@ import { varlagsCommand } from './varlags';
 
 /** Every command, in help order. */
 export const MOORING_COMMANDS: readonly Command[] = [
-  adfCommand, kpssCommand, ppCommand, orderCommand,
+  adfCommand, kpssCommand, ppCommand, dfglsCommand, ngperronCommand, orderCommand,
   egCommand, poCommand, johansenCommand, hedgeCommand, kalmanCommand, ecmCommand, spreadCommand,
   reportCommand,
   varlagsCommand, grangerCommand,
