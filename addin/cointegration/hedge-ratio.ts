@@ -131,7 +131,7 @@ export function totalLeastSquaresHedgeRatio(y: ArrayLike<number>, x: ArrayLike<n
   const vx = eig.eigenvectorMatrix.get(0, smallest);
   const vy = eig.eigenvectorMatrix.get(1, smallest);
   if (!(Math.abs(vy) > 1e-12 * Math.abs(vx))) {
-    throw new MooringInputError('y hardly moves compared with x, so the orthogonal line is vertical and gives no hedge ratio.');
+    throw new MooringInputError('x hardly moves compared with y, so the orthogonal line is vertical (x nearly constant along it) and gives no hedge ratio.');
   }
   const beta = vx === 0 ? 0 : -vx / vy; // no signed zero for a flat y
   return { method: 'total-least-squares', label: 'Total least squares (orthogonal regression)', beta, intercept: (my - beta * mx) / f, standardError: null, tValue: null, pValue: null, note: `depends on the units of both series; ${STATIC_NOTE}` };
