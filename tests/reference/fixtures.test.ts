@@ -6,13 +6,13 @@ import { type FixtureFile, type FixtureName, type Fixtures, fixtureSeries, loadF
 // statsmodels 0.13.5 that the engine's tests rely on.
 
 const NAMES: FixtureName[] = [
-  'adf', 'kpss', 'ols-longley', 'coint', 'johansen', 'granger', 'granger-levels', 'var-select', 'var-wald', 'zivot-andrews', 'kalman',
+  'adf', 'kpss', 'ols-longley', 'coint', 'johansen', 'granger', 'granger-levels', 'var-select', 'var-wald', 'zivot-andrews', 'kalman', 'vecm-forecast',
 ];
 
 // Case counts follow from the README's grid (e.g. adf: 21 series x 3 terms x 9 lag settings).
 const CASE_COUNTS: Record<FixtureName, number> = {
   adf: 567, kpss: 210, 'ols-longley': 1, coint: 84, johansen: 30, granger: 4, 'granger-levels': 2, 'var-select': 3,
-  'var-wald': 12, 'zivot-andrews': 27, kalman: 8,
+  'var-wald': 12, 'zivot-andrews': 27, kalman: 8, 'vecm-forecast': 20,
 };
 
 // Series lengths as documented in the README.

@@ -260,6 +260,25 @@ export interface KalmanCase {
   forecastErrorVar?: number[];
 }
 
+/** A VECM forecast (makers/forecast.py): statsmodels' VECM(...).fit().predict(steps, alpha=0.05). */
+export interface VecmForecastCase {
+  series: string[];
+  case: 'none' | 'restricted-constant' | 'constant' | 'restricted-trend' | 'trend';
+  statsmodelsDeterministic: string;
+  lags: number;
+  rank: number;
+  horizon: number;
+  /** forecast[h][i]: series i, h + 1 steps ahead; lower and upper the 95% interval. */
+  forecast: number[][];
+  lower: number[][];
+  upper: number[][];
+  sigmaU: number[][];
+  alpha: number[][];
+  beta: number[][];
+  gamma: number[][];
+  llf: number;
+}
+
 /** Each fixture file's name and contents, for `loadFixture<Fixtures['adf']>('adf')`. */
 export interface Fixtures {
   adf: FixtureFile<AdfCase>;
@@ -273,6 +292,7 @@ export interface Fixtures {
   'var-wald': FixtureFile<VarWaldCase>;
   'zivot-andrews': FixtureFile<ZivotAndrewsCase>;
   kalman: FixtureFile<KalmanCase>;
+  'vecm-forecast': FixtureFile<VecmForecastCase>;
 }
 
 export type FixtureName = keyof Fixtures;

@@ -14,7 +14,7 @@ sys.dont_write_bytecode = True  # keep __pycache__ out of the source tree
 
 import statsmodels  # noqa: E402
 
-from makers import ardl, causality, cointegration, multitest, regression, state_space, unit_root  # noqa: E402
+from makers import ardl, causality, cointegration, forecast, multitest, regression, state_space, unit_root  # noqa: E402
 from makers.json_out import pick_series, write_fixture  # noqa: E402
 from makers.series import UNIVARIATE, all_series  # noqa: E402
 
@@ -61,6 +61,7 @@ def main():
     emit("zivot-andrews", unit_root.zivot_andrews_cases(series, ZA_SERIES), ["series"],
          extra=sim_seeds)
     emit("kalman", state_space.kalman_cases(series), ["y", "x"], extra=sim_seeds)
+    emit("vecm-forecast", forecast.forecast_cases(series), ["series"], extra=sim_seeds)
     ardl_source = {**series, **ardl.ardl_series()}
     emit("ardl-bounds", ardl.ardl_cases(ardl_source), ["y", "x"], source=ardl_source,
          extra={"seeds": {**seeds, "ardl": ardl.ARDL_SEED}})
