@@ -222,11 +222,12 @@ export function ardlBoundsTest(y: ArrayLike<number>, xs: readonly ArrayLike<numb
 
 function verdictWords(outcome: BoundsOutcome, tOutcome: BoundsOutcome | null, level: BoundsLevel, label: { y: string; x: string[] }, f: number, pair: BoundPair): string {
   const xs = label.x.map((x) => `'${x}'`).join(', ');
+  const whether = label.x.length > 1 ? 'whether they are stationary or wander' : 'whether it is stationary or wanders';
   const head =
     outcome === 'relation'
-      ? `F = ${f.toFixed(2)} is above the upper ${level} bound (${pair.upper}): '${label.y}' keeps a long-run relation with ${xs}, whether they are stationary or wander.`
+      ? `F = ${f.toFixed(2)} is above the upper ${level} bound (${pair.upper}): '${label.y}' keeps a long-run relation with ${xs}, ${whether}.`
       : outcome === 'no-relation'
-        ? `F = ${f.toFixed(2)} is below the lower ${level} bound (${pair.lower}): no long-run relation of '${label.y}' with ${xs} shows, whether they are stationary or wander.`
+        ? `F = ${f.toFixed(2)} is below the lower ${level} bound (${pair.lower}): no long-run relation of '${label.y}' with ${xs} shows, ${whether}.`
         : `F = ${f.toFixed(2)} lies between the ${level} bounds (${pair.lower} and ${pair.upper}): inconclusive; the answer depends on whether ${xs} ${label.x.length > 1 ? 'are' : 'is'} stationary or wander${label.x.length > 1 ? '' : 's'}.`;
   if (outcome !== 'relation' || tOutcome === null) return head;
   return tOutcome === 'relation'

@@ -4,6 +4,7 @@
  */
 import type { Command } from '../command';
 import { adfCommand } from './adf';
+import { ardlCommand } from './ardl';
 import { breaksCommand } from './breaks';
 import { dfglsCommand } from './dfgls';
 import { ecmCommand } from './ecm';
@@ -26,7 +27,7 @@ import { varlagsCommand } from './varlags';
 /** Every command, in help order. */
 export const MOORING_COMMANDS: readonly Command[] = [
   adfCommand, kpssCommand, ppCommand, dfglsCommand, ngperronCommand, orderCommand,
-  egCommand, poCommand, johansenCommand, hedgeCommand, kalmanCommand, ecmCommand, spreadCommand,
+  egCommand, poCommand, johansenCommand, ardlCommand, hedgeCommand, kalmanCommand, ecmCommand, spreadCommand,
   reportCommand,
   varlagsCommand, grangerCommand,
   screenCommand, rollingCommand, breaksCommand,

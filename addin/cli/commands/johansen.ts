@@ -5,6 +5,8 @@
  */
 import { JOHANSEN_CASES } from '../../johansen/deterministic-case';
 import { johansenTest } from '../../johansen/johansen';
+import { betaRestrictionTest, exogeneityTests } from '../../johansen/restrictions';
+import { MooringInputError } from '../../errors';
 import type { Command } from '../command';
 import { choiceValue, levelValue, wholeNumberValue } from '../option-values';
 import { bullet, formatPValue, formatStatistic, heading, labelled } from '../render/format';
@@ -24,6 +26,10 @@ export const johansenCommand: Command = {
     "--case chooses the deterministic terms: none; restricted-constant (a constant inside the relations: prices that do not drift); " +
       'constant (the default: prices that drift); restricted-trend (a trend inside the relations); trend (trending changes).',
     '--lags K is the number of lagged changes (K = 1 by default). --small-sample scales the statistics by (n - mK\')/n (Reinsel & Ahn 1992).',
+    '--beta-test 1,-1 tests whether the one long-run relation is the given weights up to scale ("is the spread simply A - B?"; ' +
+      'likelihood ratio, chi-square with one degree of freedom fewer than the series). --exogeneity tests, for each series, ' +
+      'whether it never moves to close the gap (its adjustment is zero; chi-square with as many degrees of freedom as relations, ' +
+      'the rank chosen by the trace test, at least 1).',
   ],
   usage: 'mooring johansen <file.csv> --series A,B[,...] [options]',
   options: [
@@ -31,8 +37,10 @@ export const johansenCommand: Command = {
     { name: 'lags', value: 'K', help: 'lagged changes in the model (default 1)' },
     { name: 'alpha', value: 'LEVEL', help: 'level for the sequential rank choice (default 0.05)' },
     { name: 'small-sample', help: 'apply the Reinsel-Ahn small-sample correction' },
+    { name: 'beta-test', value: 'W1,W2[,...]', help: 'test that the relation is these weights, one per series, up to scale' },
+    { name: 'exogeneity', help: 'test, for each series, that it never moves to close the gap' },
   ],
-  examples: ['mooring johansen prices.csv --series Gasoil,Diesel,Freight --log', 'mooring johansen prices.csv --series Gasoil,Diesel --case restricted-constant --lags 2 --json'],
+  examples: ['mooring johansen prices.csv --series Gasoil,Diesel,Freight --log', 'mooring johansen prices.csv --series Gasoil,Diesel --case restricted-constant --lags 2 --json', 'mooring johansen prices.csv --series Gasoil,Diesel --beta-test 1,-1 --exogeneity'],
   run(context) {
     const names = seriesList(context.common.series, 'johansen');
     const caseName = choiceValue('case', context.args.values.get('case'), JOHANSEN_CASES) ?? 'constant';
@@ -45,6 +53,35 @@ export const johansenCommand: Command = {
       { case: caseName, lags, alpha, smallSampleCorrection: context.args.switches.has('small-sample') },
       labels,
     );
+    const options = { case: caseName, lags };
+    const vectorText = context.args.values.get('beta-test');
+    let vector: number[] | null = null;
+    if (vectorText !== undefined) {
+      vector = vectorText.split(',').map((v) => Number(v.trim()));
+      if (vector.some((v, i) => vectorText.split(',')[i].trim() === '' || !Number.isFinite(v))) {
+        throw new MooringInputError(`--beta-test needs one number per series, separated by commas (such as 1,-1), not '${vectorText}'.`);
+      }
+    }
+    const betaTest = vector === null ? null : betaRestrictionTest(block.map((s) => s.series.values), vector, options, labels);
+    const exogeneityRank = Math.min(Math.max(result.rank.trace, 1), labels.length - 1);
+    const exogeneity = context.args.switches.has('exogeneity') ? exogeneityTests(block.map((s) => s.series.values), { ...options, rank: exogeneityRank }, labels) : null;
+    const restrictionLines = [
+      ...(betaTest === null ? [] : [
+        '',
+        `Is the relation ${vector!.map((v, i) => `${formatStatistic(v)} ${labels[i]}`).join(' + ')} (up to scale)?`,
+        labelled('LR statistic', `${formatStatistic(betaTest.statistic)} (chi-square, ${betaTest.df} df)`),
+        labelled('p-value', formatPValue(betaTest.pValue)),
+        ...(result.rank.trace !== 1 ? [bullet(`The trace test chose ${result.rank.trace} relations; this test assumes exactly one.`)] : []),
+      ]),
+      ...(exogeneity === null ? [] : [
+        '',
+        `Who closes the gap? (each series' adjustment is zero; ${exogeneityRank} relation${exogeneityRank > 1 ? 's' : ''} assumed)`,
+        ...plainTable(['series', 'LR', 'df', 'p', 'moves to close the gap?'], exogeneity.map((e) => [
+          e.series, formatStatistic(e.statistic), String(e.df), formatPValue(e.pValue), e.pValue < alpha ? 'yes' : 'no sign of it',
+        ])),
+        ...(result.rank.trace === 0 ? [bullet('The trace test found no relation; the adjustment tests assume one.')] : []),
+      ]),
+    ];
     const rows = result.trace.map((t, r) => {
       const m = result.maxEigen[r];
       return [
@@ -74,6 +111,7 @@ export const johansenCommand: Command = {
       '',
       'Relations (each column of beta, first series = 1):',
       ...relations,
+      ...restrictionLines,
       '',
       ...[result.verdict, ...result.warnings].map((w) => bullet(w)),
       '',
@@ -107,6 +145,8 @@ export const johansenCommand: Command = {
         smallSampleFactor: result.smallSampleFactor,
         verdict: result.verdict,
         warnings: result.warnings,
+        ...(betaTest === null ? {} : { betaTest: { vector, statistic: betaTest.statistic, df: betaTest.df, pValue: betaTest.pValue } }),
+        ...(exogeneity === null ? {} : { exogeneity: exogeneity.map((e) => ({ series: e.series, statistic: e.statistic, df: e.df, pValue: e.pValue })), exogeneityRank }),
       },
     };
   },
