@@ -292,3 +292,5 @@ export function commondates(first: any[][], second: any[][], fillforward?: any):
 
 // The functions of the relation through time, scanned from their own file (FUNCTION_SOURCES).
 export * from './path-functions';
+// The unit-root tests on GLS-detrended data (DF-GLS, Ng-Perron), scanned from their own file too.
+export * from './gls-functions';

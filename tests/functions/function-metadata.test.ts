@@ -41,6 +41,8 @@ const SURFACE: Record<string, { args: string[]; spills: boolean }> = {
   KPSS: { args: ['series[]', 'deterministic?', 'bandwidth?', 'show?', 'prep?'], spills: true },
   PHILLIPSPERRON: { args: ['series[]', 'deterministic?', 'bandwidth?', 'show?', 'prep?'], spills: true },
   ORDER: { args: ['series[]', 'alpha?', 'deterministic?', 'prep?'], spills: true },
+  GLSROOT: { args: ['series[]', 'deterministic?', 'lags?', 'show?', 'prep?'], spills: true },
+  MSTATS: { args: ['series[]', 'deterministic?', 'lags?', 'show?', 'prep?'], spills: true },
   ENGLEGRANGER: { args: ['y[]', 'x[]', 'deterministic?', 'lags?', 'show?', 'prep?'], spills: true },
   PHILLIPSOULIARIS: { args: ['y[]', 'x[]', 'deterministic?', 'bandwidth?', 'show?', 'prep?'], spills: true },
   JOHANSEN: { args: ['block[]', 'lags?', 'deterministic?', 'show?', 'prep?'], spills: true },
