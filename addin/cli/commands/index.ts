@@ -9,6 +9,7 @@ import { breaksCommand } from './breaks';
 import { dfglsCommand } from './dfgls';
 import { ecmCommand } from './ecm';
 import { egCommand } from './eg';
+import { forecastCommand } from './forecast';
 import { grangerCommand } from './granger';
 import { hedgeCommand } from './hedge';
 import { johansenCommand } from './johansen';
@@ -27,7 +28,7 @@ import { varlagsCommand } from './varlags';
 /** Every command, in help order. */
 export const MOORING_COMMANDS: readonly Command[] = [
   adfCommand, kpssCommand, ppCommand, dfglsCommand, ngperronCommand, orderCommand,
-  egCommand, poCommand, johansenCommand, ardlCommand, hedgeCommand, kalmanCommand, ecmCommand, spreadCommand,
+  egCommand, poCommand, johansenCommand, ardlCommand, hedgeCommand, kalmanCommand, ecmCommand, spreadCommand, forecastCommand,
   reportCommand,
   varlagsCommand, grangerCommand,
   screenCommand, rollingCommand, breaksCommand,
