@@ -23,7 +23,7 @@ import { johansenTest, type JohansenCase } from '../johansen/johansen';
 import { johansenDesign } from '../johansen/johansen-design';
 import { normalQuantile } from '../distributions';
 import { MooringInputError } from '../errors';
-import { leastSquares } from '../regression/least-squares';
+import { HouseholderQr } from '../linalg/householder-qr';
 
 /** What every surface says beside the fan. */
 export const FORECAST_BAND_NOTE =
@@ -111,8 +111,24 @@ export function vecmForecast(block: ArrayLike<number>[], names: string[], option
   const mu0 = new Array<number>(m).fill(0);
   const mu1 = new Array<number>(m).fill(0);
   const residuals: Float64Array[] = [];
+  // One Householder QR of the regressors serves every equation (they share them), with one step of
+  // iterative refinement per equation as in least-squares.ts.
+  const qr = regressors.length === 0 ? null : new HouseholderQr(regressors, n);
+  if (qr && !qr.isFullRank()) throw new MooringInputError('The error-correction model cannot be fitted: one series copies or mixes others, so its terms cannot be told apart. Remove the series responsible.');
+  const solve = (y: ArrayLike<number>): { coefficients: Float64Array; residuals: Float64Array } => {
+    const residual = (b: Float64Array) => {
+      const e = Float64Array.from(y);
+      regressors.forEach((col, j) => { const bj = b[j]; for (let i = 0; i < n; i++) e[i] -= bj * col[i]; });
+      return e;
+    };
+    const k = regressors.length;
+    const first = (qr as HouseholderQr).backSubstitute((qr as HouseholderQr).qtY(y).subarray(0, k));
+    const correction = (qr as HouseholderQr).backSubstitute((qr as HouseholderQr).qtY(residual(first)).subarray(0, k));
+    const coefficients = first.map((b, j) => b + correction[j]);
+    return { coefficients, residuals: residual(coefficients) };
+  };
   for (let s = 0; s < m; s++) {
-    const fit = regressors.length === 0 ? null : leastSquares(design.changes[s], regressors, { withoutCovariance: true });
+    const fit = qr === null ? null : solve(design.changes[s]);
     const b = fit?.coefficients ?? new Float64Array(0);
     for (let j = 0; j < rank; j++) alphaHat[s][j] = b[j];
     for (let lag = 0; lag < K; lag++) for (let q = 0; q < m; q++) gamma[lag][s][q] = b[rank + lag * m + q];

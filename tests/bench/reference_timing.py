@@ -2,7 +2,7 @@
 benchmark hands it, so `npm run bench` can print the ratio of our time to its time.
 
 Input: a JSON file {"adf": [[...series...]], "coint": [[y, x], ...], "johansen": [[[...], ...]],
-"kalman": [[y, x]]}.
+"kalman": [[y, x]], "vecm": [[[...], ...]]}.
 Output: one JSON object on stdout with the median milliseconds per call of each routine.
 Only the benchmark runs this; tests and CI never do.
 """
@@ -14,7 +14,7 @@ import warnings
 import numpy as np
 from statsmodels.tsa.stattools import adfuller, coint
 from statsmodels.tsa.statespace.mlemodel import MLEModel
-from statsmodels.tsa.vector_ar.vecm import coint_johansen
+from statsmodels.tsa.vector_ar.vecm import VECM, coint_johansen
 
 
 class WanderingLine(MLEModel):
@@ -76,6 +76,11 @@ def main():
         # the work `movingHedge` does (ours also searches a grid first).
         model = WanderingLine(y, x)
         out["kalmanMlMs"] = median_ms(lambda: model.smooth(model.fit(disp=False).params), 5)
+    if spec.get("vecm"):
+        block = np.column_stack([np.asarray(v) for v in spec["vecm"][0]])
+        # Fit and forecast, as vecmForecast does: K = 2, rank 1, constant outside ("co"), 20 steps.
+        out["vecmForecastMs"] = median_ms(
+            lambda: VECM(block, k_ar_diff=2, coint_rank=1, deterministic="co").fit().predict(steps=20, alpha=0.05), 10)
     print(json.dumps(out))
 
 

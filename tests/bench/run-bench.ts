@@ -16,7 +16,7 @@ import { benchBlock, benchJohansen } from '../../addin/bench/johansen-bench';
 import { benchCausality } from '../../addin/bench/causality-bench';
 import { benchBreaks } from '../../addin/bench/breaks-bench';
 import { benchScreen } from '../../addin/bench/screen-bench';
-import { benchKalman, kalmanBenchPair } from '../../addin/bench/path-bench';
+import { benchForecast, benchKalman, forecastBenchBlock, kalmanBenchPair } from '../../addin/bench/path-bench';
 import { benchFunctions } from './functions-bench';
 import type { Timing } from '../../addin/bench/timing';
 
@@ -25,6 +25,7 @@ interface ReferenceTimes {
   cointAicMs?: number;
   cointJohansenMs?: number;
   kalmanMlMs?: number;
+  vecmForecastMs?: number;
 }
 
 function referenceTimes(spec: object): ReferenceTimes | string {
@@ -53,6 +54,7 @@ function main(): void {
   const screen = benchScreen();
   const kalman = benchKalman();
   const kalmanPair = kalmanBenchPair();
+  const forecast = benchForecast();
   const walk = Array.from(randomWalk(new SeededRandom(11), 10_000, { start: 100 }));
   const pair = benchPair();
   const reference = referenceTimes({
@@ -60,6 +62,7 @@ function main(): void {
     coint: [[Array.from(pair.y), Array.from(pair.x)]],
     johansen: [benchBlock().map((s) => Array.from(s))],
     kalman: [[Array.from(kalmanPair.y), Array.from(kalmanPair.x)]],
+    vecm: [forecastBenchBlock().map((s) => Array.from(s))],
   });
   const comparisons: Record<string, unknown> = {};
   if (typeof reference === 'object' && reference.adfullerAicMs) {
@@ -78,7 +81,11 @@ function main(): void {
     const ours = kalman[0].medianMs;
     comparisons.kalmanMl2500 = { oursMs: ours, referenceMs: round(reference.kalmanMlMs), ratio: round(ours / reference.kalmanMlMs) };
   }
-  const all: Timing[] = [...unitRoot, ...cleaner, ...cointegration, ...johansen, ...causality, ...breaks, ...functions, ...screen, ...kalman];
+  if (typeof reference === 'object' && reference.vecmForecastMs) {
+    const ours = forecast[0].medianMs;
+    comparisons.vecmForecast3x1000 = { oursMs: ours, referenceMs: round(reference.vecmForecastMs), ratio: round(ours / reference.vecmForecastMs) };
+  }
+  const all: Timing[] = [...unitRoot, ...cleaner, ...cointegration, ...johansen, ...causality, ...breaks, ...functions, ...screen, ...kalman, ...forecast];
   const report = {
     machine: { node: process.version, cpus: cpus().length },
     benchmarks: all,
