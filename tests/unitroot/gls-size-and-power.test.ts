@@ -61,3 +61,19 @@ describe(`size and power at 5%, T = ${T}, ${REPS} replications`, () => {
     expect(rate(ys, (y) => adfTest(y, { deterministic: 'trend' }).pValue)).toBeGreaterThan(0.09);
   });
 });
+
+describe('integration order with DF-GLS on the levels (an option; ADF stays the default and tests the differences)', () => {
+  it(`on 200 AR(1) series with phi = 0.95, T = ${T} (seed 8105), DF-GLS calls I(0) at least 10 points more often than ADF; both call a random walk I(1)`, async () => {
+    const { integrationOrder } = await import('../../addin/unitroot/integration-order');
+    const ys = draws(8105, 0.95, 0).slice(0, 200);
+    const share = (test: 'adf' | 'dfgls') => ys.filter((y) => integrationOrder(y, { unitRootTest: test, highestDifference: 1 }).order === 0).length / ys.length;
+    expect(share('dfgls')).toBeGreaterThanOrEqual(share('adf') + 0.1);
+    const walk = draws(8106, 1, 0)[0];
+    const byGls = integrationOrder(walk, { unitRootTest: 'dfgls' });
+    expect(byGls.order).toBe(1);
+    expect(byGls.steps.map((s) => [s.differences, s.adf.test])).toEqual([[2, 'ADF'], [1, 'ADF'], [0, 'DF-GLS']]);
+    expect(byGls.verdict).toMatch(/DF-GLS on the levels/);
+    expect(integrationOrder(walk).steps.every((s) => s.adf.test === 'ADF')).toBe(true);
+    expect(() => integrationOrder(walk, { unitRootTest: 'dfgls', deterministic: 'none' })).toThrow(/DF-GLS always removes/);
+  });
+});

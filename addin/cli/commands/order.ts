@@ -1,7 +1,7 @@
 /** `mooring order`: the order of integration of one series, from ADF and KPSS together. */
 import { integrationOrder } from '../../unitroot/integration-order';
 import type { Command } from '../command';
-import { levelValue } from '../option-values';
+import { choiceValue, levelValue } from '../option-values';
 import { orderResultJson } from '../render/order-json';
 import { renderOrderTerminal } from '../render/order-terminal';
 import { renderSampleTerminal, sampleJson } from '../render/sample';
@@ -21,16 +21,18 @@ export const orderCommand: Command = {
   options: [
     deterministicOption(ALL_DETERMINISTIC),
     { name: 'alpha', value: 'LEVEL', help: 'significance level of each test, such as 0.05 (the default) or 1%' },
+    { name: 'unit-root', value: 'adf|dfgls', help: 'the unit-root test on the levels: adf (the default) or dfgls (more power against slow reversion; differences keep adf)' },
   ],
   examples: ['mooring order prices.csv --series Crude --log'],
   run(context) {
     const deterministic = readDeterministic(context.args, ALL_DETERMINISTIC, 'const');
     const alpha = levelValue('alpha', context.args.values.get('alpha')) ?? 0.05;
+    const unitRootTest = choiceValue('unit-root', context.args.values.get('unit-root'), ['adf', 'dfgls'] as const) ?? 'adf';
     const input = seriesFromContext(context);
-    const result = integrationOrder(input.series.values, { deterministic, alpha }, input.label);
+    const result = integrationOrder(input.series.values, { deterministic, alpha, unitRootTest }, input.label);
     return {
       terminal: `${renderOrderTerminal(result)}\n\n${renderSampleTerminal(input.sample)}`,
-      json: { series: input.label, sample: sampleJson(input.sample), alpha, ...orderResultJson(result) },
+      json: { series: input.label, sample: sampleJson(input.sample), alpha, unitRootTest, ...orderResultJson(result) },
     };
   },
 };

@@ -32,11 +32,13 @@ function stepCells(step: OrderStep): string[] {
 /** Renders an order-of-integration result as a terminal block (the caller appends the cautions). */
 export function renderOrderTerminal(result: IntegrationOrderResult): string {
   const out: string[] = [heading(`Order of integration of ${result.name}`), ''];
-  out.push(labelled('Order', `${orderWord(result.order)}${result.agree ? ', ADF and KPSS agree' : ', ADF and KPSS disagree'}`));
+  // the unit-root tests that decided: ADF, or DF-GLS on the levels when asked
+  const decider = result.steps.some((s) => s.adf.test !== 'ADF') ? 'DF-GLS/ADF' : 'ADF';
+  out.push(labelled('Order', `${orderWord(result.order)}${result.agree ? `, ${decider} and KPSS agree` : `, ${decider} and KPSS disagree`}`));
   out.push(labelled('Verdict', result.verdict));
   out.push(labelled('Deterministic terms', `${DETERMINISTIC_LABEL[result.deterministic]} in levels; differences take a constant unless none was asked`));
-  out.push('', '  Tests, in the order they ran (ADF null: unit root; KPSS null: stationary)', '');
-  const header = ['series tested', 'ADF tau', 'p-value', 'rejects', 'KPSS eta', 'p-value', 'rejects'];
+  out.push('', `  Tests, in the order they ran (${decider} null: unit root; KPSS null: stationary)`, '');
+  const header = ['series tested', `${decider} tau`, 'p-value', 'rejects', 'KPSS eta', 'p-value', 'rejects'];
   const body = result.steps.map(stepCells);
   const widths = header.map((h, j) => Math.max(h.length, ...body.map((b) => b[j].length)));
   out.push(row(header, widths), ...body.map((b) => row(b, widths)));
