@@ -6,6 +6,7 @@
 /// <reference types="custom-functions-runtime" />
 
 import { answer } from './cells/answer';
+import { aheadCell } from './analyses/forecast-cells';
 import { movingHedgeCell } from './analyses/moving-hedge-cells';
 
 /**
@@ -22,4 +23,21 @@ import { movingHedgeCell } from './analyses/moving-hedge-cells';
  */
 export function movinghedge(y: any[][], x: any[][], show?: any, statevar?: any, obsvar?: any, prep?: any): any[][] {
   return answer(() => movingHedgeCell(y, x, show, statevar, obsvar, prep));
+}
+
+/**
+ * Where the series are heading if their long-run relations hold: the error-correction model's forecast, one row per step ahead.
+ * @customfunction AHEAD
+ * @helpurl https://localhost:3000/docs/functions.md#ahead
+ * @param block Prices of 2 to 12 series side by side: one column each, the same rows.
+ * @param horizon Steps (rows) ahead to forecast: a whole number of 1 or more.
+ * @param [rank] Long-run relations in the model. Default: the Johansen trace test's choice at 5%.
+ * @param [lags] Lagged changes in the model. Default 1.
+ * @param [deterministic] none, restricted-constant, constant, restricted-trend or trend. Default constant.
+ * @param [show] forecast, lower or upper (95% bounds, ignoring the coefficients' own uncertainty), spread (path, low, high) or all. Default forecast.
+ * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
+ * @returns One row per step ahead: a column per series (all: forecast, low, high for each; spread: the first relation's path, low, high).
+ */
+export function ahead(block: any[][], horizon: any, rank?: any, lags?: any, deterministic?: any, show?: any, prep?: any): any[][] {
+  return answer(() => aheadCell(block, horizon, rank, lags, deterministic, show, prep));
 }

@@ -35,6 +35,7 @@ const CALLS: Record<string, (y: Range, x: Range) => unknown> = {
   SCREEN: (y, x) => moor.screen(sideBySide(y, x), null, 'list'),
   ROLLING: (y, x) => moor.rolling(y, x, 100, 20),
   MOVINGHEDGE: (y, x) => moor.movinghedge(y, x),
+  AHEAD: (y, x) => moor.ahead(sideBySide(y, x), 5, 1),
 };
 
 /** ROLLING's first column is where each window ends in the range, so two blanks above the prices move it down by two rows. */
@@ -79,7 +80,7 @@ for (const [name, call] of Object.entries(CALLS)) {
     }
 
     const inside = 36;
-    const where = name === 'GRANGER' ? 'effect row 37 of its range' : ['JOHANSEN', 'RANK', 'VARLAGS', 'SCREEN'].includes(name) ? 'series 1 row 37 of its range' : /^(ADF|KPSS|PHILLIPSPERRON|ORDER)$/.test(name) ? 'the series row 37 of its range' : 'y row 37 of its range';
+    const where = name === 'GRANGER' ? 'effect row 37 of its range' : ['JOHANSEN', 'RANK', 'VARLAGS', 'SCREEN', 'AHEAD'].includes(name) ? 'series 1 row 37 of its range' : /^(ADF|KPSS|PHILLIPSPERRON|ORDER)$/.test(name) ? 'the series row 37 of its range' : 'y row 37 of its range';
     const cases: [string, unknown, RegExp][] = [
       ['text', 'n/a', /is text 'n\/a'/],
       ['a blank as ""', '', /is blank/],

@@ -59,6 +59,7 @@ const SURFACE: Record<string, { args: string[]; spills: boolean }> = {
   CRIT: { args: ['test', 'observations?', 'variables?', 'deterministic?', 'level?'], spills: false },
   COMMONDATES: { args: ['first[]', 'second[]', 'fillforward?'], spills: true },
   MOVINGHEDGE: { args: ['y[]', 'x[]', 'show?', 'statevar?', 'obsvar?', 'prep?'], spills: true },
+  AHEAD: { args: ['block[]', 'horizon', 'rank?', 'lags?', 'deterministic?', 'show?', 'prep?'], spills: true },
 };
 
 function argsOf(f: FunctionEntry): string[] {
