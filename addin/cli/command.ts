@@ -54,6 +54,12 @@ export interface CommandOutput {
   terminal: string;
   /** The fields of the JSON object (the runner adds command, file and cautions). */
   json: Record<string, unknown>;
+  /**
+   * Output too large to build (every pair of a screen): when present the runner calls it instead
+   * of printing the report or the JSON object, and it writes its text a piece at a time. The
+   * pieces are written as they are (the command makes data-borne text safe itself).
+   */
+  stream?: (write: (s: string) => void) => void;
 }
 
 /** One command. */
@@ -72,4 +78,18 @@ export interface Command {
   examples?: readonly string[];
   /** Runs the command; bad input throws MooringInputError. */
   run(context: CommandContext): CommandOutput;
+  /**
+   * For a command whose files are not price CSVs (merge reads screen parts): runs instead of
+   * `run`, with the file names as given, and says what the JSON envelope should name.
+   */
+  runOnFiles?(files: readonly string[], args: ParsedArguments, common: CommonOptions): FilesOutput;
+}
+
+/** What a command that reads its own files returns: its output and the envelope's fields. */
+export interface FilesOutput {
+  output: CommandOutput;
+  file: string;
+  notices: string[];
+  halfLifeUnit: string;
+  spacing: string;
 }

@@ -10,7 +10,7 @@ import { decimalChoice, delimiterChoice, type DialectChoice } from '../csv/diale
 import { readCsv, type CsvTable } from '../csv/read-csv';
 import { isMooringInputError, MooringInputError } from '../errors';
 import { closestWord, parseArguments } from './arguments';
-import { COMMON_OPTIONS, type Command, type CommonOptions } from './command';
+import { COMMON_OPTIONS, type Command, type CommandOutput, type CommonOptions } from './command';
 import { commandHelp, overallHelp } from './help';
 import { preparedInput } from './prepared-input';
 import { CAUTIONS, renderCautions } from './render/cautions';
@@ -69,29 +69,42 @@ function dispatch(argv: readonly string[], io: CliIo, commands: readonly Command
   }
   const args = parseArguments(rest, [...COMMON_OPTIONS, ...command.options], command.name);
   if (args.positionals.length === 0) {
-    throw new MooringInputError(`${command.name} needs a CSV file: ${command.usage}.`);
+    throw new MooringInputError(`${command.name} needs ${command.runOnFiles ? "its files" : "a CSV file"}: ${command.usage}.`);
   }
   const files = args.positionals;
-  const file = files.join(' + ');
   const common: CommonOptions = {
     series: args.values.get('series'),
     log: args.switches.has('log'),
     skipGaps: args.switches.has('skip-gaps'),
     json: args.switches.has('json'),
   };
+  if (command.runOnFiles) {
+    const own = command.runOnFiles(files, args, common);
+    return print(own.output, command.name, own.file, own.notices, { unit: own.halfLifeUnit, spacing: own.spacing }, common, io);
+  }
+  const file = files.join(' + ');
   const dialect = { delimiter: delimiterChoice(args.values.get('delimiter')), decimal: decimalChoice(args.values.get('decimal')) };
   const input = preparedInput(files.map((f) => ({ file: f, table: readTable(f, io, dialect) })), args);
   const output = command.run({ command: command.name, file, table: input.table, args, common, notices: input.notices, period: input.period, window: input.window });
-  if (common.json) {
+  return print(output, command.name, file, input.notices, input.period, common, io);
+}
+
+/** Prints a command's output: its stream, one JSON object, or the report with the cautions. */
+function print(
+  output: CommandOutput, name: string, file: string, notices: readonly string[], period: { unit: string; spacing: string }, common: CommonOptions, io: CliIo,
+): number {
+  if (output.stream) {
+    output.stream((s) => io.stdout(s));
+  } else if (common.json) {
     const { json } = output;
-    const warnings = Array.isArray(json.warnings) ? [...input.notices, ...(json.warnings as unknown[])] : input.notices;
+    const warnings = Array.isArray(json.warnings) ? [...notices, ...(json.warnings as unknown[])] : notices.slice();
     const object = {
-      command: command.name, file, ...json, warnings,
-      halfLifeUnit: json.halfLifeUnit ?? input.period.unit, spacing: input.period.spacing, cautions: CAUTIONS.slice(),
+      command: name, file, ...json, warnings,
+      halfLifeUnit: json.halfLifeUnit ?? period.unit, spacing: period.spacing, cautions: CAUTIONS.slice(),
     };
     io.stdout(`${jsonText(JSON.stringify(object, jsonValue, 2))}\n`);
   } else {
-    const data = input.notices.length > 0 ? `${heading('About the data')}\n${input.notices.map((n) => bullet(n, 2, '!')).join('\n')}\n\n` : '';
+    const data = notices.length > 0 ? `${heading('About the data')}\n${notices.map((n) => bullet(n, 2, '!')).join('\n')}\n\n` : '';
     io.stdout(`${terminalText(data + output.terminal)}\n\n${renderCautions()}\n`);
   }
   return EXIT_OK;

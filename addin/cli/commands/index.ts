@@ -15,6 +15,7 @@ import { hedgeCommand } from './hedge';
 import { johansenCommand } from './johansen';
 import { kalmanCommand } from './kalman';
 import { kpssCommand } from './kpss';
+import { mergeCommand } from './merge';
 import { ngperronCommand } from './ngperron';
 import { orderCommand } from './order';
 import { poCommand } from './po';
@@ -31,5 +32,5 @@ export const MOORING_COMMANDS: readonly Command[] = [
   egCommand, poCommand, johansenCommand, ardlCommand, hedgeCommand, kalmanCommand, ecmCommand, spreadCommand, forecastCommand,
   reportCommand,
   varlagsCommand, grangerCommand,
-  screenCommand, rollingCommand, breaksCommand,
+  screenCommand, mergeCommand, rollingCommand, breaksCommand,
 ];

@@ -6,16 +6,25 @@
  * its own and each pair tested on the rows both have, so a series that starts later still
  * pairs with the others.
  */
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { csvSeries, seriesNames } from '../../csv/csv-series';
 import type { CsvTable } from '../../csv/read-csv';
 import { MooringInputError } from '../../errors';
-import { screenPairsInThreads } from '../../screen/parallel-node';
-import type { NamedSeries, ScreenPair, ScreenResult } from '../../screen/screen-pairs';
+import { RECORD_SIZE } from '../../screen/pair-record';
+import { screenRecordsInThreads, type ThreadReport } from '../../screen/parallel-node';
+import type { NamedSeries } from '../../screen/screen-pairs';
+import { resolveScreenOptions, type ScreenSettings } from '../../screen/screen-options';
+import { ScreenTally } from '../../screen/screen-tally';
+import { screenUniverse, unorderedPairCount, type ScreenUniverse } from '../../screen/screen-universe';
+import { withSeriesOrders } from '../../screen/series-orders';
 import { decimalTextValue } from '../../series/cell-kinds';
-import type { Command, CommandContext } from '../command';
-import { levelValue, wholeNumberValue } from '../option-values';
-import { bullet, formatPValue, formatStatistic, heading, labelled } from '../render/format';
-import { textTable } from '../render/text-table';
+import type { Command, CommandContext, CommandOutput } from '../command';
+import { choiceValue, levelValue, wholeNumberValue } from '../option-values';
+import { LIST_LIMIT, STREAM_FORMATS, screenOutput, type StreamFormat } from '../screen-answer';
+import { requireDiskRoom, requireScreenMemory } from '../screen-memory';
+import { PartWriter, partRange, readPartHeader, readPartRecords, screenFingerprint, type PartHeader, type ScreenSource } from '../screen-part-file';
 import { LAGS_OPTION, MAX_LAGS_OPTION, readLags } from '../test-options';
 
 /** Pairs listed in the terminal report unless --top says otherwise. */
@@ -65,45 +74,59 @@ function screenSeries(context: CommandContext): { series: NamedSeries[]; leftOut
   return { series, leftOut };
 }
 
-/** The ranked pairs as a table: each column as wide as its widest cell, two spaces between, so 'not available' never runs into its neighbour. */
-function pairTable(shown: readonly ScreenPair[]): string[] {
-  return textTable(
-    ['rank', 'pair (y on x)', 'tau', 'p-value', 'adjusted', 'beta', 'half-life', 'z-score'],
-    shown.map((p, i) => [
-      String(i + 1), `${p.y} on ${p.x}`, formatStatistic(p.statistic), formatPValue(p.pValue), formatPValue(p.adjustedPValue),
-      formatStatistic(p.beta), p.halfLife === null ? 'none' : formatStatistic(p.halfLife), formatStatistic(p.zscore),
-    ]),
-    [1],
-  );
+/** --part k/n: part k (1-based) of n. */
+function partValue(raw: string | undefined): { part: number; parts: number } | undefined {
+  if (raw === undefined) return undefined;
+  const m = /^\s*(\d+)\s*\/\s*(\d+)\s*$/.exec(raw);
+  const [part, parts] = m ? [Number(m[1]), Number(m[2])] : [0, 0];
+  if (!m || parts < 1 || part < 1 || part > parts) {
+    throw new MooringInputError(`--part must be k/n with 1 <= k <= n, such as 3/8 for the third of eight parts; got '${raw}'.`);
+  }
+  return { part, parts };
 }
 
-function terminalReport(result: ScreenResult, top: number, leftOut: string[], threads: string): string {
-  const shown = result.pairs.slice(0, top);
-  const out = [
-    heading(`Pair screen of ${result.names.length} series`),
-    '',
-    labelled('Series', result.names.join(', ')),
-    ...(leftOut.length ? [labelled('Left out', `${leftOut.join(', ')} (not numeric)`)] : []),
-    labelled('Orders', result.orders.map((o) => `${o.name} ${o.orderText ?? 'undecided'}`).join(', ')),
-    labelled('Tested', `${result.family.size} directed pairs (Engle-Granger, constant, lags by the rule)`),
-    labelled('Adjustment', `Benjamini-Hochberg over ${result.family.description}`),
-    labelled('Threads', threads),
-    '',
-    bullet(result.chanceSentence, 0, '*'),
-    '',
-    ...(shown.length === 0 ? ['  No pair meets the half-life range.'] : pairTable(shown)),
-  ];
-  if (result.pairs.length > shown.length) out.push(`  ... ${result.pairs.length - shown.length} more pairs (--top N shows more; --json lists all)`);
-  if (result.setAside.length > 0) {
-    out.push(
-      '',
-      labelled('Set aside', `${result.setAside.length} directed pairs, not ranked: a pair needs two wandering series of the same order (--json lists them under setAside)`),
-      ...result.setAsideSummary.map((line) => bullet(line)),
-    );
+/** What the output needs of the input, carried into part files. */
+function screenSource(context: CommandContext, leftOut: string[]): ScreenSource {
+  const { table } = context;
+  return {
+    file: context.file,
+    leftOut,
+    notices: context.notices ?? [],
+    halfLifeUnit: context.period?.unit ?? 'rows',
+    spacing: context.period?.spacing ?? 'rows',
+    lines: table.lines.slice(),
+    dates: table.dateIndex >= 0 ? table.columns[table.dateIndex].slice() : null,
+  };
+}
+
+/** The header of the part file of unordered pairs [first, end). */
+export function partHeader(universe: ScreenUniverse, settings: ScreenSettings, source: ScreenSource, part: number, parts: number, first: number, end: number): PartHeader {
+  return {
+    format: 'mooring screen part', version: 1, part, parts, first, end,
+    totalPairs: unorderedPairCount(universe.names.length), fingerprint: screenFingerprint(universe, settings),
+    names: universe.names, rows: universe.rows, scales: Array.from(universe.scales), orders: universe.orders ?? [], settings, source,
+  };
+}
+
+/** One part of the pairs into its file (--part k/n --out FILE): raw records, no adjustment; mooring merge combines the parts. */
+function runPart(universe: ScreenUniverse, settings: ScreenSettings, source: ScreenSource, part: { part: number; parts: number }, out: string, threads: number | undefined): CommandOutput {
+  const total = unorderedPairCount(universe.names.length);
+  const [first, end] = partRange(part.part, part.parts, total);
+  const writer = new PartWriter(out, partHeader(universe, settings, source, part.part, part.parts, first, end));
+  let report: ThreadReport;
+  try {
+    report = screenRecordsInThreads(universe, settings, first, end, { threads }, (_, records) => writer.write(records));
+  } finally {
+    writer.close();
   }
-  if (result.untested.length > 0) out.push('', labelled('Not tested', `${result.untested.length} directed pairs; --json lists them with the reason`));
-  out.push('', ...result.cautions.map((c) => bullet(c)));
-  return out.join('\n');
+  const json = { part: part.part, parts: part.parts, firstPair: first, endPair: end, pairs: end - first, directedPairs: 2 * (end - first), out, series: universe.names.length, threads: report };
+  return {
+    terminal: [
+      `Part ${part.part} of ${part.parts}: unordered pairs ${first} to ${end - 1} of ${total} (${2 * (end - first)} directed pairs) written to ${out}.`,
+      `Combine every part with: mooring merge ${Array.from({ length: Math.min(part.parts, 3) }, (_, i) => `part-${i + 1}.bin`).join(' ')}${part.parts > 3 ? ' ...' : ''} (the adjustment runs there, over all the parts).`,
+    ].join('\n'),
+    json,
+  };
 }
 
 /** The screen command. */
@@ -128,11 +151,19 @@ export const screenCommand: Command = {
     { name: 'min-obs', value: 'N', help: 'test only pairs with at least N shared rows (default 20)' },
     { name: 'johansen', help: "also give each pair's Johansen trace rank (slower)" },
     { name: 'threads', value: 'N', help: 'most threads to use (default: every core; a small screen uses fewer, as starting a thread would cost more than it saves)' },
-    { name: 'top', value: 'N', help: `pairs listed in the report (default ${DEFAULT_TOP}; --json lists all)` },
+    { name: 'top', value: 'N', help: `pairs listed in the report and in --json (default ${DEFAULT_TOP}); only these are kept in memory` },
+    { name: 'format', value: 'jsonl|csv', help: 'write every directed pair as it goes, tested, set aside or not (JSON lines after one line on the screen, or CSV), instead of the report' },
+    { name: 'part', value: 'k/n', help: 'run only the k-th of n equal parts of the pairs and write their raw results to --out, for mooring merge (one part per task of a batch job)' },
+    { name: 'out', value: 'FILE', help: 'the file a part is written to (with --part)' },
     LAGS_OPTION,
     MAX_LAGS_OPTION,
   ],
-  examples: ['mooring screen prices.csv --log', 'mooring screen prices.csv --series Brent,WTI,Gasoil,Diesel --max-half-life 20 --json'],
+  examples: [
+    'mooring screen prices.csv --log',
+    'mooring screen prices.csv --series Brent,WTI,Gasoil,Diesel --max-half-life 20 --json',
+    'mooring screen prices.csv --format csv > every-pair.csv',
+    'mooring screen prices.csv --part 3/8 --out part-3.bin   (then: mooring merge part-*.bin)',
+  ],
   run(context) {
     const alpha = levelValue('alpha', context.args.values.get('alpha'));
     const minHalfLife = rowsValue('min-half-life', context.args.values.get('min-half-life'));
@@ -142,36 +173,58 @@ export const screenCommand: Command = {
     if (threads === 0) throw new MooringInputError('--threads must be at least 1.');
     const top = wholeNumberValue('top', context.args.values.get('top'), 'pairs') ?? DEFAULT_TOP;
     const lagChoice = readLags(context.args);
+    const format = choiceValue('format', context.args.values.get('format'), STREAM_FORMATS) as StreamFormat | undefined;
+    const part = partValue(context.args.values.get('part'));
+    const out = context.args.values.get('out');
+    if (part && out === undefined) throw new MooringInputError(`--part ${part.part}/${part.parts} writes raw results to a file: name it with --out, such as --out part-${part.part}.bin.`);
+    if (!part && out !== undefined) throw new MooringInputError('--out names the file of a part: use it with --part k/n (a whole screen prints its answer; --format csv > FILE keeps every pair).');
+    if (part && format) throw new MooringInputError('--format applies to a whole screen; a part writes raw results for mooring merge, which takes --format.');
     const { series, leftOut } = screenSeries(context);
-    const { result, report } = screenPairsInThreads(
-      series,
-      { alpha, minHalfLife, maxHalfLife, minObservations, johansen: context.args.switches.has('johansen'), ...lagChoice },
-      { threads },
-    );
-    const dates = context.table.dateIndex >= 0 ? context.table.columns[context.table.dateIndex] : null;
-    const threadText = `${report.threads}${report.note ? ` (${report.note})` : ''}`;
-    return {
-      terminal: terminalReport(result, top, leftOut, threadText),
-      json: {
-        series: result.names,
-        leftOut,
-        alpha: result.alpha,
-        orders: result.orders,
-        orderTests: result.orderTests,
-        family: result.family,
-        rawPasses: result.rawPasses,
-        expectedByChance: result.expectedByChance,
-        discoveries: result.discoveries,
-        chanceSentence: result.chanceSentence,
-        pairs: result.pairs.map((p) => ({ ...p, lastLine: context.table.lines[p.lastRow], lastDate: dates?.[p.lastRow]?.trim() || null })),
-        matrix: result.matrix,
-        adjustedMatrix: result.adjustedMatrix,
-        setAside: result.setAside,
-        setAsideSummary: result.setAsideSummary,
-        untested: result.untested,
-        screenCautions: result.cautions,
-        threads: report,
-      },
-    };
+    const rows = context.table.lines.length;
+    requireScreenMemory({ series: series.length, rows, top, part: part !== undefined });
+    const settings = resolveScreenOptions({ alpha, minHalfLife, maxHalfLife, minObservations, johansen: context.args.switches.has('johansen'), ...lagChoice });
+    const universe = withSeriesOrders(screenUniverse(series), settings);
+    series.length = 0; // the packed universe holds the numbers now
+    const source = screenSource(context, leftOut);
+    if (part) return runPart(universe, settings, source, part, out as string, threads);
+    const total = unorderedPairCount(universe.names.length);
+    const tally = new ScreenTally(universe, settings, top, LIST_LIMIT);
+    // Every pair is streamed after the adjustment, which needs every p-value first: the records
+    // wait in a temporary part file, read back a batch at a time.
+    const folder = format ? mkdtempSync(join(tmpdir(), 'mooring-screen-')) : null;
+    try {
+      if (folder) requireDiskRoom(folder, 2 * total * RECORD_SIZE * 8, 'Writing every pair');
+      const spill = folder ? new PartWriter(join(folder, 'all.bin'), partHeader(universe, settings, source, 1, 1, 0, total)) : null;
+      let report: ThreadReport;
+      try {
+        report = screenRecordsInThreads(universe, settings, 0, total, { threads }, (first, records) => {
+          tally.add(first, records);
+          spill?.write(records);
+        });
+      } finally {
+        spill?.close();
+      }
+      const { summary, adjustment } = tally.finish();
+      const output = screenOutput({
+        summary, adjustment, scales: universe.scales, source, top, threads: report,
+        records: (onBatch) => {
+          if (!spill) return;
+          const { header, recordsAt } = readPartHeader(spill.path);
+          readPartRecords(spill.path, header, recordsAt, onBatch);
+        },
+      }, format);
+      if (!folder || !output.stream) return output;
+      const stream = output.stream;
+      return { ...output, stream: (write) => {
+        try {
+          stream(write);
+        } finally {
+          rmSync(folder, { recursive: true, force: true });
+        }
+      } };
+    } catch (e) {
+      if (folder) rmSync(folder, { recursive: true, force: true });
+      throw e;
+    }
   },
 };
