@@ -118,6 +118,8 @@ export function lineStage(g: BlockGrid, c: StageContext): void {
     numberRow(g, 'Hedge ratio (dynamic OLS)', { formula: `=MOOR.HEDGE(${y},${x},"dols","slope",${c.prep})` }, NUMBER_FORMAT.ratio, null,
       'with leads and lags of the changes, chosen by AIC: the estimate with sound standard errors for wandering prices');
   }
+  numberRow(g, `${c.report.data.logged ? 'Elasticity' : 'Hedge ratio'} now, allowed to move (Kalman filter)`, { formula: `=INDEX(MOOR.MOVINGHEDGE(${y},${x},"ratio",,,${c.prep}),ROWS(${y}))` }, NUMBER_FORMAT.ratio, null,
+    'the slope on the last row, from the rows up to it, with intercept and slope taking random steps (variances by maximum likelihood); a ratio that drifts says the fixed line is unstable');
   numberRow(g, `Does ${c.y} move back? Speed of adjustment`, { formula: `=MOOR.ECM(${y},${x},"aic","headline",${c.prep})` }, NUMBER_FORMAT.ratio,
     (cell) => speedReading(cell, c.y), `error-correction model: the share of yesterday's gap ${c.y} closes per ${period}; lags by AIC`);
   const critical = normalQuantile(1 - alpha / 2);

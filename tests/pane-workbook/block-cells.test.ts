@@ -56,6 +56,7 @@ describe('the demo block', () => {
     expect(r('Long-run relations found')).toBe('=MOOR.RANK(QuennelPrices[[GateGasoil]:[DockDiesel]],1,"restricted-constant",0.05,$J$5)');
     expect(r('Hedge ratio: units')).toBe('=MOOR.HEDGE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"ols","slope",$J$5)');
     expect(r('Hedge ratio (dynamic OLS)')).toBe('=MOOR.HEDGE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"dols","slope",$J$5)');
+    expect(r('Hedge ratio now, allowed to move')).toBe('=INDEX(MOOR.MOVINGHEDGE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"ratio",,,$J$5),ROWS(QuennelPrices[DockDiesel]))');
     expect(r('Does DockDiesel move back?')).toBe('=MOOR.ECM(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"aic","headline",$J$5)');
     expect(r('Does the spread revert?')).toBe('=MOOR.HALFLIFE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"value",$J$5)');
     expect(r('Half-life, low end')).toBe('=MOOR.HALFLIFE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"low",$J$5)');
@@ -75,6 +76,7 @@ describe('the demo block', () => {
     expect(v('Hedge ratio: units')).toBeCloseTo(p.relation!.ols.beta, 12);
     expect(v('Hedge ratio (dynamic OLS)')).toBeCloseTo(p.relation!.dynamicOls.beta, 12);
     expect(v('Does DockDiesel move back?')).toBeCloseTo(p.adjustment!.ecm.dependent.speed, 12);
+    expect(v('Hedge ratio now, allowed to move')).toBeCloseTo(p.movingHedge!.latest.beta, 12);
     expect(v('Does the spread revert?')).toBeCloseTo(p.adjustment!.spreadAr1.halfLife!, 10);
     expect(v('Half-life, low end of its 95% interval')).toBeCloseTo(p.adjustment!.spreadAr1.halfLifeInterval.low!, 10);
     expect(v('Half-life, high end of its 95% interval')).toBeCloseTo(p.adjustment!.spreadAr1.halfLifeInterval.high!, 10);
@@ -119,7 +121,7 @@ describe('the demo block', () => {
     expect(shown('O782')).toBeCloseTo(p.spread!.latest, 12);
     expect(shown('N782')).toBe('2024-12-27');
     expect(shown('O783')).toBeNull();
-    expect(demo.built.block.reserved).toEqual(['N41:R782']);
+    expect(demo.built.block.reserved).toEqual(['N42:R782']);
     expect(demo.wb.charts).toHaveLength(1);
     const chart = demo.wb.charts[0];
     expect(chart.name).toBe('Mooring_GateGasoil_DockDiesel');
