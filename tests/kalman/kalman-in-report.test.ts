@@ -10,7 +10,8 @@ import { describe, expect, it } from 'vitest';
 import { MOORING_COMMANDS } from '../../addin/cli/commands';
 import type { DiagnosticReport } from '../../addin/report/report-types';
 import { runWith } from '../cli/cli-harness';
-import { DEMO_CSV } from '../pane/demo-reports';
+import { relationStepView } from '../../taskpane/ui/views/relation-view';
+import { COLUMN, DEMO_CSV, demoReport } from '../pane/demo-reports';
 
 const run = (...argv: string[]) => runWith(MOORING_COMMANDS, argv, { 'd.csv': DEMO_CSV });
 const json = (...argv: string[]) => JSON.parse(run(...argv, '--json').stdout) as Record<string, any>;
@@ -46,5 +47,14 @@ describe('the report\'s moving hedge ratio', () => {
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }
+  });
+
+  it('stands in the pane\'s step on the relation: the latest moving ratio with its band, and the words on drift', async () => {
+    const paneReport = await demoReport([COLUMN.GateGasoil, COLUMN.DockDiesel]);
+    const view = relationStepView(paneReport, paneReport.pairs[0]);
+    const m = paneReport.pairs[0].movingHedge!;
+    const fact = view.lineFacts.find((f) => f.label.includes('allowed to move'));
+    expect(fact?.value).toBe(`${m.latest.beta.toFixed(4)} (likely ${m.latest.low.toFixed(4)} to ${m.latest.high.toFixed(4)})`);
+    expect(view.lineFacts.find((f) => f.label === 'How it moved')?.value).toContain('A ratio that drifts is itself evidence');
   });
 });

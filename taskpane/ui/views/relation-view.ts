@@ -80,6 +80,13 @@ export function relationStepView(report: DiagnosticReport, pair: PairReport): Re
       { label: 'Held steady across the halves?', value: r.halves.stable ? 'Yes' : 'No: it moved' },
     );
   }
+  const m = pair.movingHedge;
+  if (m) {
+    lineFacts.push(
+      { label: `${slopeWord} now, allowed to move (Kalman filter, from the rows up to the last)`, value: `${showNumber(m.latest.beta, 4)} (likely ${showNumber(m.latest.low, 4)} to ${showNumber(m.latest.high, 4)})` },
+      { label: 'How it moved', value: `${m.driftText} ${m.driftMeaning}` },
+    );
+  }
   const pullFacts: FactView[] = a
     ? [
         { label: "Half-life of the spread (AR(1) of the spread on the plain least-squares line)", value: halfLifeText(a.spreadAr1.halfLife, a.spreadAr1.halfLifeNote, period) },
