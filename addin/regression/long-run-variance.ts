@@ -20,13 +20,9 @@ export function bartlettLongRunVariance(u: ArrayLike<number>, bandwidth: number)
   if (bandwidth >= n) {
     throw new MooringInputError(`A bandwidth of ${bandwidth} is too large for ${n} observations: the largest allowed is ${n - 1}.`);
   }
-  let s = 0;
-  for (let t = 0; t < n; t++) s += u[t] * u[t];
-  for (let i = 1; i <= bandwidth; i++) {
-    let c = 0;
-    for (let t = i; t < n; t++) c += u[t] * u[t - i];
-    s += 2 * (1 - i / (bandwidth + 1)) * c;
-  }
+  const c = autocovarianceSums(u, bandwidth);
+  let s = c[0];
+  for (let i = 1; i <= bandwidth; i++) s += 2 * (1 - i / (bandwidth + 1)) * c[i];
   if (!Number.isFinite(s)) throw overflowError();
   return s / n;
 }
@@ -42,14 +38,11 @@ export function overflowError(): MooringInputError {
 export function neweyWestBandwidth(u: ArrayLike<number>): number {
   const n = u.length;
   const covLags = Math.floor(Math.pow(n, 2 / 9));
-  let g0 = 0;
-  for (let t = 0; t < n; t++) g0 += u[t] * u[t];
-  let s0 = g0 / n;
+  const c = autocovarianceSums(u, Math.min(covLags, n - 1));
+  let s0 = c[0] / n;
   let s1 = 0;
   for (let j = 1; j <= covLags; j++) {
-    let c = 0;
-    for (let t = j; t < n; t++) c += u[t] * u[t - j];
-    const twice = (2 * c) / n;
+    const twice = (2 * (c[j] ?? 0)) / n;
     s0 += twice;
     s1 += j * twice;
   }
@@ -58,4 +51,75 @@ export function neweyWestBandwidth(u: ArrayLike<number>): number {
   const ratio = s1 / s0;
   const gamma = 1.1447 * Math.pow(ratio * ratio, 1 / 3);
   return Math.min(Math.floor(gamma * Math.pow(n, 1 / 3)), n - 1);
+}
+
+/** Lags whose sums share one sweep over the data in autocovarianceSums. */
+const LAGS_PER_SWEEP = 8;
+
+/**
+ * c[i] = sum_{t=i..n-1} u_t u_{t-i} for i = 0..maxLag (maxLag < n): the unscaled
+ * autocovariances both the Bartlett sum and the bandwidth rule need.
+ *
+ * Eight lags are accumulated in one sweep, each in its own running sum: the data pass through
+ * the cache once per eight lags instead of once per lag, and the eight chains of additions run
+ * side by side instead of one waiting on the next. Each sum still adds its terms in the order
+ * t = i, i+1, ..., n-1, so every c[i] is the same double as one lag per pass gives.
+ */
+export function autocovarianceSums(u: ArrayLike<number>, maxLag: number): Float64Array {
+  const n = u.length;
+  const c = new Float64Array(maxLag + 1);
+  for (let first = 0; first <= maxLag; first += LAGS_PER_SWEEP) {
+    const last = Math.min(first + LAGS_PER_SWEEP - 1, maxLag);
+    if (last - first + 1 < LAGS_PER_SWEEP) {
+      for (let i = first; i <= last; i++) {
+        let s = 0;
+        for (let t = i; t < n; t++) s += u[t] * u[t - i];
+        c[i] = s;
+      }
+      continue;
+    }
+    let s0 = 0;
+    let s1 = 0;
+    let s2 = 0;
+    let s3 = 0;
+    let s4 = 0;
+    let s5 = 0;
+    let s6 = 0;
+    let s7 = 0;
+    const f = first;
+    // The head: t from f to f + 6, where only the lags up to t have terms yet (in order).
+    const head = Math.min(f + LAGS_PER_SWEEP - 1, n);
+    for (let t = f; t < head; t++) {
+      const ut = u[t];
+      const back = t - f; // lags f..f+back have a term at t
+      s0 += ut * u[t - f];
+      if (back >= 1) s1 += ut * u[t - f - 1];
+      if (back >= 2) s2 += ut * u[t - f - 2];
+      if (back >= 3) s3 += ut * u[t - f - 3];
+      if (back >= 4) s4 += ut * u[t - f - 4];
+      if (back >= 5) s5 += ut * u[t - f - 5];
+      if (back >= 6) s6 += ut * u[t - f - 6];
+    }
+    for (let t = head; t < n; t++) {
+      const ut = u[t];
+      const b = t - f;
+      s0 += ut * u[b];
+      s1 += ut * u[b - 1];
+      s2 += ut * u[b - 2];
+      s3 += ut * u[b - 3];
+      s4 += ut * u[b - 4];
+      s5 += ut * u[b - 5];
+      s6 += ut * u[b - 6];
+      s7 += ut * u[b - 7];
+    }
+    c[f] = s0;
+    c[f + 1] = s1;
+    c[f + 2] = s2;
+    c[f + 3] = s3;
+    c[f + 4] = s4;
+    c[f + 5] = s5;
+    c[f + 6] = s6;
+    c[f + 7] = s7;
+  }
+  return c;
 }
