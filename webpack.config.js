@@ -42,7 +42,7 @@ const DEV_SERVER_PORT = 3000;
  * the functions bundle, and the metadata plugin appends the CustomFunctions.associate
  * calls for its functions to that same file (see functions/functions.ts).
  */
-const FUNCTION_SOURCES = [path.join(ROOT, 'functions', 'functions.ts'), path.join(ROOT, 'functions', 'path-functions.ts'), path.join(ROOT, 'functions', 'gls-functions.ts')];
+const FUNCTION_SOURCES = [path.join(ROOT, 'functions', 'functions.ts'), path.join(ROOT, 'functions', 'path-functions.ts'), path.join(ROOT, 'functions', 'gls-functions.ts'), path.join(ROOT, 'functions', 'long-run-functions.ts')];
 
 /** Built file names the manifest points at. */
 const ADDIN_FILES = {

@@ -294,3 +294,5 @@ export function commondates(first: any[][], second: any[][], fillforward?: any):
 export * from './path-functions';
 // The unit-root tests on GLS-detrended data (DF-GLS, Ng-Perron), scanned from their own file too.
 export * from './gls-functions';
+// The bounds test and the tests on a Johansen relation, scanned from their own file too.
+export * from './long-run-functions';

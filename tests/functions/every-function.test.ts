@@ -35,6 +35,9 @@ const CALLS: Record<string, (y: Range, x: Range) => unknown> = {
   SCREEN: (y, x) => moor.screen(sideBySide(y, x), null, 'list'),
   ROLLING: (y, x) => moor.rolling(y, x, 100, 20),
   MOVINGHEDGE: (y, x) => moor.movinghedge(y, x),
+  LEVELBOUNDS: (y, x) => moor.levelbounds(y, x, null, 1, 1, 'all'),
+  RELATIONIS: (y, x) => moor.relationis(sideBySide(y, x), [[1], [-2]], null, null, 'all'),
+  ADJUSTS: (y, x) => moor.adjusts(sideBySide(y, x), 1, null, null, 'all'),
   AHEAD: (y, x) => moor.ahead(sideBySide(y, x), 5, 1),
 };
 
@@ -80,7 +83,7 @@ for (const [name, call] of Object.entries(CALLS)) {
     }
 
     const inside = 36;
-    const where = name === 'GRANGER' ? 'effect row 37 of its range' : ['JOHANSEN', 'RANK', 'VARLAGS', 'SCREEN', 'AHEAD'].includes(name) ? 'series 1 row 37 of its range' : /^(ADF|KPSS|PHILLIPSPERRON|ORDER)$/.test(name) ? 'the series row 37 of its range' : 'y row 37 of its range';
+    const where = name === 'GRANGER' ? 'effect row 37 of its range' : ['JOHANSEN', 'RANK', 'VARLAGS', 'SCREEN', 'AHEAD', 'RELATIONIS', 'ADJUSTS'].includes(name) ? 'series 1 row 37 of its range' : /^(ADF|KPSS|PHILLIPSPERRON|ORDER)$/.test(name) ? 'the series row 37 of its range' : 'y row 37 of its range';
     const cases: [string, unknown, RegExp][] = [
       ['text', 'n/a', /is text 'n\/a'/],
       ['a blank as ""', '', /is blank/],

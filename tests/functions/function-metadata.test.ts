@@ -59,6 +59,9 @@ const SURFACE: Record<string, { args: string[]; spills: boolean }> = {
   CRIT: { args: ['test', 'observations?', 'variables?', 'deterministic?', 'level?'], spills: false },
   COMMONDATES: { args: ['first[]', 'second[]', 'fillforward?'], spills: true },
   MOVINGHEDGE: { args: ['y[]', 'x[]', 'show?', 'statevar?', 'obsvar?', 'prep?'], spills: true },
+  LEVELBOUNDS: { args: ['y[]', 'x[]', 'boundscase?', 'lags?', 'order?', 'show?', 'prep?'], spills: true },
+  RELATIONIS: { args: ['block[]', 'weights[]', 'lags?', 'deterministic?', 'show?', 'prep?'], spills: true },
+  ADJUSTS: { args: ['block[]', 'series?', 'lags?', 'deterministic?', 'show?', 'prep?'], spills: true },
   AHEAD: { args: ['block[]', 'horizon', 'rank?', 'lags?', 'deterministic?', 'show?', 'prep?'], spills: true },
 };
 
