@@ -19,6 +19,7 @@ import { spreadSeries } from '../spread/spread-series';
 import { longRunRelation } from './long-run-relation';
 import { adjustmentSection, spreadSection } from './pair-adjustment';
 import { movingHedgeSection } from './pair-moving-hedge';
+import { forecastSection } from './pair-forecast';
 import { engleGrangerPair, pairCointegration, phillipsOuliarisSummary } from './pair-cointegration';
 import type { PairReport, UnavailablePart } from './pair-types';
 import { cointegrationVerdict, pairVerdicts } from './pair-verdicts';
@@ -101,6 +102,8 @@ export function diagnosePair(a: Float64Array, b: Float64Array, names: { a: strin
     : attempt('error-correction model', unavailable, () => adjustmentSection(y, x, pair, yx, { alpha, deterministic, period: context.period }));
 
   const movingHedge = exactFit ? null : attempt('moving hedge ratio', unavailable, () => movingHedgeSection(y, x, yx));
+  const forecast = exactFit || !cointegrated || johansen === null ? null
+    : attempt('forecast', unavailable, () => forecastSection(y, x, yx, { case: johansen.case, lags: johansen.lags }, context.dates));
 
   const orderNumbers = { [names.a]: factsA.order, [names.b]: factsB.order };
   const verdict = cointegrationVerdict({ engleGranger: eg, evidence: eg.evidence, bothIntegrated }, yx.y, yx.x, orderNumbers);
@@ -113,6 +116,7 @@ export function diagnosePair(a: Float64Array, b: Float64Array, names: { a: strin
     adjustment,
     spread,
     movingHedge,
+    forecast,
     unavailable,
   };
   return {

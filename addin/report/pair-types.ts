@@ -215,6 +215,26 @@ export interface MovingHedgeReport {
   warnings: string[];
 }
 
+/** Where a related pair is heading if the relation holds (report/pair-forecast.ts). */
+export interface PairForecastReport {
+  /** [dependent, regressor]. */
+  series: string[];
+  case: string;
+  lags: number;
+  rank: number;
+  horizon: number;
+  /** The dates after the last row in the data's spacing, or null without calendar dates. */
+  dates: string[] | null;
+  /** forecast[h][i]: series i, h + 1 rows ahead; lower and upper its 95% interval. */
+  forecast: number[][];
+  lower: number[][];
+  upper: number[][];
+  /** The Johansen relation normalised on the dependent: its recent values (from row recentFrom), equilibrium, path and band. */
+  spread: { text: string; mean: number; recentFrom: number; recent: number[]; path: number[]; lower: number[]; upper: number[] };
+  bandNote: string;
+  warnings: string[];
+}
+
 export interface PairReport {
   a: string;
   b: string;
@@ -225,6 +245,8 @@ export interface PairReport {
   spread: SpreadReport | null;
   /** The hedge ratio through time (Kalman filter); null when it could not be estimated. */
   movingHedge: MovingHedgeReport | null;
+  /** The error-correction forecast, for related pairs; null otherwise. */
+  forecast: PairForecastReport | null;
   unavailable: UnavailablePart[];
   /** Plain-language verdicts at the report's level, in reading order. */
   verdicts: string[];

@@ -36,8 +36,8 @@ describe('the HTML report of the demo (--out)', () => {
     expect(html.replace(/xmlns="http:\/\/www\.w3\.org\/2000\/svg"/g, '')).not.toMatch(/https?:\/\//);
   });
 
-  it('draws the series chart and, for each of the two related pairs, the spread, its rolling z-score and the hedge ratio through time', () => {
-    expect(html.match(/<svg /g)?.length).toBe(1 + 2 * 3);
+  it('draws the series chart and, for each of the two related pairs, the spread, its rolling z-score, the hedge ratio through time and the forecast fan', () => {
+    expect(html.match(/<svg /g)?.length).toBe(1 + 2 * 4);
     expect(html).toContain('+2 sd');
     expect(html).toContain('z-score, trailing 60 days');
   });

@@ -124,6 +124,34 @@ function movingHedgeSection(pair: PairReport, report: DiagnosticReport): string 
     (m.warnings.length > 0 ? `<ul class="warnings">${m.warnings.map((w) => el('li', w)).join('')}</ul>` : '');
 }
 
+/** Where the pair is heading: the recent spread (Johansen relation) and its forecast path with the 95% band, and the series' forecasts. */
+function forecastHtml(pair: PairReport, report: DiagnosticReport): string {
+  const f = pair.forecast;
+  if (!f) return '';
+  const s = f.spread;
+  const past = (report.data.dates ?? report.data.rowLabels).slice(s.recentFrom, s.recentFrom + s.recent.length);
+  const ahead = f.dates ?? f.path.map((_, h) => `+${h + 1}`);
+  const blank = (k: number) => new Array<number | null>(k).fill(null);
+  const chart = lineChart({
+    title: `Spread of the Johansen relation ${s.text}: recent rows and the forecast ${f.horizon} rows ahead`,
+    width: 860,
+    height: 240,
+    xLabels: [...past, ...ahead],
+    lines: [
+      { values: [...s.recent, ...blank(f.horizon)], colour: PAIR_COLOURS.spread, label: 'spread' },
+      { values: [...blank(s.recent.length), ...s.path], colour: PAIR_COLOURS.filtered, label: 'forecast' },
+      { values: [...blank(s.recent.length), ...s.lower], colour: PAIR_COLOURS.smoothedBand, label: '95% band (low)' },
+      { values: [...blank(s.recent.length), ...s.upper], colour: PAIR_COLOURS.smoothedBand, label: '95% band (high)' },
+    ],
+    rules: [{ y: s.mean, colour: PAIR_COLOURS.mean, label: 'equilibrium (mean over the fit)' }],
+  });
+  const last = f.horizon - 1;
+  const rows = f.series.map((name, i) => [name, formatStatistic(f.forecast[last][i]), formatStatistic(f.lower[last][i]), formatStatistic(f.upper[last][i])]);
+  return `<h4>Where it is heading (error-correction forecast, ${f.horizon} rows ahead${f.dates ? `, to ${f.dates[last]}` : ''})</h4>` +
+    `<figure>${chart}${el('figcaption', `The model: ${f.rank} long-run relation, case ${f.case}, ${f.lags} lagged change${f.lags === 1 ? '' : 's'}. ${f.bandNote}`)}</figure>` +
+    htmlTable(['series', `forecast, ${f.dates ? f.dates[last] : `row +${f.horizon}`}`, 'low (95%)', 'high (95%)'], rows, [0]);
+}
+
 /** The article of one pair. */
 export function renderPairHtml(pair: PairReport, report: DiagnosticReport, anchor: string): string {
   const c = pair.cointegration;
@@ -151,7 +179,7 @@ export function renderPairHtml(pair: PairReport, report: DiagnosticReport, ancho
       el('p', `${ll.why} Lags: ${leadLagLags(pair)}.`, 'note'));
   }
   if (c.cointegrated) parts.push(details(pair, report));
-  if (c.cointegrated) parts.push(movingHedgeSection(pair, report));
+  if (c.cointegrated) parts.push(movingHedgeSection(pair, report), forecastHtml(pair, report));
   if (pair.warnings.length > 0) parts.push(`<h4>Warnings</h4><ul class="warnings">${pair.warnings.map((w) => el('li', w.text)).join('')}</ul>`);
   parts.push('</article>');
   return parts.filter((p) => p !== '').join('\n');

@@ -65,6 +65,13 @@ export function renderPairTerminal(pair: PairReport, report: DiagnosticReport): 
   if (moving) {
     out.push(labelled('Ratio through time', `${moving.latest.text} (Kalman filter). ${moving.driftText} ${moving.driftMeaning}`));
   }
+  const f = pair.forecast;
+  if (f) {
+    const last = f.horizon - 1;
+    const when = f.dates ? f.dates[last] : `${f.horizon} rows ahead`;
+    out.push(labelled('Heading', `${f.series.map((name, i) => `${name} ${formatStatistic(f.forecast[last][i])} (${formatStatistic(f.lower[last][i])} to ${formatStatistic(f.upper[last][i])})`).join(', ')} by ${when}; ` +
+      `the spread ${f.spread.text} from ${formatStatistic(f.spread.recent[f.spread.recent.length - 1])} to ${formatStatistic(f.spread.path[last])} (equilibrium ${formatStatistic(f.spread.mean)}). ${f.bandNote}`));
+  }
   const sp = pair.spread;
   if (sp) {
     const rolling = sp.latestRollingZ === null ? '' : `, ${formatStatistic(sp.latestRollingZ)} over the last ${sp.rollingWindow} ${period}s`;
