@@ -62,9 +62,10 @@ export const forecastCommand: Command = {
       ...fan,
       '',
     ];
-    if (r.spread) {
-      out.push(labelled('Spread', `${r.spread.text}: now ${formatStatistic(r.spread.history[r.spread.history.length - 1])}, equilibrium (its mean over the fit) ${formatStatistic(r.spread.mean)}`));
-      out.push(labelled('Its path', r.spread.path.map((v, h) => `${label(h)} ${formatStatistic(v)} (${formatStatistic(r.spread.lower[h])} to ${formatStatistic(r.spread.upper[h])})`).join('; ')));
+    const spread = r.spread;
+    if (spread) {
+      out.push(labelled('Spread', `${spread.text}: now ${formatStatistic(spread.history[spread.history.length - 1])}, equilibrium (its mean over the fit) ${formatStatistic(spread.mean)}`));
+      out.push(labelled('Its path', spread.path.map((v, h) => `${label(h)} ${formatStatistic(v)} (${formatStatistic(spread.lower[h])} to ${formatStatistic(spread.upper[h])})`).join('; ')));
     }
     out.push('', bullet(r.bandNote), ...r.warnings.map((w) => bullet(w, 2, '!')), '', renderSampleTerminal({ ...block[0].sample, column: labels.join(', ') }));
     return {

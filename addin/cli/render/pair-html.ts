@@ -130,7 +130,7 @@ function forecastHtml(pair: PairReport, report: DiagnosticReport): string {
   if (!f) return '';
   const s = f.spread;
   const past = (report.data.dates ?? report.data.rowLabels).slice(s.recentFrom, s.recentFrom + s.recent.length);
-  const ahead = f.dates ?? f.path.map((_, h) => `+${h + 1}`);
+  const ahead = f.dates ?? s.path.map((_, h) => `+${h + 1}`);
   const blank = (k: number) => new Array<number | null>(k).fill(null);
   const chart = lineChart({
     title: `Spread of the Johansen relation ${s.text}: recent rows and the forecast ${f.horizon} rows ahead`,
