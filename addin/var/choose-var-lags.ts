@@ -9,8 +9,10 @@
  * conventions, so the orders and values compare exactly.
  *
  * Speed: the lag columns are shifted copies of the K series, so the Gram matrix of the largest
- * design is built in O(n K^2 M) (var-lag-gram.ts) and one Cholesky of it gives every order's
- * residual cross products (nested-var-residuals.ts); when that path is not numerically safe
+ * design is built in O(n K^2 M) and one Cholesky of it gives every order's residual cross
+ * products (nested-var-residuals.ts). The design is first rewritten in changes (var-change-gram.ts:
+ * the lagged level and lagged changes, same residuals), which keeps prices' normal equations well
+ * conditioned at any length; then in levels (var-lag-gram.ts); when neither is numerically safe
  * (near-collinear lags, a near-exact fit), one Householder QR of the largest design gives them
  * instead (var-lag-cross-products-qr.ts). The Gram path conditions the data (mean-free, unit
  * scale) and adds 2 sum ln(scale_k) back to ln|Sigma|, so both paths return the same values:
@@ -23,6 +25,7 @@ import { powerOfTwoScale, scaled } from '../linalg/power-of-two-scale';
 import { nestedVarResiduals } from './nested-var-residuals';
 import { checkedBlock, checkedLagCount } from './var-design';
 import { varLagCrossProductsByQr } from './var-lag-cross-products-qr';
+import { varChangeGram } from './var-change-gram';
 import { varLagGram } from './var-lag-gram';
 
 /** The four criteria (and ln|Sigma|) of one VAR order. */
@@ -92,6 +95,14 @@ function residualCrossProducts(
   names: readonly string[],
   method: VarLagMethod,
 ): { crossProducts: Float64Array[]; logScale: number } {
+  if (method === 'auto' && maxLags >= 1) {
+    const changes = varChangeGram(series, maxLags);
+    const crossProducts = nestedVarResiduals(changes, series.length, maxLags);
+    if (crossProducts !== null) {
+      crossProducts[0] = changes.orderZero;
+      return { crossProducts, logScale: changes.logScale };
+    }
+  }
   if (method === 'auto') {
     const gram = varLagGram(series, maxLags);
     const crossProducts = nestedVarResiduals(gram, series.length, maxLags);
