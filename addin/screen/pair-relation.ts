@@ -17,10 +17,21 @@ import { johansenTest } from '../johansen/johansen';
 import { halfLifeFromSpeed } from '../spread/half-life';
 import { resolveMaxLag } from '../unitroot/max-lag';
 import { FIELD, PAIR_STATUS, RECORD_SIZE } from './pair-record';
+import { PairLagMoments } from './batched/pair-lag-moments';
 import { ResidualAdfWorkspace } from './residual-adf-workspace';
 import { canPair } from './series-orders';
 import type { ScreenSettings } from './screen-options';
 import type { ScreenUniverse } from './screen-universe';
+
+/** How a workspace forms the residual ADF's cross products. */
+export interface PairWorkspaceOptions {
+  /**
+   * 'batched' (default): for two complete series, from series-level products shared by both
+   * directions (batched/pair-lag-moments.ts); 'per-pair': from each residual, the reference path.
+   * Pairs with gaps, and directions whose combination would cancel too much, take the per-pair path.
+   */
+  products?: 'batched' | 'per-pair';
+}
 
 /** Buffers reused from pair to pair: the shared rows of both series and the residual. */
 export class PairWorkspace {
@@ -28,11 +39,14 @@ export class PairWorkspace {
   private readonly b: Float64Array;
   private readonly residual: Float64Array;
   private readonly adf = new ResidualAdfWorkspace();
+  /** The series-level products (null on the per-pair path); its `fallbacks` counts directions tested per pair. */
+  readonly moments: PairLagMoments | null;
 
-  constructor(rows: number) {
+  constructor(rows: number, options: PairWorkspaceOptions = {}) {
     this.a = new Float64Array(rows);
     this.b = new Float64Array(rows);
     this.residual = new Float64Array(rows);
+    this.moments = options.products === 'per-pair' ? null : new PairLagMoments();
   }
 
   /** Tests series i on j (record 2k) and j on i (record 2k + 1) into `out` at record index `first`. */
@@ -114,16 +128,26 @@ export class PairWorkspace {
     for (let t = 0; t < T; t++) sab += (a[t] - meanA) * (b[t] - meanB);
     const rSquared = (sab / saa) * (sab / sbb);
     const johansenRank = settings.johansen ? pairJohansenRank(a, b, T) : Number.NaN;
-    this.direction(a, b, T, meanA, meanB, sab / sbb, rSquared, settings, out, base);
-    this.direction(b, a, T, meanB, meanA, sab / saa, rSquared, settings, out, base + RECORD_SIZE);
+    const pmax = settings.lagRule === 'fixed' ? settings.fixedLags : resolveMaxLag(T, 'none', settings.maxLags < 0 ? undefined : settings.maxLags);
+    const P = settings.lagRule === 'fixed' ? settings.fixedLags : pmax;
+    // The series-level products serve both directions; a pair with gaps has its own rows.
+    const moments = both && this.moments && rSquared < EXACT_FIT_R_SQUARED && P + 2 <= T ? this.moments : null;
+    if (moments) moments.formPair(universe, i, j, P);
+    this.direction(a, b, T, meanA, meanB, sab / sbb, rSquared, settings, out, base, pmax, moments, i, j);
+    this.direction(b, a, T, meanB, meanA, sab / saa, rSquared, settings, out, base + RECORD_SIZE, pmax, moments, j, i);
     out[base + FIELD.johansenRank] = johansenRank;
     out[base + RECORD_SIZE + FIELD.johansenRank] = johansenRank;
   }
 
-  /** y on x with slope beta: residual, residual ADF, half-life and latest z-score into the record at r. */
+  /**
+   * y on x with slope beta: residual, residual ADF, half-life and latest z-score into the record
+   * at r. With `moments` (formed for series yi and xi), the residual's lag products come from the
+   * series' where they keep their digits; otherwise from the residual itself.
+   */
   private direction(
     y: Float64Array, x: Float64Array, T: number, meanY: number, meanX: number, beta: number, rSquared: number,
-    settings: ScreenSettings, out: Float64Array, r: number,
+    settings: ScreenSettings, out: Float64Array, r: number, pmax: number,
+    moments: PairLagMoments | null, yi: number, xi: number,
   ): void {
     out[r + FIELD.beta] = beta;
     out[r + FIELD.intercept] = meanY - beta * meanX;
@@ -136,8 +160,10 @@ export class PairWorkspace {
     }
     const u = this.residual;
     for (let t = 0; t < T; t++) u[t] = y[t] - meanY - beta * (x[t] - meanX);
-    const pmax = settings.lagRule === 'fixed' ? settings.fixedLags : resolveMaxLag(T, 'none', settings.maxLags < 0 ? undefined : settings.maxLags);
-    const adf = this.adf.test(u, T, pmax, settings.lagRule, settings.fixedLags);
+    const products = moments ? moments.direction(yi, xi, beta, rSquared) : null;
+    const adf = products
+      ? this.adf.testWithLagProducts(u, T, pmax, settings.lagRule, settings.fixedLags, products.changes, products.levels)
+      : this.adf.test(u, T, pmax, settings.lagRule, settings.fixedLags);
     if (!Number.isFinite(adf.tau)) {
       out[r + FIELD.status] = PAIR_STATUS.singular;
       return;

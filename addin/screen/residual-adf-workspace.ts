@@ -115,6 +115,61 @@ export class ResidualAdfWorkspace {
     return { tau: this.tauAt(T, P, lags), lags, nobs: T - 1 - lags };
   }
 
+  /**
+   * The same test with the cross products of row 0 formed elsewhere (the batched screen,
+   * batched/pair-lag-moments.ts): `changes[j]` = sum over rows t = P .. T-2 of Δu[t] Δu[t-j] and
+   * `levels[j]` = sum of u[t] Δu[t-j], j = 0..P, in the residual's own units. One pass over u gives
+   * its plain sums and scales as in test(); only the first and last P rows are copied, as the
+   * lag-lag products (shifted rows) and the refit need them.
+   */
+  testWithLagProducts(
+    u: ArrayLike<number>, T: number, pmax: number, rule: LagRule | 'fixed', fixedLags: number, changes: Float64Array, levels: Float64Array,
+  ): ResidualAdfAnswer {
+    const P = rule === 'fixed' ? fixedLags : pmax;
+    this.reserve(T, P);
+    const { level, dx, gram, levelCross } = this;
+    let su = 0;
+    let sl = 0;
+    let sd = 0;
+    let sc = 0;
+    for (let t = 0; t < T - 1; t++) {
+      const v = u[t];
+      const d = u[t + 1] - v;
+      su += v;
+      sl += v * v;
+      sd += d * d;
+      sc += v * d;
+    }
+    const last = u[T - 1];
+    su += last;
+    sl += last * last;
+    this.sums.sum = su;
+    this.sums.sumSquares = sl;
+    this.sums.levelTimesChange = sc;
+    const rmsLevel = Math.sqrt(sl / T);
+    const rmsChange = Math.sqrt(sd / (T - 1));
+    const levelScale = rmsLevel > 0 ? rmsLevel : 1;
+    const changeScale = rmsChange > 0 ? rmsChange : 1;
+    let outside = last * last; // rows 0 .. P-1 and T-1 lie outside the search's rows
+    for (let t = 0; t < P; t++) {
+      const v = u[t];
+      outside += v * v;
+      level[t] = v / levelScale;
+      dx[t] = (u[t + 1] - v) / changeScale;
+    }
+    for (let t = Math.max(P, T - 1 - P); t < T - 1; t++) dx[t] = (u[t + 1] - u[t]) / changeScale;
+    this.levelSquares = Math.max(sl - outside, 0) / (levelScale * levelScale);
+    const perChange = 1 / (changeScale * changeScale);
+    const perLevel = 1 / (levelScale * changeScale);
+    for (let j = 0; j <= P; j++) {
+      gram[j] = changes[j] * perChange;
+      levelCross[j] = levels[j] * perLevel;
+    }
+    this.shiftedProducts(T, P);
+    const lags = rule === 'fixed' ? fixedLags : this.chooseLags(T, P, rule, rmsChange > 0 ? rmsChange : 1);
+    return { tau: this.tauAt(T, P, lags), lags, nobs: T - 1 - lags };
+  }
+
   /** Cross products over rows t = P .. T-2 of the response dx[t], lags dx[t-i] (i = 1..P) and the level. */
   private crossProducts(T: number, P: number): void {
     const { level, dx, gram, levelCross } = this;
@@ -165,6 +220,15 @@ export class ResidualAdfWorkspace {
       gram[j] = r;
       levelCross[j] = l;
     }
+    this.shiftedProducts(T, P);
+  }
+
+  /** Lag i with lag j (1 <= i <= j <= P) from row 0: shifted rows, one entering and one leaving. */
+  private shiftedProducts(T: number, P: number): void {
+    const { dx, gram } = this;
+    const size = P + 1;
+    const a = P;
+    const b = T - 2;
     for (let i = 1; i <= P; i++) {
       for (let j = i; j <= P; j++) {
         gram[i * size + j] = gram[(i - 1) * size + (j - 1)] + dx[a - i] * dx[a - j] - dx[b + 1 - i] * dx[b + 1 - j];
