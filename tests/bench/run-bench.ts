@@ -16,6 +16,7 @@ import { benchBlock, benchJohansen } from '../../addin/bench/johansen-bench';
 import { benchCausality } from '../../addin/bench/causality-bench';
 import { benchBreaks } from '../../addin/bench/breaks-bench';
 import { benchScreen } from '../../addin/bench/screen-bench';
+import { benchScreenScale } from '../../addin/bench/screen-scale-bench';
 import { benchForecast, benchKalman, forecastBenchBlock, kalmanBenchPair } from '../../addin/bench/path-bench';
 import { benchFunctions } from './functions-bench';
 import type { Timing } from '../../addin/bench/timing';
@@ -52,6 +53,7 @@ function main(): void {
   const breaks = benchBreaks();
   const functions = benchFunctions();
   const screen = benchScreen();
+  const screenScale = benchScreenScale();
   const kalman = benchKalman();
   const kalmanPair = kalmanBenchPair();
   const forecast = benchForecast();
@@ -85,7 +87,7 @@ function main(): void {
     const ours = forecast[0].medianMs;
     comparisons.vecmForecast3x1000 = { oursMs: ours, referenceMs: round(reference.vecmForecastMs), ratio: round(ours / reference.vecmForecastMs) };
   }
-  const all: Timing[] = [...unitRoot, ...cleaner, ...cointegration, ...johansen, ...causality, ...breaks, ...functions, ...screen, ...kalman, ...forecast];
+  const all: Timing[] = [...unitRoot, ...cleaner, ...cointegration, ...johansen, ...causality, ...breaks, ...functions, ...screen, ...screenScale, ...kalman, ...forecast];
   const report = {
     machine: { node: process.version, cpus: cpus().length },
     benchmarks: all,
