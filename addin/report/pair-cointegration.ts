@@ -10,7 +10,7 @@ import type { EngleGrangerResult } from '../cointegration/engle-granger';
 import { engleGrangerBothWays } from '../cointegration/engle-granger-both-ways';
 import { phillipsOuliaris } from '../cointegration/phillips-ouliaris';
 import type { Deterministic } from '../result';
-import type { CointegrationEvidence, EngleGrangerSummary, PairCointegration } from './pair-types';
+import type { BoundsSummary, CointegrationEvidence, EngleGrangerSummary, PairCointegration } from './pair-types';
 import { summariseTest, type TestSummary } from './test-summary';
 import type { JohansenSummary } from './report-types';
 
@@ -61,6 +61,7 @@ export function pairCointegration(
     phillipsOuliaris: TestSummary | null;
     johansen: JohansenSummary | null;
     bothIntegrated: boolean;
+    bounds?: BoundsSummary | null;
   },
   verdict: string,
 ): PairCointegration {
@@ -73,5 +74,6 @@ export function pairCointegration(
     evidence,
     cointegrated: parts.bothIntegrated && evidence !== 'none',
     verdict,
+    ...(parts.bounds ? { bounds: parts.bounds } : {}),
   };
 }

@@ -21,7 +21,8 @@ import { adjustmentSection, spreadSection } from './pair-adjustment';
 import { movingHedgeSection } from './pair-moving-hedge';
 import { forecastSection } from './pair-forecast';
 import { engleGrangerPair, pairCointegration, phillipsOuliarisSummary } from './pair-cointegration';
-import type { PairReport, UnavailablePart } from './pair-types';
+import type { BoundsSummary, PairReport, UnavailablePart } from './pair-types';
+import { ardlBoundsTest } from '../ardl/bounds-test';
 import { cointegrationVerdict, pairVerdicts } from './pair-verdicts';
 import { pairWarnings } from './pair-warnings';
 
@@ -49,6 +50,22 @@ function attempt<T>(part: string, unavailable: UnavailablePart[], step: () => T)
     unavailable.push({ part, reason: e.message });
     return null;
   }
+}
+
+/** The bounds test of a on b (case 3, orders by AIC up to 4) in the report's summary shape. */
+function boundsSummary(a: Float64Array, b: Float64Array, names: { a: string; b: string }): BoundsSummary {
+  const r = ardlBoundsTest(a, [b], { case: 3 }, { y: names.a, x: [names.b] });
+  return {
+    dependent: names.a,
+    regressor: names.b,
+    statistic: r.fTest.statistic,
+    tStatistic: r.tTest.statistic,
+    critical5: r.critical['5%'],
+    pValue: r.pValue ? { lower: r.pValue.lower, upper: r.pValue.upper } : null,
+    criticalSource: r.criticalSource,
+    outcome: r.outcome,
+    verdict: r.verdict,
+  };
 }
 
 /** The diagnosis of the pair (a, b). */
@@ -106,11 +123,14 @@ export function diagnosePair(a: Float64Array, b: Float64Array, names: { a: strin
     : attempt('forecast', unavailable, () => forecastSection(y, x, yx, { case: johansen.case, lags: johansen.lags }, context.dates));
 
   const orderNumbers = { [names.a]: factsA.order, [names.b]: factsB.order };
-  const verdict = cointegrationVerdict({ engleGranger: eg, evidence: eg.evidence, bothIntegrated }, yx.y, yx.x, orderNumbers);
+  // One price I(0), the other I(1): the bounds test answers where the residual tests cannot.
+  const mixed = !bothIntegrated && [factsA.order, factsB.order].sort().join() === '0,1';
+  const bounds = mixed ? attempt('bounds test', unavailable, () => boundsSummary(a, b, names)) : null;
+  const verdict = cointegrationVerdict({ engleGranger: eg, evidence: eg.evidence, bothIntegrated }, yx.y, yx.x, orderNumbers, bounds);
   const partial: Omit<PairReport, 'verdicts' | 'warnings'> = {
     a: names.a,
     b: names.b,
-    cointegration: pairCointegration({ engleGranger: eg, phillipsOuliaris, johansen, bothIntegrated }, verdict),
+    cointegration: pairCointegration({ engleGranger: eg, phillipsOuliaris, johansen, bothIntegrated, bounds }, verdict),
     leadLag,
     relation,
     adjustment,

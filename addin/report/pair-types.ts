@@ -32,6 +32,25 @@ export interface PairCointegration {
   /** The report's decision: both I(1) and Engle-Granger rejects in at least one direction. */
   cointegrated: boolean;
   verdict: string;
+  /**
+   * Where one price is I(0) and the other I(1), the residual tests and Johansen do not apply and
+   * the bounds test (Pesaran, Shin & Smith 2001; addin/ardl) answers instead: first on second,
+   * case 3, orders by AIC. Absent otherwise.
+   */
+  bounds?: BoundsSummary | null;
+}
+
+/** The bounds test's answer for a pair of mixed orders. */
+export interface BoundsSummary {
+  dependent: string;
+  regressor: string;
+  statistic: number;
+  tStatistic: number;
+  critical5: { lower: number; upper: number };
+  pValue: { lower: number; upper: number } | null;
+  criticalSource: string;
+  outcome: 'relation' | 'no-relation' | 'inconclusive';
+  verdict: string;
 }
 
 /** A hedge ratio estimate: y = intercept + beta x. */

@@ -4,7 +4,7 @@
  * which series leads. The numbers sit next to the words ("Engle-Granger p = 0.001").
  */
 import { formatCoefficient, formatPValue } from '../cointegration/wording';
-import type { PairCointegration, PairReport } from './pair-types';
+import type { BoundsSummary, PairCointegration, PairReport } from './pair-types';
 import { headlinePValue } from './pair-cointegration';
 import { orderText } from './series-section';
 
@@ -14,9 +14,13 @@ export function cointegrationVerdict(
   first: string,
   second: string,
   orders: Record<string, number>,
+  bounds: BoundsSummary | null = null,
 ): string {
   if (!c.bothIntegrated) {
     const odd = [first, second].filter((n) => orders[n] !== 1).map((n) => `${n} is ${orderText(orders[n])}`);
+    if (bounds) {
+      return `${first} and ${second}: the residual tests and Johansen assume two wandering prices, but ${odd.join(' and ')}; the bounds test, which allows a mix, answers instead. ${bounds.verdict}`;
+    }
     return `${first} and ${second}: cointegration tests assume I(1) inputs, but ${odd.join(' and ')}, so this pair shows no long-run relation between two wandering prices.`;
   }
   const { aOnB, bOnA } = c.engleGranger;

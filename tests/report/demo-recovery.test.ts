@@ -105,11 +105,14 @@ describe('what the file must not show', () => {
     for (const u of [tight.dependent, tight.regressor]) for (const v of [loose.dependent, loose.regressor]) expect(pairOf(u, v).cointegration.cointegrated, `${u} / ${v}`).toBe(false);
   });
 
-  it(`pairs with ${DEMO_TRUTH.stationary.join(', ')} are reported, with the verdict that the tests assume I(1) inputs`, () => {
+  it(`pairs with ${DEMO_TRUTH.stationary.join(', ')} are reported, with the verdict that the residual tests assume two wandering prices and the bounds test's answer`, () => {
     for (const name of DEMO_TRUTH.stationary) {
       const pairs = report.pairs.filter((q) => q.a === name || q.b === name);
       expect(pairs).toHaveLength(DEMO_TRUTH.series.length - 1);
-      for (const p of pairs) expect(p.cointegration.verdict).toContain('cointegration tests assume I(1) inputs');
+      for (const p of pairs) {
+        expect(p.cointegration.verdict).toContain('assume two wandering prices');
+        expect(p.cointegration.verdict).toContain(p.cointegration.bounds!.verdict);
+      }
     }
   });
 

@@ -111,10 +111,14 @@ describe('an I(0) series beside an I(1) series (seed 21, 400 rows)', () => {
     expect(report.series.map((s) => s.orderText)).toEqual(['I(0)', 'I(1)']);
   });
 
-  it('still reports the pair, but its verdict says cointegration tests assume I(1) inputs', () => {
+  it('still reports the pair; its verdict says the residual tests assume two wandering prices and gives the bounds test instead', () => {
     expect(pair.cointegration.bothIntegrated).toBe(false);
     expect(pair.cointegration.cointegrated).toBe(false);
-    expect(pair.cointegration.verdict).toContain('cointegration tests assume I(1) inputs, but Calm is I(0)');
+    expect(pair.cointegration.verdict).toContain('the residual tests and Johansen assume two wandering prices, but Calm is I(0); the bounds test, which allows a mix, answers instead.');
+    const bounds = pair.cointegration.bounds!;
+    expect(bounds.dependent).toBe('Calm');
+    expect(pair.cointegration.verdict).toContain(bounds.verdict);
+    expect(bounds.criticalSource).toMatch(/Table CI\(iii\)/);
     expect(pair.warnings.map((w) => w.kind)).toContain('inputs-not-integrated');
     expect(pair.cointegration.engleGranger.aOnB.statistic).not.toBeNull();
   });
