@@ -17,6 +17,8 @@ import type { BlockCell } from '../workbook/port';
 import { COL, type BlockGrid } from './block-grid';
 import { FILL, NUMBER_FORMAT, STYLE, periodsFormat } from './block-style';
 import { textLiteral, type SeriesReferences } from './series-reference';
+import { FORECAST_BAND_NOTE } from '../../addin/forecast/vecm-forecast';
+import { REPORT_HORIZON } from '../../addin/report/pair-forecast';
 import { halfLifeReading, orderReading, pValueReading, pullReading, rankReading, speedReading, stretchReading } from './verdict-formulas';
 
 /** What every section needs. */
@@ -135,6 +137,14 @@ export function lineStage(g: BlockGrid, c: StageContext): void {
   const latest = parsePreparation(c.report.settings.preparation ?? '').newestFirst
     ? `=INDEX(${c.zSpill}#,MATCH(TRUE,ISNUMBER(${c.zSpill}#),0))`
     : `=INDEX(${c.zSpill}#,ROWS(${c.zSpill}#))`;
+  // Written whenever Johansen ran (not only when the tests found a tie), so the block's rows stay put when a refresh changes the verdict.
+  const j = c.pair.cointegration.johansen;
+  if (j) {
+    const f = c.pair.forecast;
+    numberRow(g, `Where the spread is heading: in ${REPORT_HORIZON} ${period}s (error-correction forecast)`,
+      { formula: `=INDEX(MOOR.AHEAD(HSTACK(${y},${x}),${REPORT_HORIZON},1,${j.lags},${textLiteral(j.case)},"spread",${c.prep}),${REPORT_HORIZON},1)` }, NUMBER_FORMAT.ratio, null,
+      `${f ? `the Johansen relation ${f.spread.text} (its equilibrium ${f.spread.mean.toPrecision(4)} when written)` : 'the Johansen relation, normalised on ' + c.y}, one relation assumed; ${FORECAST_BAND_NOTE}`);
+  }
   numberRow(g, 'Is the spread stretched now? Latest z-score', { formula: latest }, NUMBER_FORMAT.statistic,
     stretchReading, 'standard deviations from its mean on the last row, over the whole sample');
 }

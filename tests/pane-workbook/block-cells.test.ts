@@ -61,6 +61,7 @@ describe('the demo block', () => {
     expect(r('Does the spread revert?')).toBe('=MOOR.HALFLIFE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"value",$J$5)');
     expect(r('Half-life, low end')).toBe('=MOOR.HALFLIFE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"low",$J$5)');
     expect(r('Half-life, high end')).toBe('=MOOR.HALFLIFE(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"high",$J$5)');
+    expect(r('Where the spread is heading')).toBe('=INDEX(MOOR.AHEAD(HSTACK(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil]),20,1,1,"restricted-constant","spread",$J$5),20,1)');
     expect(r('Is the spread stretched now?')).toBe('=INDEX(R3#,ROWS(R3#))');
   });
 
@@ -77,6 +78,7 @@ describe('the demo block', () => {
     expect(v('Hedge ratio (dynamic OLS)')).toBeCloseTo(p.relation!.dynamicOls.beta, 12);
     expect(v('Does DockDiesel move back?')).toBeCloseTo(p.adjustment!.ecm.dependent.speed, 12);
     expect(v('Hedge ratio now, allowed to move')).toBeCloseTo(p.movingHedge!.latest.beta, 12);
+    expect(v('Where the spread is heading')).toBeCloseTo(p.forecast!.spread.path[p.forecast!.horizon - 1], 10);
     expect(v('Does the spread revert?')).toBeCloseTo(p.adjustment!.spreadAr1.halfLife!, 10);
     expect(v('Half-life, low end of its 95% interval')).toBeCloseTo(p.adjustment!.spreadAr1.halfLifeInterval.low!, 10);
     expect(v('Half-life, high end of its 95% interval')).toBeCloseTo(p.adjustment!.spreadAr1.halfLifeInterval.high!, 10);
@@ -121,7 +123,7 @@ describe('the demo block', () => {
     expect(shown('O782')).toBeCloseTo(p.spread!.latest, 12);
     expect(shown('N782')).toBe('2024-12-27');
     expect(shown('O783')).toBeNull();
-    expect(demo.built.block.reserved).toEqual(['N42:R782']);
+    expect(demo.built.block.reserved).toEqual(['N43:R782']);
     expect(demo.wb.charts).toHaveLength(1);
     const chart = demo.wb.charts[0];
     expect(chart.name).toBe('Mooring_GateGasoil_DockDiesel');
