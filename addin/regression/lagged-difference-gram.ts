@@ -29,6 +29,8 @@ export interface DickeyFullerGram {
   n: number;
   /** The response was divided by this; multiply SSRs by its square to return to the data's units. */
   responseScale: number;
+  /** The lagged level was divided by this (after its shift); a level coefficient times responseScale / levelScale is in the data's units. */
+  levelScale: number;
 }
 
 export function dickeyFullerGram(x: ArrayLike<number>, deterministic: Deterministic, pmax: number): DickeyFullerGram {
@@ -36,7 +38,7 @@ export function dickeyFullerGram(x: ArrayLike<number>, deterministic: Determinis
   const level = Float64Array.from(x as ArrayLike<number>);
   const dx = new Float64Array(T - 1);
   for (let t = 0; t < T - 1; t++) dx[t] = x[t + 1] - x[t];
-  condition(level, deterministic);
+  const levelScale = condition(level, deterministic);
   const responseScale = condition(dx, deterministic);
 
   const a = pmax;
@@ -121,7 +123,7 @@ export function dickeyFullerGram(x: ArrayLike<number>, deterministic: Determinis
       set(2, lagCol(j), s);
     }
   }
-  return { xtx, xty, yty: gd[0], k, n, responseScale };
+  return { xtx, xty, yty: gd[0], k, n, responseScale, levelScale };
 }
 
 /** Removes the mean (const) or least-squares line (trend), scales to unit root-mean-square, returns the scale. */

@@ -6,7 +6,9 @@
  */
 import { MooringInputError } from '../errors';
 import type { Deterministic } from '../result';
+import { deterministicCount } from '../regression/deterministic-terms';
 import { adfRegression, type AdfRegression } from './adf-regression';
+import { ADF_GRAM_WORK, adfTauByGram } from './adf-tau-gram';
 import { chooseAdfLags, LAG_RULES, type LagChoice, type LagRule } from './adf-lag-search';
 import { resolveMaxLag } from './max-lag';
 
@@ -21,8 +23,11 @@ export interface AdfCoreOptions {
   capDeterministic?: Deterministic;
 }
 
+/** What the tests read of the chosen regression; the full QR fit only where it was made. */
+export type AdfStatistic = Pick<AdfRegression, 'tau' | 'gamma' | 'lags' | 'nobs'> & { fit?: AdfRegression['fit'] };
+
 export interface AdfCore {
-  regression: AdfRegression;
+  regression: AdfStatistic;
   lagRule: 'fixed' | LagRule;
   maxLags: number;
   choice: LagChoice | null;
@@ -33,12 +38,27 @@ export function adfCore(x: ArrayLike<number>, options: AdfCoreOptions): AdfCore 
   const cap = options.capDeterministic ?? options.deterministic;
   if (typeof lags === 'number') {
     const fixed = resolveMaxLag(x.length, cap, lags, 'number of lags');
-    return { regression: adfRegression(x, fixed, options.deterministic), lagRule: 'fixed', maxLags: fixed, choice: null };
+    return { regression: chosenRegression(x, fixed, options.deterministic), lagRule: 'fixed', maxLags: fixed, choice: null };
   }
   if (!LAG_RULES.includes(lags)) {
     throw new MooringInputError(`Unknown lag rule '${String(lags)}': use a whole number or one of ${LAG_RULES.join(', ')}.`);
   }
   const maxLags = resolveMaxLag(x.length, cap, options.maxLags);
   const choice = chooseAdfLags(x, options.deterministic, maxLags, lags);
-  return { regression: adfRegression(x, choice.lags, options.deterministic), lagRule: lags, maxLags, choice };
+  return { regression: chosenRegression(x, choice.lags, options.deterministic), lagRule: lags, maxLags, choice };
+}
+
+/**
+ * The chosen regression: by QR, or for long series with many lags (rows x columns^2 past
+ * ADF_GRAM_WORK) from its O(n p) cross products (adf-tau-gram.ts), with QR wherever those
+ * are not numerically safe.
+ */
+function chosenRegression(x: ArrayLike<number>, lags: number, deterministic: Deterministic): AdfStatistic {
+  const n = x.length - 1 - lags;
+  const k = 1 + lags + deterministicCount(deterministic);
+  if (n > 0 && n * k * k > ADF_GRAM_WORK) {
+    const fast = adfTauByGram(x, lags, deterministic);
+    if (fast !== null) return { tau: fast.tau, gamma: fast.gamma, lags, nobs: fast.nobs };
+  }
+  return adfRegression(x, lags, deterministic);
 }

@@ -1,0 +1,60 @@
+/**
+ * ADF tau and gamma from the O(n p) cross products (adf-tau-gram.ts) against the Householder QR
+ * fit of the same regression (adf-regression.ts), on seeded series of the kinds the integration
+ * order meets: a price (random walk), its changes (noise), its second changes (over-differenced,
+ * the lags strongly tied), a stationary AR(1), each with none, const and trend terms. Tolerance
+ * 1e-12 relative. Near-collinear designs must be declined (null), so the caller uses QR.
+ */
+import { describe, expect, it } from 'vitest';
+import { SeededRandom, autoregressive1, randomWalk } from '../../addin/random';
+import type { Deterministic } from '../../addin/result';
+import { adfRegression } from '../../addin/unitroot/adf-regression';
+import { adfTauByGram } from '../../addin/unitroot/adf-tau-gram';
+
+function difference(x: Float64Array): Float64Array {
+  return x.slice(1).map((v, i) => v - x[i]);
+}
+
+const rng = new SeededRandom(808);
+const walk = randomWalk(rng, 6_000, { start: 500, drift: 0.01 });
+const cases: [string, Float64Array, number][] = [
+  ['a random walk near 500', walk, 20],
+  ['its changes', difference(walk), 20],
+  ['a stationary AR(1)', autoregressive1(rng, 6_000, 0.8), 8],
+  ['a random walk, no lags', randomWalk(rng, 3_000, { start: 100 }), 0],
+];
+
+describe('ADF tau from cross products equals the QR fit', () => {
+  for (const [name, x, lags] of cases) {
+    for (const deterministic of ['none', 'const', 'trend'] as Deterministic[]) {
+      it(`${name}, ${lags} lags, ${deterministic}: tau and gamma to 1e-12`, () => {
+        const fast = adfTauByGram(x, lags, deterministic);
+        const qr = adfRegression(x, lags, deterministic);
+        expect(fast).not.toBeNull();
+        expect(fast!.nobs).toBe(qr.nobs);
+        expect(Math.abs(fast!.tau - qr.tau) / Math.abs(qr.tau)).toBeLessThan(1e-12);
+        expect(Math.abs(fast!.gamma - qr.gamma) / Math.abs(qr.gamma)).toBeLessThan(1e-12);
+      });
+    }
+  }
+
+  it('second changes (over-differenced: the lagged changes strongly tied) are declined, where cross products lose about 1e-10', () => {
+    const second = difference(difference(walk));
+    for (const deterministic of ['none', 'const', 'trend'] as Deterministic[]) expect(adfTauByGram(second, 30, deterministic)).toBeNull();
+  });
+
+  it('a smooth curve with tiny noise (lagged changes nearly collinear) is declined', () => {
+    const r = new SeededRandom(3);
+    const x = Float64Array.from({ length: 3_000 }, (_, t) => Math.sin(t / 90) + 1e-10 * r.normal());
+    expect(adfTauByGram(x, 10, 'const')).toBeNull();
+  });
+
+  it('a near-exact fit (SSR a tiny share of the response) is declined', () => {
+    const r = new SeededRandom(4);
+    const x = new Float64Array(3_000);
+    x[0] = 1;
+    x[1] = 1.5;
+    for (let t = 2; t < x.length; t++) x[t] = x[t - 1] + 0.9 * (x[t - 1] - x[t - 2]) + 1e-6 * r.normal() + 0.001;
+    expect(adfTauByGram(x, 2, 'const')).toBeNull();
+  });
+});
