@@ -96,6 +96,14 @@ export function tieStage(g: BlockGrid, c: StageContext): void {
       `both series in one model, ${j.lags} lagged change${j.lags === 1 ? '' : 's'}; ${j.caseReason}`);
     numberRow(g, 'Long-run relations found by Johansen', { formula: `=MOOR.RANK(${args},${alpha},${c.prep})` }, NUMBER_FORMAT.count, rankReading,
       'the trace test taken step by step at the level above');
+    numberRow(g, `Is the relation simply ${a} minus ${b}? Weights 1 and -1 (p-value)`,
+      { formula: `=MOOR.RELATIONIS(${c.refs.pair(a, b)},HSTACK(1,-1),${j.lags},${textLiteral(j.case)},"headline",${c.prep})` }, NUMBER_FORMAT.pValue,
+      (cell) => pValueReading(cell, alpha, 'the weights differ from 1 and -1', 'no evidence against 1 and -1'),
+      'Johansen likelihood-ratio test that the one relation is these weights up to scale (chi-square, 1 degree of freedom)');
+    [a, b].forEach((name, i) => numberRow(g, `Does ${name} move to close the gap? (p-value)`,
+      { formula: `=MOOR.ADJUSTS(${c.refs.pair(a, b)},${i + 1},${j.lags},${textLiteral(j.case)},"headline",${c.prep})` }, NUMBER_FORMAT.pValue,
+      (cell) => pValueReading(cell, alpha, `${name} moves back toward the relation`, `no sign that ${name} adjusts`),
+      `Johansen likelihood-ratio test that ${name}'s adjustment is zero (weak exogeneity), with the trace test's number of relations (at least 1)`));
   }
 }
 

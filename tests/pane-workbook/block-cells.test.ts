@@ -123,7 +123,7 @@ describe('the demo block', () => {
     expect(shown('O782')).toBeCloseTo(p.spread!.latest, 12);
     expect(shown('N782')).toBe('2024-12-27');
     expect(shown('O783')).toBeNull();
-    expect(demo.built.block.reserved).toEqual(['N43:R782']);
+    expect(demo.built.block.reserved).toEqual(['N46:R782']);
     expect(demo.wb.charts).toHaveLength(1);
     const chart = demo.wb.charts[0];
     expect(chart.name).toBe('Mooring_GateGasoil_DockDiesel');
