@@ -59,15 +59,25 @@ function threadText(threads: ScreenAnswer['threads']): string {
   return `${threads.threads}${threads.note ? ` (${threads.note})` : ''}`;
 }
 
+/** Series named one by one in the report up to this many; past it, the first few and the count. */
+const NAMED_IN_FULL = 40;
+
+/** "I(1) 1,850 series, I(0) 120, undecided 3": the orders of a large universe counted. */
+function orderCounts(orders: readonly SeriesOrder[]): string {
+  const counts = new Map<string, number>();
+  for (const o of orders) counts.set(o.orderText ?? 'undecided', (counts.get(o.orderText ?? 'undecided') ?? 0) + 1);
+  return `${[...counts].map(([text, n]) => `${text} ${n}`).join(', ')} series (--json lists each)`;
+}
+
 function terminalReport(a: ScreenAnswer): string {
   const s = a.summary;
   const shown = s.pairs.slice(0, a.top);
   const out = [
     heading(`Pair screen of ${s.names.length} series`),
     '',
-    labelled('Series', s.names.join(', ')),
+    labelled('Series', s.names.length <= NAMED_IN_FULL ? s.names.join(', ') : `${s.names.slice(0, 8).join(', ')}, ... (${s.names.length} in all; --json lists them)`),
     ...(a.source.leftOut.length ? [labelled('Left out', `${a.source.leftOut.join(', ')} (not numeric)`)] : []),
-    labelled('Orders', s.orders.map((o) => `${o.name} ${o.orderText ?? 'undecided'}`).join(', ')),
+    labelled('Orders', s.orders.length <= NAMED_IN_FULL ? s.orders.map((o) => `${o.name} ${o.orderText ?? 'undecided'}`).join(', ') : orderCounts(s.orders)),
     labelled('Tested', `${s.family.size} directed pairs (Engle-Granger, constant, lags by the rule)`),
     labelled('Adjustment', `Benjamini-Hochberg over ${s.family.description}`),
     labelled('parts' in a.threads ? 'Parts' : 'Threads', threadText(a.threads)),

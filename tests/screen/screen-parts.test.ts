@@ -138,6 +138,21 @@ describe('screen --part k/4 run at once, then merge', async () => {
   });
 });
 
+describe('the report of a large universe', () => {
+  it('names the first 8 of 42 series and counts the orders instead of listing 42 of each', () => {
+    const { series: walks } = generatedUniverse(5, { clusters: 0, perCluster: 3, walks: 42, T: 60 });
+    const text = [['Date', ...walks.map((w) => w.name)].join(','), ...Array.from({ length: 60 }, (_, t) =>
+      [new Date(Date.UTC(2022, 0, 1 + t)).toISOString().slice(0, 10), ...walks.map((w) => w.values[t].toFixed(4))].join(','))].join('\n');
+    const out = runWith([screenCommand], ['screen', 'w.csv', '--threads', '1', '--top', '3'], { 'w.csv': `${text}\n` });
+    expect(out.code).toBe(0);
+    const flat = out.stdout.replace(/\s+/g, ' ');
+    expect(flat).toMatch(/\.\.\. \(42 in all; --json lists them\)/);
+    expect(flat).toMatch(/Orders I\(\d\) \d+/);
+    const counted = [...flat.replace(/.*Orders (.*?) series \(--json lists each\).*/, '$1').matchAll(/(I\(\d\)|undecided|above I\(2\)) (\d+)/g)].reduce((n, m) => n + Number(m[2]), 0);
+    expect(counted).toBe(42);
+  });
+});
+
 describe('a screen the machine cannot hold is refused up front, saying what would fit', () => {
   const machine = { bytes: 0.8 * 24 * 2 ** 30, heapBytes: 4 * 2 ** 30 }; // this project's machine: 24 GiB, a 4 GiB heap
   it('50,000 series (2.5 billion directed pairs) are refused with the series that fit and the way to split', () => {
