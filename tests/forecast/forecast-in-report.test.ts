@@ -10,7 +10,8 @@ import { describe, expect, it } from 'vitest';
 import { MOORING_COMMANDS } from '../../addin/cli/commands';
 import type { DiagnosticReport } from '../../addin/report/report-types';
 import { runWith } from '../cli/cli-harness';
-import { DEMO_CSV } from '../pane/demo-reports';
+import { relationStepView } from '../../taskpane/ui/views/relation-view';
+import { COLUMN, DEMO_CSV, demoReport } from '../pane/demo-reports';
 
 const run = (...argv: string[]) => runWith(MOORING_COMMANDS, argv, { 'd.csv': DEMO_CSV });
 const json = (...argv: string[]) => JSON.parse(run(...argv, '--json').stdout) as Record<string, any>;
@@ -46,5 +47,14 @@ describe('the report\'s forecast', () => {
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }
+  });
+
+  it('stands in the pane\'s step on the relation: the spread\'s forecast with its band, and the band note', async () => {
+    const paneReport = await demoReport([COLUMN.GateGasoil, COLUMN.DockDiesel]);
+    const pf = paneReport.pairs[0].forecast!;
+    const view = relationStepView(paneReport, paneReport.pairs[0]);
+    const fact = view.pullFacts.find((x) => x.label.startsWith('Where the spread'));
+    expect(fact?.value.startsWith(`${pf.spread.path[19].toFixed(4)} (likely ${pf.spread.lower[19].toFixed(4)} to ${pf.spread.upper[19].toFixed(4)}`)).toBe(true);
+    expect(view.pullFacts.find((x) => x.label === 'How sure the forecast is')?.value).toContain('ignoring the uncertainty of the estimated coefficients');
   });
 });

@@ -104,6 +104,17 @@ export function relationStepView(report: DiagnosticReport, pair: PairReport): Re
       { label: `Against the last ${s.rollingWindow} rows`, value: showNumber(s.latestRollingZ, 2) },
     );
   }
+  const f = pair.forecast;
+  if (f) {
+    const last = f.horizon - 1;
+    pullFacts.push(
+      {
+        label: `Where the spread (Johansen relation ${f.spread.text}) is heading: ${f.horizon} ${period}s ahead${f.dates ? `, ${f.dates[last]}` : ''}`,
+        value: `${showNumber(f.spread.path[last], 4)} (likely ${showNumber(f.spread.lower[last], 4)} to ${showNumber(f.spread.upper[last], 4)}; now ${showNumber(f.spread.recent[f.spread.recent.length - 1], 4)}, equilibrium ${showNumber(f.spread.mean, 4)})`,
+      },
+      { label: 'How sure the forecast is', value: f.bandNote },
+    );
+  }
   return {
     pairLabel: `${pair.a} and ${pair.b}`,
     untiedNote: pair.cointegration.cointegrated
