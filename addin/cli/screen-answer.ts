@@ -84,7 +84,7 @@ function terminalReport(a: ScreenAnswer): string {
     '',
     bullet(s.chanceSentence, 0, '*'),
     '',
-    ...(shown.length === 0 ? [s.family.size === 0 ? '  No pair was tested.' : '  No pair meets the half-life range.'] : pairTable(shown)),
+    ...(s.ranked === 0 ? [s.family.size === 0 ? '  No pair was tested.' : '  No pair meets the half-life range.'] : shown.length === 0 ? [] : pairTable(shown)),
   ];
   if (s.ranked > shown.length) out.push(`  ... ${s.ranked - shown.length} more pairs (--top N shows more; --format jsonl or csv lists every pair)`);
   if (s.setAsideCount > 0) {
