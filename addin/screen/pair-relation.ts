@@ -17,7 +17,7 @@ import { johansenTest } from '../johansen/johansen';
 import { halfLifeFromSpeed } from '../spread/half-life';
 import { resolveMaxLag } from '../unitroot/max-lag';
 import { FIELD, PAIR_STATUS, RECORD_SIZE } from './pair-record';
-import { PairLagMoments } from './batched/pair-lag-moments';
+import { PairLagMoments, type LagKernel } from './batched/pair-lag-moments';
 import { ResidualAdfWorkspace } from './residual-adf-workspace';
 import { canPair } from './series-orders';
 import type { ScreenSettings } from './screen-options';
@@ -31,6 +31,8 @@ export interface PairWorkspaceOptions {
    * Pairs with gaps, and directions whose combination would cancel too much, take the per-pair path.
    */
   products?: 'batched' | 'per-pair';
+  /** The batched path's inner products: WebAssembly SIMD where the host has it (default), or the JavaScript loops. */
+  kernel?: LagKernel;
 }
 
 /** Buffers reused from pair to pair: the shared rows of both series and the residual. */
@@ -46,7 +48,7 @@ export class PairWorkspace {
     this.a = new Float64Array(rows);
     this.b = new Float64Array(rows);
     this.residual = new Float64Array(rows);
-    this.moments = options.products === 'per-pair' ? null : new PairLagMoments();
+    this.moments = options.products === 'per-pair' ? null : new PairLagMoments(options.kernel);
   }
 
   /** Tests series i on j (record 2k) and j on i (record 2k + 1) into `out` at record index `first`. */
@@ -159,10 +161,10 @@ export class PairWorkspace {
       return;
     }
     const u = this.residual;
-    for (let t = 0; t < T; t++) u[t] = y[t] - meanY - beta * (x[t] - meanX);
-    const products = moments ? moments.direction(yi, xi, beta, rSquared) : null;
+    const products = moments ? moments.direction(yi, xi, beta, rSquared, u) : null;
+    if (!products) for (let t = 0; t < T; t++) u[t] = y[t] - meanY - beta * (x[t] - meanX);
     const adf = products
-      ? this.adf.testWithLagProducts(u, T, pmax, settings.lagRule, settings.fixedLags, products.changes, products.levels)
+      ? this.adf.testWithLagProducts(u, T, pmax, settings.lagRule, settings.fixedLags, products)
       : this.adf.test(u, T, pmax, settings.lagRule, settings.fixedLags);
     if (!Number.isFinite(adf.tau)) {
       out[r + FIELD.status] = PAIR_STATUS.singular;

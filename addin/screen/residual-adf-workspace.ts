@@ -29,6 +29,22 @@ export interface ResidualAdfAnswer {
   nobs: number;
 }
 
+/** A residual's products for testWithLagProducts, in its own units. */
+export interface LagProducts {
+  /** sum over t = P .. T-2 of Δu[t] Δu[t-j], j = 0..P. */
+  changes: Float64Array;
+  /** sum over t = P .. T-2 of u[t] Δu[t-j], j = 0..P. */
+  levels: Float64Array;
+  /** sum of u[t], t = 0 .. T-1. */
+  sum: number;
+  /** sum of u[t]^2, t = 0 .. T-1. */
+  sumSquares: number;
+  /** sum of Δu[t]^2, t = 0 .. T-2. */
+  changeSquares: number;
+  /** sum of u[t] Δu[t], t = 0 .. T-2. */
+  levelTimesChange: number;
+}
+
 /** Buffers for the residual ADF, grown to the largest residual and lag count seen; ask it test() once per residual. */
 export class ResidualAdfWorkspace {
   private level = new Float64Array(0);
@@ -116,40 +132,24 @@ export class ResidualAdfWorkspace {
   }
 
   /**
-   * The same test with the cross products of row 0 formed elsewhere (the batched screen,
-   * batched/pair-lag-moments.ts): `changes[j]` = sum over rows t = P .. T-2 of Δu[t] Δu[t-j] and
-   * `levels[j]` = sum of u[t] Δu[t-j], j = 0..P, in the residual's own units. One pass over u gives
-   * its plain sums and scales as in test(); only the first and last P rows are copied, as the
-   * lag-lag products (shifted rows) and the refit need them.
+   * The same test with the residual's products formed elsewhere (the batched screen,
+   * batched/pair-lag-moments.ts): over the search's rows t = P .. T-2, `changes[j]` = sum of
+   * Δu[t] Δu[t-j] and `levels[j]` = sum of u[t] Δu[t-j], j = 0..P, and over all rows the plain
+   * sums, in the residual's own units. Only the first P + 1 and the last P + 1 rows of u are read
+   * (the lag-lag products by shifted rows and the refit need them); the rest need not be filled.
    */
-  testWithLagProducts(
-    u: ArrayLike<number>, T: number, pmax: number, rule: LagRule | 'fixed', fixedLags: number, changes: Float64Array, levels: Float64Array,
-  ): ResidualAdfAnswer {
+  testWithLagProducts(u: ArrayLike<number>, T: number, pmax: number, rule: LagRule | 'fixed', fixedLags: number, given: LagProducts): ResidualAdfAnswer {
     const P = rule === 'fixed' ? fixedLags : pmax;
     this.reserve(T, P);
     const { level, dx, gram, levelCross } = this;
-    let su = 0;
-    let sl = 0;
-    let sd = 0;
-    let sc = 0;
-    for (let t = 0; t < T - 1; t++) {
-      const v = u[t];
-      const d = u[t + 1] - v;
-      su += v;
-      sl += v * v;
-      sd += d * d;
-      sc += v * d;
-    }
-    const last = u[T - 1];
-    su += last;
-    sl += last * last;
-    this.sums.sum = su;
-    this.sums.sumSquares = sl;
-    this.sums.levelTimesChange = sc;
-    const rmsLevel = Math.sqrt(sl / T);
-    const rmsChange = Math.sqrt(sd / (T - 1));
+    this.sums.sum = given.sum;
+    this.sums.sumSquares = given.sumSquares;
+    this.sums.levelTimesChange = given.levelTimesChange;
+    const rmsLevel = Math.sqrt(given.sumSquares / T);
+    const rmsChange = Math.sqrt(given.changeSquares / (T - 1));
     const levelScale = rmsLevel > 0 ? rmsLevel : 1;
     const changeScale = rmsChange > 0 ? rmsChange : 1;
+    const last = u[T - 1];
     let outside = last * last; // rows 0 .. P-1 and T-1 lie outside the search's rows
     for (let t = 0; t < P; t++) {
       const v = u[t];
@@ -158,12 +158,12 @@ export class ResidualAdfWorkspace {
       dx[t] = (u[t + 1] - v) / changeScale;
     }
     for (let t = Math.max(P, T - 1 - P); t < T - 1; t++) dx[t] = (u[t + 1] - u[t]) / changeScale;
-    this.levelSquares = Math.max(sl - outside, 0) / (levelScale * levelScale);
+    this.levelSquares = Math.max(given.sumSquares - outside, 0) / (levelScale * levelScale);
     const perChange = 1 / (changeScale * changeScale);
     const perLevel = 1 / (levelScale * changeScale);
     for (let j = 0; j <= P; j++) {
-      gram[j] = changes[j] * perChange;
-      levelCross[j] = levels[j] * perLevel;
+      gram[j] = given.changes[j] * perChange;
+      levelCross[j] = given.levels[j] * perLevel;
     }
     this.shiftedProducts(T, P);
     const lags = rule === 'fixed' ? fixedLags : this.chooseLags(T, P, rule, rmsChange > 0 ? rmsChange : 1);

@@ -67,6 +67,11 @@ export function levelLagProducts(c: Float64Array, d: Float64Array, changeProduct
   let s = 0;
   for (let t = a; t <= b; t++) s += c[t] * d[t];
   out[0] = s;
+  shiftLevelProducts(c, d, changeProducts, a, b, P, out);
+}
+
+/** levelLagProducts with out[0] already in place (formed by another kernel). */
+export function shiftLevelProducts(c: Float64Array, d: Float64Array, changeProducts: Float64Array, a: number, b: number, P: number, out: Float64Array): void {
   const first = c[a];
   const after = c[b + 1];
   for (let k = 0; k < P; k++) out[k + 1] = out[k] + changeProducts[k] + first * d[a - 1 - k] - after * d[b - k];

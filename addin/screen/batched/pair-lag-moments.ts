@@ -20,8 +20,13 @@
  * the second bounded by about sqrt(kappa_D) / sqrt(1 - R^2). Where the larger passes
  * CANCELLATION_LIMIT, the direction is tested from its residual as before (the per-pair path).
  */
+import type { LagProducts } from '../residual-adf-workspace';
 import type { ScreenUniverse } from '../screen-universe';
-import { crossLagProducts, levelLagProducts } from './lag-cross-products';
+import { crossLagProducts, levelLagProducts, shiftLevelProducts } from './lag-cross-products';
+import { SLOT, wasmLagArena, type LagArena } from './wasm-lag-kernel';
+
+/** Which inner-product kernel forms the series-level products: WebAssembly SIMD where the host has it, or JavaScript loops. */
+export type LagKernel = 'wasm' | 'js';
 
 /**
  * Largest amplification of rounding error the combination may carry. Measured on near-collinear
@@ -38,22 +43,36 @@ export class PairLagMoments {
   /** Per series s, P + 1 values from s * (P + 1): D_ss and L_ss; known[s] = 1 once formed. */
   private selfChanges = new Float64Array(0);
   private selfLevels = new Float64Array(0);
+  /** Per series, the sum of its centred level (zero up to rounding). */
+  private selfSums = new Float64Array(0);
   private known = new Uint8Array(0);
   private rowSeries = -1;
-  private changesI = new Float64Array(0);
-  private centredI = new Float64Array(0);
-  private changesJ = new Float64Array(0);
-  private centredJ = new Float64Array(0);
+  private changesI: Float64Array = new Float64Array(0);
+  private centredI: Float64Array = new Float64Array(0);
+  private changesJ: Float64Array = new Float64Array(0);
+  private centredJ: Float64Array = new Float64Array(0);
   /** D_ij, D_ji, L_ij (centred i against changes of j), L_ji of the pair last formed. */
   readonly ij = { changes: new Float64Array(0), levels: new Float64Array(0) };
   readonly ji = { changes: new Float64Array(0), levels: new Float64Array(0) };
   /** The combination of one direction (its row 0 of changes and of levels). */
-  private combined = { changes: new Float64Array(0), levels: new Float64Array(0) };
+  private combined: LagProducts = { changes: new Float64Array(0), levels: new Float64Array(0), sum: 0, sumSquares: 0, changeSquares: 0, levelTimesChange: 0 };
   private i = -1;
   private j = -1;
+  private arena: LagArena | null = null;
+  private readonly kernel: LagKernel;
 
   /** Directions tested from their residual because the combination would cancel too much. */
   fallbacks = 0;
+
+  /** `kernel`: 'wasm' (default) uses the SIMD kernel where the host runs it and the loops elsewhere; 'js' always the loops. */
+  constructor(kernel: LagKernel = 'wasm') {
+    this.kernel = kernel;
+  }
+
+  /** The kernel in use once a pair has been formed ('wasm' or 'js'). */
+  get kernelInUse(): LagKernel {
+    return this.arena ? 'wasm' : 'js';
+  }
 
   /** Ready for `universe` (complete series of `rows` rows) with P lags: the buffers and the per-series cache. */
   private prepare(universe: ScreenUniverse, P: number): void {
@@ -64,14 +83,17 @@ export class PairLagMoments {
     this.lags = P;
     this.selfChanges = new Float64Array(N * (P + 1));
     this.selfLevels = new Float64Array(N * (P + 1));
+    this.selfSums = new Float64Array(N);
     this.known = new Uint8Array(N);
     this.rowSeries = -1;
-    for (const name of ['changesI', 'centredI', 'changesJ', 'centredJ'] as const) this[name] = new Float64Array(rows);
+    this.arena = this.kernel === 'wasm' ? wasmLagArena(rows, P) : null;
+    const slots = this.arena?.slots ?? [0, 1, 2, 3].map(() => new Float64Array(rows));
+    [this.changesI, this.centredI, this.changesJ, this.centredJ] = [slots[SLOT.changesI], slots[SLOT.centredI], slots[SLOT.changesJ], slots[SLOT.centredJ]];
     for (const side of [this.ij, this.ji]) {
       side.changes = new Float64Array(P + 1);
       side.levels = new Float64Array(P + 1);
     }
-    this.combined = { changes: new Float64Array(P + 1), levels: new Float64Array(P + 1) };
+    this.combined = { changes: new Float64Array(P + 1), levels: new Float64Array(P + 1), sum: 0, sumSquares: 0, changeSquares: 0, levelTimesChange: 0 };
   }
 
   /** Changes and centred level of series s into the given buffers. */
@@ -86,15 +108,28 @@ export class PairLagMoments {
     centred[rows - 1] = data[at + rows - 1] - mean;
   }
 
-  /** D_ss and L_ss of series s (its changes and centred level given), formed on first use. */
-  private self(s: number, changes: Float64Array, centred: Float64Array): void {
+  /** D_ss and L_ss of series s, in slot `changes` and `centred` (series i's or j's), formed on first use. */
+  private self(s: number, changes: number, centred: number): void {
     if (this.known[s] === 1) return;
     const P = this.lags;
     const a = P;
     const b = this.universe!.rows - 2;
     const d = this.selfChanges.subarray(s * (P + 1), (s + 1) * (P + 1));
-    crossLagProducts(changes, changes, a, b, P, d, this.ij.changes); // D_ss twice over; the second copy is scratch
-    levelLagProducts(centred, changes, d, a, b, P, this.selfLevels.subarray(s * (P + 1), (s + 1) * (P + 1)));
+    const levels = this.selfLevels.subarray(s * (P + 1), (s + 1) * (P + 1));
+    const dx = changes === SLOT.changesI ? this.changesI : this.changesJ;
+    const level = centred === SLOT.centredI ? this.centredI : this.centredJ;
+    if (this.arena) {
+      this.arena.crossLagProducts(changes, changes, a, b, P);
+      d.set(this.arena.ij);
+      levels[0] = this.arena.dot(centred, changes, a, b);
+      shiftLevelProducts(level, dx, d, a, b, P, levels);
+    } else {
+      crossLagProducts(dx, dx, a, b, P, d, this.ij.changes); // D_ss twice over; the second copy is scratch
+      levelLagProducts(level, dx, d, a, b, P, levels);
+    }
+    let sum = 0;
+    for (let t = 0; t <= b + 1; t++) sum += level[t];
+    this.selfSums[s] = sum;
     this.known[s] = 1;
   }
 
@@ -105,24 +140,37 @@ export class PairLagMoments {
     const b = universe.rows - 2;
     if (this.rowSeries !== i) {
       PairLagMoments.fill(universe, i, this.changesI, this.centredI);
-      this.self(i, this.changesI, this.centredI);
+      this.self(i, SLOT.changesI, SLOT.centredI);
       this.rowSeries = i;
     }
     PairLagMoments.fill(universe, j, this.changesJ, this.centredJ);
-    this.self(j, this.changesJ, this.centredJ);
-    crossLagProducts(this.changesI, this.changesJ, a, b, P, this.ij.changes, this.ji.changes);
-    levelLagProducts(this.centredI, this.changesJ, this.ij.changes, a, b, P, this.ij.levels);
-    levelLagProducts(this.centredJ, this.changesI, this.ji.changes, a, b, P, this.ji.levels);
+    this.self(j, SLOT.changesJ, SLOT.centredJ);
+    const { arena } = this;
+    if (arena) {
+      arena.crossLagProducts(SLOT.changesI, SLOT.changesJ, a, b, P);
+      this.ij.changes.set(arena.ij);
+      this.ji.changes.set(arena.ji);
+      this.ij.levels[0] = arena.dot(SLOT.centredI, SLOT.changesJ, a, b);
+      this.ji.levels[0] = arena.dot(SLOT.centredJ, SLOT.changesI, a, b);
+      shiftLevelProducts(this.centredI, this.changesJ, this.ij.changes, a, b, P, this.ij.levels);
+      shiftLevelProducts(this.centredJ, this.changesI, this.ji.changes, a, b, P, this.ji.levels);
+    } else {
+      crossLagProducts(this.changesI, this.changesJ, a, b, P, this.ij.changes, this.ji.changes);
+      levelLagProducts(this.centredI, this.changesJ, this.ij.changes, a, b, P, this.ij.levels);
+      levelLagProducts(this.centredJ, this.changesI, this.ji.changes, a, b, P, this.ji.levels);
+    }
     this.i = i;
     this.j = j;
   }
 
   /**
-   * Row 0 of the residual's products for the direction y on x with slope beta (y, x the pair
-   * last formed, in either order; rSquared of the pair), or null when the combination would
-   * cancel past CANCELLATION_LIMIT (then test the residual itself).
+   * The residual's products for the direction y on x with slope beta (y, x the pair last formed,
+   * in either order; rSquared of the pair), and its first and last P + 1 rows written into `u`
+   * (the refit needs them); or null when the combination would cancel past CANCELLATION_LIMIT
+   * (then test the residual itself). The sum of squares of the levels, whose cancellation is the
+   * square of theirs, is taken from the residual directly, row by row as the per-pair path does.
    */
-  direction(y: number, x: number, beta: number, rSquared: number): { changes: Float64Array; levels: Float64Array } | null {
+  direction(y: number, x: number, beta: number, rSquared: number, u: Float64Array): LagProducts | null {
     const P = this.lags;
     const forward = y === this.i && x === this.j;
     if (!forward && !(y === this.j && x === this.i)) throw new RangeError(`Pair (${y}, ${x}) was not formed.`);
@@ -131,7 +179,8 @@ export class PairLagMoments {
     const yy = y * (P + 1);
     const xx = x * (P + 1);
     const { selfChanges: sc, selfLevels: sl } = this;
-    const { changes, levels } = this.combined;
+    const combined = this.combined;
+    const { changes, levels } = combined;
     const b2 = beta * beta;
     for (let k = 0; k <= P; k++) {
       changes[k] = sc[yy + k] - beta * (yx.changes[k] + xy.changes[k]) + b2 * sc[xx + k];
@@ -145,6 +194,27 @@ export class PairLagMoments {
       this.fallbacks++;
       return null;
     }
-    return this.combined;
+    const yc = forward ? this.centredI : this.centredJ;
+    const xc = forward ? this.centredJ : this.centredI;
+    const T = this.universe!.rows;
+    let squares = 0;
+    for (let t = 0; t < T; t++) {
+      const v = yc[t] - beta * xc[t];
+      squares += v * v;
+    }
+    for (let t = 0; t <= P; t++) u[t] = yc[t] - beta * xc[t];
+    for (let t = Math.max(P + 1, T - 1 - P); t < T; t++) u[t] = yc[t] - beta * xc[t];
+    let changeSquares = changes[0];
+    let levelTimesChange = levels[0];
+    for (let t = 0; t < P; t++) {
+      const d = u[t + 1] - u[t];
+      changeSquares += d * d;
+      levelTimesChange += u[t] * d;
+    }
+    combined.sum = this.selfSums[y] - beta * this.selfSums[x];
+    combined.sumSquares = squares;
+    combined.changeSquares = changeSquares;
+    combined.levelTimesChange = levelTimesChange;
+    return combined;
   }
 }
