@@ -18,6 +18,8 @@ type Range = unknown[][];
 /** How each function is called: with a y-like range and an x-like range (blocks put both side by side). */
 const CALLS: Record<string, (y: Range, x: Range) => unknown> = {
   ADF: (y) => moor.adf(y, null, null, 'all'),
+  GLSROOT: (y) => moor.glsroot(y, null, null, 'all'),
+  MSTATS: (y) => moor.mstats(y, null, null, 'all'),
   KPSS: (y) => moor.kpss(y, null, null, 'all'),
   PHILLIPSPERRON: (y) => moor.phillipsperron(y, null, null, 'all'),
   ORDER: (y) => moor.order(y),
@@ -57,7 +59,8 @@ function withCell(values: readonly number[], index: number, cell: unknown): unkn
 }
 
 it('covers every registered function that reads a range', () => {
-  const registered = Object.keys(moor).map((k) => k.toUpperCase()).filter((k) => !['VERSION', 'CRIT'].includes(k));
+  // COMMONDATES reads dated ranges (a date column first) and has its own tests (tests/functions/common-dates.test.ts).
+  const registered = Object.keys(moor).map((k) => k.toUpperCase()).filter((k) => !['VERSION', 'CRIT', 'COMMONDATES'].includes(k));
   expect(Object.keys(CALLS).sort()).toEqual(registered.sort());
 });
 
@@ -83,7 +86,7 @@ for (const [name, call] of Object.entries(CALLS)) {
     }
 
     const inside = 36;
-    const where = name === 'GRANGER' ? 'effect row 37 of its range' : ['JOHANSEN', 'RANK', 'VARLAGS', 'SCREEN', 'AHEAD', 'RELATIONIS', 'ADJUSTS'].includes(name) ? 'series 1 row 37 of its range' : /^(ADF|KPSS|PHILLIPSPERRON|ORDER)$/.test(name) ? 'the series row 37 of its range' : 'y row 37 of its range';
+    const where = name === 'GRANGER' ? 'effect row 37 of its range' : ['JOHANSEN', 'RANK', 'VARLAGS', 'SCREEN', 'AHEAD', 'RELATIONIS', 'ADJUSTS'].includes(name) ? 'series 1 row 37 of its range' : /^(ADF|KPSS|PHILLIPSPERRON|ORDER|GLSROOT|MSTATS)$/.test(name) ? 'the series row 37 of its range' : 'y row 37 of its range';
     const cases: [string, unknown, RegExp][] = [
       ['text', 'n/a', /is text 'n\/a'/],
       ['a blank as ""', '', /is blank/],
