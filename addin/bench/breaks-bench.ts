@@ -26,3 +26,10 @@ export function benchBreaks(): Timing[] {
   out.push(timeIt('Gregory-Hansen (level), AIC lags at each date, n = 600', () => gregoryHansenTest(y, [x], { model: 'level', lagTiming: 'each-date' }), { runs: 10, warmup: 2 }));
   return out;
 }
+
+/** The 2,500-point walk the Zivot-Andrews timings use (same seed and draws as benchBreaks). */
+export function breaksBenchWalk(): Float64Array {
+  const rng = new SeededRandom(12);
+  randomWalk(rng, 1000, { start: 100 });
+  return randomWalk(rng, 2500, { start: 100 });
+}

@@ -12,14 +12,23 @@ import { timeIt, type Timing } from './timing';
 
 /** Timings of the lead-lag tests and the VAR order search (median and fastest of repeated runs). */
 export function benchCausality(): Timing[] {
-  const rng = new SeededRandom(17);
-  const leader = randomWalk(rng, 2_500, { start: 100 });
-  const follower = leader.map((v, i) => (i === 0 ? v : 0.5 * leader[i - 1] + 0.5 * v) + rng.normal());
+  const { leader, follower } = causalityBenchPair();
   return [
     timeIt('Granger F, 4 lags, n = 2,500', () => grangerF(leader, follower, { lags: 4 })),
+    timeIt('Granger F at lags 1, 2, 3 and 4 on the values, n = 2,500', () => {
+      for (let p = 1; p <= 4; p++) grangerF(leader, follower, { lags: p });
+    }),
     timeIt('Toda-Yamamoto, p = 4, dmax = 1 given, n = 2,500', () => todaYamamoto(leader, follower, { lags: 4, extraLags: 1 })),
     timeIt('Toda-Yamamoto, p = 4, dmax from ADF and KPSS, n = 2,500', () => todaYamamoto(leader, follower, { lags: 4 }), { runs: 10, warmup: 2 }),
     timeIt('VAR lag order, 2 series, default ceiling (27), n = 2,500', () => chooseVarLags([leader, follower]), { runs: 100, warmup: 40 }),
     timeIt('VAR lag order by the QR path, 2 series, default ceiling (27), n = 2,500', () => chooseVarLags([leader, follower], { method: 'qr' }), { runs: 30, warmup: 30 }),
   ];
+}
+
+/** The seeded 2,500-row pair of the lead-lag benchmarks (a random walk and a noisy follower). */
+export function causalityBenchPair(): { leader: Float64Array; follower: Float64Array } {
+  const rng = new SeededRandom(17);
+  const leader = randomWalk(rng, 2_500, { start: 100 });
+  const follower = leader.map((v, i) => (i === 0 ? v : 0.5 * leader[i - 1] + 0.5 * v) + rng.normal());
+  return { leader, follower };
 }

@@ -2,7 +2,8 @@
 benchmark hands it, so `npm run bench` can print the ratio of our time to its time.
 
 Input: a JSON file {"adf": [[...series...]], "coint": [[y, x], ...], "johansen": [[[...], ...]],
-"kalman": [[y, x]], "vecm": [[[...], ...]]}.
+"kalman": [[y, x]], "vecm": [[[...], ...]], "kpss": [[...]], "granger": [[cause, effect]],
+"zivotAndrews": [[...]]}.
 Output: one JSON object on stdout with the median milliseconds per call of each routine.
 Only the benchmark runs this; tests and CI never do.
 """
@@ -12,7 +13,8 @@ import time
 import warnings
 
 import numpy as np
-from statsmodels.tsa.stattools import adfuller, coint
+from statsmodels.tsa.api import VAR
+from statsmodels.tsa.stattools import adfuller, coint, grangercausalitytests, kpss, zivot_andrews
 from statsmodels.tsa.statespace.mlemodel import MLEModel
 from statsmodels.tsa.vector_ar.vecm import VECM, coint_johansen
 
@@ -81,6 +83,17 @@ def main():
         # Fit and forecast, as vecmForecast does: K = 2, rank 1, constant outside ("co"), 20 steps.
         out["vecmForecastMs"] = median_ms(
             lambda: VECM(block, k_ar_diff=2, coint_rank=1, deterministic="co").fit().predict(steps=20, alpha=0.05), 10)
+    if spec.get("kpss"):
+        x = np.asarray(spec["kpss"][0])
+        out["kpssAutoMs"] = median_ms(lambda: kpss(x, regression="c", nlags="auto"), 30)
+    if spec.get("granger"):
+        cause, effect = (np.asarray(v) for v in spec["granger"][0])
+        data = np.column_stack([effect, cause])
+        out["grangerLags1to4Ms"] = median_ms(lambda: grangercausalitytests(data, maxlag=4, verbose=False), 10)
+        out["varOrderMs"] = median_ms(lambda: VAR(np.column_stack([cause, effect])).select_order(maxlags=27), 10)
+    if spec.get("zivotAndrews"):
+        x = np.asarray(spec["zivotAndrews"][0])
+        out["zivotAndrewsMs"] = median_ms(lambda: zivot_andrews(x, trim=0.15, regression="c", autolag="AIC"), 3)
     print(json.dumps(out))
 
 
