@@ -18,12 +18,16 @@
  * holds when the main thread is done is run again by the main thread after a short wait (see
  * below), and any chunk is after `patienceMs` without progress.
  *
+ * The workers stay in a pool between screens (pooledWorkers): the orders of integration
+ * (withSeriesOrdersInThreads) and the pairs run on the same warm workers.
+ *
  * Worker is imported from 'worker_threads', not 'node:worker_threads': webpack 5.112 mangles
  * the worker chunk's constructor call for the prefixed name.
  */
 import { availableParallelism } from 'node:os';
 import { MessageChannel, Worker, receiveMessageOnPort, type MessagePort } from 'worker_threads';
-import { batchRecords, drainBatch, finishedChunks, batchChunks, screenJob, startBatch, stopJob, threadScratch, waitForChunks, BATCH_BYTES } from './chunk-queue';
+import { batchRecords, drainBatch, finishedChunks, batchChunks, screenJob, startBatch, stopJob, threadScratch, waitForChunks, BATCH_BYTES, type ScreenJob } from './chunk-queue';
+import { drainOrders, finishOrders, ordersFinished, ordersJob, ordersOf, waitForOrders, type OrdersJob } from './orders-queue';
 import { RECORD_SIZE } from './pair-record';
 import { PairWorkspace } from './pair-relation';
 import { screenChunkInto } from './screen-chunk';
@@ -103,6 +107,91 @@ function sharedUniverse(universe: ScreenUniverse): ScreenUniverse {
   };
 }
 
+/**
+ * Worker threads kept from screen to screen (one pool per worker file): a process pays for
+ * starting a worker and warming its compiler once, and the orders and the pairs of one screen
+ * run on the same workers. The workers are unref'd, so they never keep a process alive; one that
+ * fails or exits leaves the pool.
+ */
+const pools = new Map<string, Worker[]>();
+
+function pooledWorkers(count: number, workerFile: string | URL | undefined, errors: string[]): Worker[] {
+  const key = workerFile === undefined ? '' : String(workerFile);
+  const pool = pools.get(key) ?? [];
+  pools.set(key, pool);
+  const drop = (worker: Worker) => {
+    const at = pool.indexOf(worker);
+    if (at >= 0) pool.splice(at, 1);
+  };
+  while (pool.length < count) {
+    try {
+      const worker = workerFile === undefined
+        ? new Worker(/* webpackChunkName: "screen-worker" */ new URL('./screen-worker.ts', import.meta.url))
+        : new Worker(workerFile);
+      worker.on('error', () => drop(worker)); // a worker that fails leaves its work to the others
+      worker.on('exit', () => drop(worker));
+      worker.unref();
+      pool.push(worker);
+    } catch (e) {
+      errors.push(e instanceof Error ? e.message : String(e));
+      break;
+    }
+  }
+  return pool.slice(0, count);
+}
+
+/** Hands a job to pooled workers, each with a port of its own for errors; returns the main thread's ends. */
+function postJob(workers: readonly Worker[], kind: 'orders' | 'pairs', job: ScreenJob | OrdersJob): MessagePort[] {
+  return workers.map((worker) => {
+    const { port1, port2 } = new MessageChannel();
+    worker.postMessage({ kind, job, port: port2 }, [port2]);
+    return port1;
+  });
+}
+
+/**
+ * Series times rows of orders of integration that earn each thread beyond the first: 100,000,
+ * about 40 series of 2,500 rows or a fifth of a second of one thread's work (three ADF and three
+ * KPSS tests a series).
+ */
+export const ORDER_WORK_PER_THREAD = 100_000;
+
+/**
+ * withSeriesOrders on several threads (orders-queue.ts): the same orders, decided by the pooled
+ * workers and the main thread together. The pair screen then finds the workers started and warm.
+ */
+export function withSeriesOrdersInThreads(universe: ScreenUniverse, settings: ScreenSettings, threading: ThreadOptions = {}): ScreenUniverse {
+  const N = universe.names.length;
+  const requested = threadsFor(1, universe.rows, threading).requested;
+  const threads = Math.max(1, Math.min(requested, N, Math.floor((N * universe.rows) / ORDER_WORK_PER_THREAD) + 1));
+  if (threads === 1) return withSeriesOrders(universe, settings);
+  const job = ordersJob(sharedUniverse(universe), settings);
+  const errors: string[] = [];
+  const ports = postJob(pooledWorkers(threads - 1, threading.workerFile, errors), 'orders', job);
+  const patience = threading.patienceMs ?? 60_000;
+  try {
+    drainOrders(job);
+    let done = ordersFinished(job);
+    let since = performance.now();
+    while (done < N) {
+      waitForOrders(job, done, 50);
+      const failed = readErrors(ports, errors);
+      const now = ordersFinished(job);
+      if (now !== done) {
+        done = now;
+        since = performance.now();
+      } else if (failed || performance.now() - since > patience) {
+        finishOrders(job); // a series a worker took but never finished is decided here
+        break;
+      }
+    }
+  } finally {
+    readErrors(ports, errors);
+    for (const port of ports) port.close();
+  }
+  return { ...universe, orders: ordersOf(job) };
+}
+
 /** Threads worth starting for `pairs` pairs of `rows` rows (see WORK_PER_THREAD), or a refusal of a bad count. */
 export function threadsFor(pairs: number, rows: number, threading: ThreadOptions): { threads: number; requested: number } {
   const requested = threading.threads ?? Math.min(availableParallelism(), 16);
@@ -142,22 +231,8 @@ export function screenRecordsInThreads(
   }
   const job = screenJob(sharedUniverse(universe), settings, threads, Math.min(batchPairs, end - first));
   const errors: string[] = [];
-  const workers: Worker[] = [];
-  const ports: MessagePort[] = [];
-  for (let w = 0; w < threads - 1; w++) {
-    try {
-      const { port1, port2 } = new MessageChannel();
-      const worker = threading.workerFile === undefined
-        ? new Worker(/* webpackChunkName: "screen-worker" */ new URL('./screen-worker.ts', import.meta.url), { workerData: { job, port: port2 }, transferList: [port2] })
-        : new Worker(threading.workerFile, { workerData: { job, port: port2 }, transferList: [port2] });
-      worker.on('error', () => undefined); // a worker that fails to start leaves its chunks to the others
-      worker.unref();
-      workers.push(worker);
-      ports.push(port1);
-    } catch (e) {
-      errors.push(e instanceof Error ? e.message : String(e));
-    }
-  }
+  const workers = pooledWorkers(threads - 1, threading.workerFile, errors);
+  const ports = postJob(workers, 'pairs', job);
   const joins = threading.mainThreadJoins !== false || workers.length === 0;
   const patience = threading.patienceMs ?? 60_000;
   const scratch = threadScratch(job);
@@ -205,7 +280,6 @@ export function screenRecordsInThreads(
     stopJob(job);
     readErrors(ports, errors);
     for (const port of ports) port.close();
-    for (const worker of workers) void worker.terminate();
   }
   const report: ThreadReport = { threads, workersStarted: workers.length, chunksOnMainThread, chunksRetaken, chunks, batches };
   if (threads < requested) report.note = `${requested} threads were asked for; ${end - first} pairs of ${universe.rows} rows keep ${threads} busy.`;
@@ -221,9 +295,10 @@ export function screenRecordsInThreads(
  */
 export function screenPairsInThreads(series: readonly NamedSeries[], options: ScreenOptions = {}, threading: ThreadOptions = {}): { result: ScreenResult; report: ThreadReport } {
   const settings = resolveScreenOptions(options);
-  const universe = withSeriesOrders(screenUniverse(series), settings);
+  const plain = screenUniverse(series);
+  threadsFor(unorderedPairCount(plain.names.length), plain.rows, threading);
+  const universe = withSeriesOrdersInThreads(plain, settings, threading);
   const total = unorderedPairCount(universe.names.length);
-  threadsFor(total, universe.rows, threading);
   const records = new Float64Array(2 * total * RECORD_SIZE);
   const report = screenRecordsInThreads(universe, settings, 0, total, threading, (from, batch) => records.set(batch, 2 * from * RECORD_SIZE));
   return { result: finishScreen(universe, settings, records), report };

@@ -65,18 +65,22 @@ function doesNotMove(values: Float64Array): boolean {
 
 /** Each series' order of integration (see the file comment); a series the routine refuses gets a null order and the reason. */
 export function seriesOrders(universe: ScreenUniverse, settings: Pick<ScreenSettings, 'alpha'>): SeriesOrder[] {
-  return universe.names.map((name, j) => {
-    const values = valuesOf(universe, j);
-    if (doesNotMove(values)) return { name, order: null, orderText: null, agree: null, note: `${name} does not move` };
-    try {
-      const result = integrationOrder(values, { alpha: settings.alpha, deterministic: ORDER_DETERMINISTIC }, name);
-      const order = orderNumber(result.order);
-      return { name, order, orderText: orderText(order), agree: result.agree, note: null };
-    } catch (e) {
-      if (!isMooringInputError(e)) throw e;
-      return { name, order: null, orderText: null, agree: null, note: e.message.replace(/\.$/, '') };
-    }
-  });
+  return universe.names.map((_, j) => seriesOrder(universe, settings, j));
+}
+
+/** The order of series j alone (seriesOrders is this for every j; threads share the series out by it). */
+export function seriesOrder(universe: ScreenUniverse, settings: Pick<ScreenSettings, 'alpha'>, j: number): SeriesOrder {
+  const name = universe.names[j];
+  const values = valuesOf(universe, j);
+  if (doesNotMove(values)) return { name, order: null, orderText: null, agree: null, note: `${name} does not move` };
+  try {
+    const result = integrationOrder(values, { alpha: settings.alpha, deterministic: ORDER_DETERMINISTIC }, name);
+    const order = orderNumber(result.order);
+    return { name, order, orderText: orderText(order), agree: result.agree, note: null };
+  } catch (e) {
+    if (!isMooringInputError(e)) throw e;
+    return { name, order: null, orderText: null, agree: null, note: e.message.replace(/\.$/, '') };
+  }
 }
 
 /** The universe with each series' order attached, for the chunk function to skip the pairs it sets aside. */

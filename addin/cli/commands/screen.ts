@@ -13,12 +13,11 @@ import { csvSeries, seriesNames } from '../../csv/csv-series';
 import type { CsvTable } from '../../csv/read-csv';
 import { MooringInputError } from '../../errors';
 import { RECORD_SIZE } from '../../screen/pair-record';
-import { screenRecordsInThreads, type ThreadReport } from '../../screen/parallel-node';
+import { screenRecordsInThreads, withSeriesOrdersInThreads, type ThreadReport } from '../../screen/parallel-node';
 import type { NamedSeries } from '../../screen/screen-pairs';
 import { resolveScreenOptions, type ScreenSettings } from '../../screen/screen-options';
 import { ScreenTally } from '../../screen/screen-tally';
 import { screenUniverse, unorderedPairCount, type ScreenUniverse } from '../../screen/screen-universe';
-import { withSeriesOrders } from '../../screen/series-orders';
 import { decimalTextValue } from '../../series/cell-kinds';
 import type { Command, CommandContext, CommandOutput } from '../command';
 import { choiceValue, levelValue, wholeNumberValue } from '../option-values';
@@ -183,7 +182,7 @@ export const screenCommand: Command = {
     const rows = context.table.lines.length;
     requireScreenMemory({ series: series.length, rows, top, part: part !== undefined });
     const settings = resolveScreenOptions({ alpha, minHalfLife, maxHalfLife, minObservations, johansen: context.args.switches.has('johansen'), ...lagChoice });
-    const universe = withSeriesOrders(screenUniverse(series), settings);
+    const universe = withSeriesOrdersInThreads(screenUniverse(series), settings, { threads });
     series.length = 0; // the packed universe holds the numbers now
     const source = screenSource(context, leftOut);
     if (part) return runPart(universe, settings, source, part, out as string, threads);
