@@ -143,14 +143,16 @@ const CSV_COLUMNS = [
   'beta', 'intercept', 'halfLife', 'zscore', 'lags', 'nobs', 'lastLine', 'lastDate', 'rSquared', 'johansenRank', 'reason',
 ] as const;
 
-/** A CSV field: text made safe for a terminal, quoted when it holds a comma or a quote. */
+/** A CSV field: text made safe for a terminal, quoted when it holds a comma or a quote; numbers in full; none as empty. */
 function csvField(v: unknown): string {
   if (v === null || v === undefined) return '';
-  const t = terminalText(String(v), true);
-  return /[",]/.test(t) ? `"${t.replace(/"/g, '""')}"` : t;
+  if (typeof v === 'number') return Number.isFinite(v) ? String(v) : '';
+  if (typeof v !== 'string') return String(v);
+  const t = terminalText(v, true);
+  return t.includes(',') || t.includes('"') ? `"${t.replace(/"/g, '""')}"` : t;
 }
 
-/** One directed pair as a row of the stream: every pair, tested or not. */
+/** One directed pair as a row of the stream: every pair, tested or not (one object, its fields in the order of CSV_COLUMNS). */
 function pairRow(
   a: ScreenAnswer, records: Float64Array, r: number, yi: number, xi: number, orders: readonly SeriesOrder[], settings: ScreenSettings,
 ): Record<string, unknown> {
@@ -159,8 +161,15 @@ function pairRow(
   const { names } = a.summary;
   if (isTested(status)) {
     const p = decodePair(names, records, r, yi, xi, a.adjustment.adjusted(records[base + FIELD.pValue]), settings, orders, a.scales);
-    const { note, ...rest } = withRow(p, a.source);
-    return { ...rest, status: 'tested', inHalfLifeRange: halfLifeInRange(records[base + FIELD.halfLife], settings), reason: note ?? null };
+    const row: Record<string, unknown> = {
+      y: p.y, x: p.x, status: 'tested', orderY: p.orderY, orderX: p.orderX, statistic: p.statistic, pValue: p.pValue,
+      adjustedPValue: p.adjustedPValue, discovery: p.discovery, inHalfLifeRange: halfLifeInRange(records[base + FIELD.halfLife], settings),
+      beta: p.beta, intercept: p.intercept, halfLife: p.halfLife, zscore: p.zscore, lags: p.lags, nobs: p.nobs, lastRow: p.lastRow,
+      lastLine: a.source.lines[p.lastRow], lastDate: a.source.dates?.[p.lastRow]?.trim() || null, rSquared: p.rSquared,
+    };
+    if (settings.johansen) row.johansenRank = p.johansenRank;
+    row.reason = p.note ?? null;
+    return row;
   }
   const reason = status === PAIR_STATUS.setAside
     ? setAsideReason(orders[yi], orders[xi])
@@ -186,7 +195,7 @@ function streamPairs(a: ScreenAnswer, format: StreamFormat, write: (s: string) =
   const line = (row: Record<string, unknown>) =>
     format === 'jsonl'
       ? `${jsonText(JSON.stringify({ kind: 'pair', ...row }, finite))}\n`
-      : `${CSV_COLUMNS.map((c) => csvField(typeof row[c] === 'number' && !Number.isFinite(row[c]) ? null : row[c])).join(',')}\n`;
+      : `${CSV_COLUMNS.map((c) => csvField(row[c])).join(',')}\n`;
   a.records((first, records) => {
     const count = records.length / (2 * RECORD_SIZE);
     let [i, j] = unorderedPairAt(first, N);
