@@ -31,6 +31,12 @@ export interface DickeyFullerGram {
   responseScale: number;
   /** The lagged level was divided by this (after its shift); a level coefficient times responseScale / levelScale is in the data's units. */
   levelScale: number;
+  /** The lagged level after its shift and scaling (all T values); row t of the design reads level[t]. */
+  level: Float64Array;
+  /** The changes after their shift and scaling (T - 1 values); the response of row t is dx[t], lag i is dx[t - i]. */
+  dx: Float64Array;
+  /** First row of the common sample (pmax); rows run a .. a + n - 1. */
+  start: number;
 }
 
 export function dickeyFullerGram(x: ArrayLike<number>, deterministic: Deterministic, pmax: number): DickeyFullerGram {
@@ -123,7 +129,7 @@ export function dickeyFullerGram(x: ArrayLike<number>, deterministic: Determinis
       set(2, lagCol(j), s);
     }
   }
-  return { xtx, xty, yty: gd[0], k, n, responseScale, levelScale };
+  return { xtx, xty, yty: gd[0], k, n, responseScale, levelScale, level, dx, start: a };
 }
 
 /** Removes the mean (const) or least-squares line (trend), scales to unit root-mean-square, returns the scale. */

@@ -3,7 +3,8 @@
  * fit of the same regression (adf-regression.ts), on seeded series of the kinds the integration
  * order meets: a price (random walk), its changes (noise), its second changes (over-differenced,
  * the lags strongly tied), a stationary AR(1), each with none, const and trend terms. Tolerance
- * 1e-12 relative. Near-collinear designs must be declined (null), so the caller uses QR.
+ * 1e-12 relative. Strongly tied lags go through the refined route and must match too;
+ * designs that are near-collinear in double precision must be declined (null), so the caller uses QR.
  */
 import { describe, expect, it } from 'vitest';
 import { SeededRandom, autoregressive1, randomWalk } from '../../addin/random';
@@ -38,10 +39,23 @@ describe('ADF tau from cross products equals the QR fit', () => {
     }
   }
 
-  it('second changes (over-differenced: the lagged changes strongly tied) are declined, where cross products lose about 1e-10', () => {
-    const second = difference(difference(walk));
-    for (const deterministic of ['none', 'const', 'trend'] as Deterministic[]) expect(adfTauByGram(second, 30, deterministic)).toBeNull();
-  });
+  // Second changes of a price (over-differenced: the lagged changes strongly tied). The plain
+  // cross products lose about 1e-10 here; the refined route (residuals from the data) must match
+  // QR where it answers, and answer with 30 lags.
+  const second = difference(difference(walk));
+  for (const lags of [30, 60, 120]) {
+    for (const deterministic of ['none', 'const', 'trend'] as Deterministic[]) {
+      it(`second changes, ${lags} tied lags, ${deterministic}: refined from the residuals, tau and gamma to 1e-12 (or declined)`, () => {
+        const fast = adfTauByGram(second, lags, deterministic);
+        const qr = adfRegression(second, lags, deterministic);
+        if (lags === 30) expect(fast).not.toBeNull();
+        if (fast === null) return;
+        expect(fast.nobs).toBe(qr.nobs);
+        expect(Math.abs(fast.tau - qr.tau) / Math.abs(qr.tau)).toBeLessThan(1e-12);
+        expect(Math.abs(fast.gamma - qr.gamma) / Math.abs(qr.gamma)).toBeLessThan(1e-12);
+      });
+    }
+  }
 
   it('a smooth curve with tiny noise (lagged changes nearly collinear) is declined', () => {
     const r = new SeededRandom(3);
