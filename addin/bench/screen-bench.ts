@@ -13,11 +13,16 @@
  * - Rolling relation, 2,500 rows, windows of 250 every row (2,251 residual ADF searches).
  */
 import { execFileSync } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { SeededRandom, autoregressive1, randomWalk } from '../random';
-import { screenPairsInThreads, type ThreadReport } from '../screen/parallel-node';
+import { PairWorkspace } from '../screen/pair-relation';
+import { RECORD_SIZE } from '../screen/pair-record';
+import { screenChunkInto } from '../screen/screen-chunk';
+import { resolveScreenOptions } from '../screen/screen-options';
+import { screenUniverse, unorderedPairCount } from '../screen/screen-universe';
+import { screenPairsInThreads, screenRecordsInThreads, withSeriesOrdersInThreads, type ThreadReport } from '../screen/parallel-node';
 import { screenPairs, directedSeries } from '../screen/screen-pairs';
 import { rollingRelation } from '../stability/rolling-relation';
 import { timeIt, type Timing } from './timing';
@@ -32,6 +37,92 @@ export interface ScreenTiming extends Timing {
   targetPeakRssMb?: number;
   heapUsedMb?: number;
   reference?: Record<string, unknown>;
+  /** Microseconds per directed pair per core (pair timings). */
+  usPerDirectedPairPerCore?: number;
+  /** Share of the machine's CPU time busy during the timing, all processes (from /proc/stat; null where unreadable). */
+  machineBusy?: number | null;
+  /** One thread's median over this one's (thread timings), and the goal 0.8 x threads. */
+  speedUp?: number;
+  speedUpGoal?: number;
+}
+
+/** Busy share of all cores between two readings of /proc/stat's first line (null off Linux). */
+function cpuTicks(): number[] | null {
+  try {
+    return readFileSync('/proc/stat', 'utf8').split('\n')[0].trim().split(/\s+/).slice(1).map(Number);
+  } catch {
+    return null;
+  }
+}
+function busyShare(before: number[] | null, after: number[] | null): number | null {
+  if (!before || !after) return null;
+  const d = after.map((v, i) => v - before[i]);
+  const total = d.reduce((a, b) => a + b, 0);
+  return total > 0 ? Math.round((1 - (d[3] + d[4]) / total) * 100) / 100 : null;
+}
+
+/**
+ * The batched pair kernel and the threads (issue targets: the pairs of 100 series x 2,520 rows in
+ * about 210 ms, some 20-25 us per directed pair per core; k threads at least 0.8 k times one).
+ * The orders of integration are timed apart from the pairs; the pairs on one thread by the
+ * per-pair path (the reference), the batched path with JavaScript loops and with the SIMD kernel;
+ * then the whole screen (orders and pairs) on one thread and on every core, interleaved, with how
+ * busy the machine was (other processes count: compare only runs on an idle machine).
+ */
+export function benchPairKernel(series: { name: string; values: Float64Array }[], cores: number): ScreenTiming[] {
+  const settings = resolveScreenOptions({});
+  const plain = screenUniverse(series);
+  const total = unorderedPairCount(plain.names.length);
+  const directed = 2 * total;
+  const out: ScreenTiming[] = [];
+  const orders = (threads: number) => withSeriesOrdersInThreads(screenUniverse(series), settings, { threads });
+  for (const threads of [1, cores]) {
+    const t = timeIt(`Orders of integration, ${series.length} series x ${plain.rows} rows, ${threads} thread${threads === 1 ? '' : 's'}`, () => orders(threads), { runs: 3, warmup: 1 });
+    out.push({ ...t, ms: t.medianMs });
+  }
+  const universe = orders(cores);
+  const records = new Float64Array(directed * RECORD_SIZE);
+  for (const [label, options] of [
+    ['per-pair path (reference)', { products: 'per-pair' }],
+    ['batched, JavaScript loops', { kernel: 'js' }],
+    ['batched, WebAssembly SIMD', {}],
+  ] as const) {
+    const workspace = new PairWorkspace(universe.rows, options);
+    const t = timeIt(`Pairs of ${series.length} series x ${universe.rows} rows (${directed} directed), one thread, ${label}`, () => screenChunkInto(universe, settings, 0, total, records, 0, workspace), { runs: 5, warmup: 1 });
+    out.push({ ...t, ms: t.medianMs, usPerDirectedPairPerCore: Math.round((t.medianMs * 1000) / directed * 10) / 10 });
+  }
+  const before = cpuTicks();
+  const t = timeIt(`Pairs of ${series.length} series x ${universe.rows} rows, ${cores} threads (batched, SIMD)`, () => screenRecordsInThreads(universe, settings, 0, total, { threads: cores }, () => undefined), { runs: 5, warmup: 1, targetMs: 210 });
+  out.push({ ...t, ms: t.medianMs, usPerDirectedPairPerCore: Math.round((t.medianMs * 1000 * cores) / directed * 10) / 10, machineBusy: busyShare(before, cpuTicks()) });
+  // The whole screen on one thread and on every core, interleaved so both see the same machine.
+  const whole = (threads: number) => {
+    const u = orders(threads);
+    screenRecordsInThreads(u, settings, 0, total, { threads }, () => undefined);
+  };
+  whole(1);
+  whole(cores);
+  const times: Record<number, number[]> = { 1: [], [cores]: [] };
+  const start = cpuTicks();
+  for (let r = 0; r < 5; r++) {
+    for (const threads of [1, cores]) {
+      const t0 = performance.now();
+      whole(threads);
+      times[threads].push(performance.now() - t0);
+    }
+  }
+  const busy = busyShare(start, cpuTicks());
+  const median = (a: number[]) => [...a].sort((x, y) => x - y)[Math.floor(a.length / 2)];
+  for (const threads of [1, cores]) {
+    const m = median(times[threads]);
+    const entry: ScreenTiming = { name: `Whole screen (orders and pairs), ${series.length} series x ${universe.rows} rows, ${threads} thread${threads === 1 ? '' : 's'}, interleaved`, medianMs: Math.round(m), minMs: Math.round(Math.min(...times[threads])), runs: 5, ms: Math.round(m), machineBusy: busy };
+    if (threads > 1) {
+      entry.speedUp = Math.round((median(times[1]) / m) * 100) / 100;
+      entry.speedUpGoal = 0.8 * threads;
+      entry.withinTarget = entry.speedUp >= entry.speedUpGoal;
+    }
+    out.push(entry);
+  }
+  return out;
 }
 
 /** Seeded universe: `clusters` triples sharing a trend, then independent walks, to n series of T rows. */
@@ -98,6 +189,8 @@ export function benchScreen(): ScreenTiming[] {
     peakRssMb, targetPeakRssMb: 300, heapUsedMb: Math.round(process.memoryUsage().heapUsed / 2 ** 20),
     withinTarget: t100.withinTarget === true && peakRssMb < 300,
   });
+
+  out.push(...benchPairKernel(hundred, cores));
 
   const [y, x] = [fifty[0].values, fifty[1].values];
   const roll = timeIt('Rolling relation, 2,500 rows, window 250, every row (2,251 windows)', () => rollingRelation(y, x, { window: 250 }), { runs: 5, warmup: 1 });
