@@ -92,3 +92,22 @@ export function dot(c: usize, d: usize, a: i32, b: i32): f64 {
   if (pairsEnd <= b) total += load<f64>(c + (<usize>b << 3)) * load<f64>(d + (<usize>b << 3));
   return total;
 }
+
+/** sum_{t=0}^{n-1} (y[t] - beta x[t])^2, the residual's sum of squares from two centred levels, two rows per instruction. */
+export function residualSquares(y: usize, x: usize, beta: f64, n: i32): f64 {
+  const pairsEnd = n & ~1;
+  const b = f64x2.splat(beta);
+  let s = f64x2.splat(0);
+  for (let t = 0; t < pairsEnd; t += 2) {
+    const at = <usize>t << 3;
+    const v = f64x2.sub(v128.load(y + at), f64x2.mul(b, v128.load(x + at)));
+    s = f64x2.add(s, f64x2.mul(v, v));
+  }
+  let total = sum2(s);
+  if (pairsEnd < n) {
+    const at = <usize>(n - 1) << 3;
+    const v = load<f64>(y + at) - beta * load<f64>(x + at);
+    total += v * v;
+  }
+  return total;
+}

@@ -198,9 +198,13 @@ export class PairLagMoments {
     const xc = forward ? this.centredJ : this.centredI;
     const T = this.universe!.rows;
     let squares = 0;
-    for (let t = 0; t < T; t++) {
-      const v = yc[t] - beta * xc[t];
-      squares += v * v;
+    if (this.arena) {
+      squares = this.arena.residualSquares(forward ? SLOT.centredI : SLOT.centredJ, forward ? SLOT.centredJ : SLOT.centredI, beta, T);
+    } else {
+      for (let t = 0; t < T; t++) {
+        const v = yc[t] - beta * xc[t];
+        squares += v * v;
+      }
     }
     for (let t = 0; t <= P; t++) u[t] = yc[t] - beta * xc[t];
     for (let t = Math.max(P + 1, T - 1 - P); t < T; t++) u[t] = yc[t] - beta * xc[t];

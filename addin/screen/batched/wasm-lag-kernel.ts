@@ -15,6 +15,7 @@ interface KernelExports {
   heapBase(): number;
   crossLagProducts(di: number, dj: number, a: number, b: number, P: number, ij: number, ji: number): void;
   dot(c: number, d: number, a: number, b: number): number;
+  residualSquares(y: number, x: number, beta: number, n: number): number;
 }
 
 let compiled: WebAssembly.Module | null | undefined;
@@ -69,6 +70,11 @@ export class LagArena {
   /** ij[k] = sum_{t=a}^{b} di[t] dj[t-k] and ji[k] = sum dj[t] di[t-k], k = 0..P (lag-cross-products.ts), di and dj two slots. */
   crossLagProducts(di: number, dj: number, a: number, b: number, P: number): void {
     this.kernel.crossLagProducts(this.offsets[di], this.offsets[dj], a, b, P, this.ijAt, this.jiAt);
+  }
+
+  /** sum_{t=0}^{n-1} (y[t] - beta x[t])^2 of two slots (centred levels). */
+  residualSquares(y: number, x: number, beta: number, n: number): number {
+    return this.kernel.residualSquares(this.offsets[y], this.offsets[x], beta, n);
   }
 
   /** sum_{t=a}^{b} c[t] d[t] of two slots. */
