@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { SeededRandom, autoregressive1, randomWalk } from '../../addin/random';
 import { CANCELLATION_LIMIT, type LagKernel } from '../../addin/screen/batched/pair-lag-moments';
+import { LAG_PRODUCTS_WASM } from '../../addin/screen/batched/lag-products-wasm';
 import { SLOT, wasmLagArena } from '../../addin/screen/batched/wasm-lag-kernel';
 import { crossLagProducts, levelLagProducts } from '../../addin/screen/batched/lag-cross-products';
 import { FIELD, PAIR_STATUS, RECORD_SIZE } from '../../addin/screen/pair-record';
@@ -127,6 +128,12 @@ describe('the SIMD kernel (WebAssembly)', () => {
         expect(Math.abs(arena!.dot(SLOT.changesI, SLOT.changesJ, a, b) - dot)).toBeLessThan(1e-12 * rows);
       }
     }
+  });
+
+  it('is small enough to compile synchronously on a browser main thread (the custom functions run there)', () => {
+    // Chromium refuses new WebAssembly.Module on the main thread for modules over 4 KB (from memory:
+    // its synchronous-compile limit); the kernel is compiled synchronously on every surface.
+    expect(atob(LAG_PRODUCTS_WASM).length).toBeLessThan(4096);
   });
 
   it('is what scripts/build-wasm.mjs makes from assembly/lag-products.ts (the committed module is current)', async () => {
