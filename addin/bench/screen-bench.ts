@@ -41,6 +41,8 @@ export interface ScreenTiming extends Timing {
   usPerDirectedPairPerCore?: number;
   /** Share of the machine's CPU time busy during the timing, all processes (from /proc/stat; null where unreadable). */
   machineBusy?: number | null;
+  /** The same less this process's own CPU time: what other processes took (0 on an idle machine). */
+  othersBusy?: number | null;
   /** One thread's median over this one's (thread timings), and the goal 0.8 x threads. */
   speedUp?: number;
   speedUpGoal?: number;
@@ -59,6 +61,20 @@ function busyShare(before: number[] | null, after: number[] | null): number | nu
   const d = after.map((v, i) => v - before[i]);
   const total = d.reduce((a, b) => a + b, 0);
   return total > 0 ? Math.round((1 - (d[3] + d[4]) / total) * 100) / 100 : null;
+}
+
+/** Busy share of all cores taken by other processes while `task` ran: the machine's busy ticks less this process's CPU time. */
+function othersShare(task: () => void, cores: number): { machineBusy: number | null; othersBusy: number | null } {
+  const ticks = cpuTicks();
+  const own = process.cpuUsage();
+  const start = performance.now();
+  task();
+  const wallMs = performance.now() - start;
+  const used = process.cpuUsage(own);
+  const machineBusy = busyShare(ticks, cpuTicks());
+  if (machineBusy === null) return { machineBusy, othersBusy: null };
+  const ownShare = (used.user + used.system) / 1000 / (wallMs * cores);
+  return { machineBusy, othersBusy: Math.max(0, Math.round((machineBusy - ownShare) * 100) / 100) };
 }
 
 /**
@@ -91,9 +107,11 @@ export function benchPairKernel(series: { name: string; values: Float64Array }[]
     const t = timeIt(`Pairs of ${series.length} series x ${universe.rows} rows (${directed} directed), one thread, ${label}`, () => screenChunkInto(universe, settings, 0, total, records, 0, workspace), { runs: 5, warmup: 1 });
     out.push({ ...t, ms: t.medianMs, usPerDirectedPairPerCore: Math.round((t.medianMs * 1000) / directed * 10) / 10 });
   }
-  const before = cpuTicks();
-  const t = timeIt(`Pairs of ${series.length} series x ${universe.rows} rows, ${cores} threads (batched, SIMD)`, () => screenRecordsInThreads(universe, settings, 0, total, { threads: cores }, () => undefined), { runs: 5, warmup: 1, targetMs: 210 });
-  out.push({ ...t, ms: t.medianMs, usPerDirectedPairPerCore: Math.round((t.medianMs * 1000 * cores) / directed * 10) / 10, machineBusy: busyShare(before, cpuTicks()) });
+  let t: Timing = { name: '', medianMs: 0, minMs: 0, runs: 0 };
+  const load = othersShare(() => {
+    t = timeIt(`Pairs of ${series.length} series x ${universe.rows} rows, ${cores} threads (batched, SIMD)`, () => screenRecordsInThreads(universe, settings, 0, total, { threads: cores }, () => undefined), { runs: 5, warmup: 1, targetMs: 210 });
+  }, cores);
+  out.push({ ...t, ms: t.medianMs, usPerDirectedPairPerCore: Math.round((t.medianMs * 1000 * cores) / directed * 10) / 10, ...load });
   // The whole screen on one thread and on every core, interleaved so both see the same machine.
   const whole = (threads: number) => {
     const u = orders(threads);
@@ -102,19 +120,19 @@ export function benchPairKernel(series: { name: string; values: Float64Array }[]
   whole(1);
   whole(cores);
   const times: Record<number, number[]> = { 1: [], [cores]: [] };
-  const start = cpuTicks();
-  for (let r = 0; r < 5; r++) {
-    for (const threads of [1, cores]) {
-      const t0 = performance.now();
-      whole(threads);
-      times[threads].push(performance.now() - t0);
+  const busy = othersShare(() => {
+    for (let r = 0; r < 5; r++) {
+      for (const threads of [1, cores]) {
+        const t0 = performance.now();
+        whole(threads);
+        times[threads].push(performance.now() - t0);
+      }
     }
-  }
-  const busy = busyShare(start, cpuTicks());
+  }, cores);
   const median = (a: number[]) => [...a].sort((x, y) => x - y)[Math.floor(a.length / 2)];
   for (const threads of [1, cores]) {
     const m = median(times[threads]);
-    const entry: ScreenTiming = { name: `Whole screen (orders and pairs), ${series.length} series x ${universe.rows} rows, ${threads} thread${threads === 1 ? '' : 's'}, interleaved`, medianMs: Math.round(m), minMs: Math.round(Math.min(...times[threads])), runs: 5, ms: Math.round(m), machineBusy: busy };
+    const entry: ScreenTiming = { name: `Whole screen (orders and pairs), ${series.length} series x ${universe.rows} rows, ${threads} thread${threads === 1 ? '' : 's'}, interleaved`, medianMs: Math.round(m), minMs: Math.round(Math.min(...times[threads])), runs: 5, ms: Math.round(m), ...busy };
     if (threads > 1) {
       entry.speedUp = Math.round((median(times[1]) / m) * 100) / 100;
       entry.speedUpGoal = 0.8 * threads;
