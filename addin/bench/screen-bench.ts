@@ -85,13 +85,13 @@ function othersShare(task: () => void, cores: number): { machineBusy: number | n
  * then the whole screen (orders and pairs) on one thread and on every core, interleaved, with how
  * busy the machine was (other processes count: compare only runs on an idle machine).
  */
-export function benchPairKernel(series: { name: string; values: Float64Array }[], cores: number): ScreenTiming[] {
+export function benchPairKernel(series: { name: string; values: Float64Array }[], cores: number, workerFile?: string): ScreenTiming[] {
   const settings = resolveScreenOptions({});
   const plain = screenUniverse(series);
   const total = unorderedPairCount(plain.names.length);
   const directed = 2 * total;
   const out: ScreenTiming[] = [];
-  const orders = (threads: number) => withSeriesOrdersInThreads(screenUniverse(series), settings, { threads });
+  const orders = (threads: number) => withSeriesOrdersInThreads(screenUniverse(series), settings, { threads, workerFile });
   for (const threads of [1, cores]) {
     const t = timeIt(`Orders of integration, ${series.length} series x ${plain.rows} rows, ${threads} thread${threads === 1 ? '' : 's'}`, () => orders(threads), { runs: 3, warmup: 1 });
     out.push({ ...t, ms: t.medianMs });
@@ -109,13 +109,13 @@ export function benchPairKernel(series: { name: string; values: Float64Array }[]
   }
   let t: Timing = { name: '', medianMs: 0, minMs: 0, runs: 0 };
   const load = othersShare(() => {
-    t = timeIt(`Pairs of ${series.length} series x ${universe.rows} rows, ${cores} threads (batched, SIMD)`, () => screenRecordsInThreads(universe, settings, 0, total, { threads: cores }, () => undefined), { runs: 5, warmup: 1, targetMs: 210 });
+    t = timeIt(`Pairs of ${series.length} series x ${universe.rows} rows, ${cores} threads (batched, SIMD)`, () => screenRecordsInThreads(universe, settings, 0, total, { threads: cores, workerFile }, () => undefined), { runs: 5, warmup: 1, targetMs: 210 });
   }, cores);
   out.push({ ...t, ms: t.medianMs, usPerDirectedPairPerCore: Math.round((t.medianMs * 1000 * cores) / directed * 10) / 10, ...load });
   // The whole screen on one thread and on every core, interleaved so both see the same machine.
   const whole = (threads: number) => {
     const u = orders(threads);
-    screenRecordsInThreads(u, settings, 0, total, { threads }, () => undefined);
+    screenRecordsInThreads(u, settings, 0, total, { threads, workerFile }, () => undefined);
   };
   whole(1);
   whole(cores);
