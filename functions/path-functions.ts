@@ -15,7 +15,7 @@ import { movingHedgeCell } from './analyses/moving-hedge-cells';
  * @helpurl https://localhost:3000/docs/functions.md#movinghedge
  * @param y Prices of the series you hold: one column or one row.
  * @param x Prices of the hedge: one column (or row), on the same rows as y.
- * @param [show] ratio (from the rows up to each), smoothed (from every row), spread, zscore, or all (six columns). Default ratio.
+ * @param [show] ratio (from the rows up to each), smoothed, spread, zscore, all (six columns) or latest. Default ratio.
  * @param [statevar] Variance of each step of the intercept and slope; give it with obsvar. Default: both estimated.
  * @param [obsvar] Variance of y around the line; give it with statevar. Default: both estimated.
  * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
@@ -34,7 +34,7 @@ export function movinghedge(y: any[][], x: any[][], show?: any, statevar?: any, 
  * @param [rank] Long-run relations in the model. Default: the Johansen trace test's choice at 5%.
  * @param [lags] Lagged changes in the model. Default 1.
  * @param [deterministic] none, restricted-constant, constant, restricted-trend or trend. Default constant.
- * @param [show] forecast, lower or upper (95% bounds, ignoring the coefficients' own uncertainty), spread (path, low, high) or all. Default forecast.
+ * @param [show] forecast, lower or upper (95% bounds, estimates taken as known), spread (path, low, high) or all. Default forecast.
  * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns One row per step ahead: a column per series (all: forecast, low, high for each; spread: the first relation's path, low, high).
  */

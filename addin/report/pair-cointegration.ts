@@ -10,7 +10,7 @@ import type { EngleGrangerResult } from '../cointegration/engle-granger';
 import { engleGrangerBothWays } from '../cointegration/engle-granger-both-ways';
 import { phillipsOuliaris } from '../cointegration/phillips-ouliaris';
 import type { Deterministic } from '../result';
-import type { BoundsSummary, CointegrationEvidence, EngleGrangerSummary, PairCointegration } from './pair-types';
+import type { BoundsSummary, CointegrationEvidence, EngleGrangerSummary, PairCointegration, PairRestrictions } from './pair-types';
 import { summariseTest, type TestSummary } from './test-summary';
 import type { JohansenSummary } from './report-types';
 
@@ -62,6 +62,7 @@ export function pairCointegration(
     johansen: JohansenSummary | null;
     bothIntegrated: boolean;
     bounds?: BoundsSummary | null;
+    restrictions?: PairRestrictions | null;
   },
   verdict: string,
 ): PairCointegration {
@@ -75,5 +76,6 @@ export function pairCointegration(
     cointegrated: parts.bothIntegrated && evidence !== 'none',
     verdict,
     ...(parts.bounds ? { bounds: parts.bounds } : {}),
+    ...(parts.restrictions ? { restrictions: parts.restrictions } : {}),
   };
 }

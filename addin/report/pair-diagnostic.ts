@@ -13,6 +13,7 @@ import { chooseVarLags } from '../var/choose-var-lags';
 import type { JohansenCase } from '../johansen/johansen';
 import type { Deterministic } from '../result';
 import { johansenSection } from './johansen-choice';
+import { pairRestrictions } from './pair-restrictions';
 import { leadLagSection, type OrderFacts } from './lead-lag-section';
 import { pairSpread } from '../spread/pair-spread';
 import { spreadSeries } from '../spread/spread-series';
@@ -122,6 +123,8 @@ export function diagnosePair(a: Float64Array, b: Float64Array, names: { a: strin
   const forecast = exactFit || !cointegrated || johansen === null ? null
     : attempt('forecast', unavailable, () => forecastSection(y, x, yx, { case: johansen.case, lags: johansen.lags }, context.dates));
 
+  const restrictions = exactFit || johansen === null ? null
+    : attempt('Johansen restriction tests', unavailable, () => pairRestrictions(a, b, names, johansen));
   const orderNumbers = { [names.a]: factsA.order, [names.b]: factsB.order };
   // One price I(0), the other I(1): the bounds test answers where the residual tests cannot.
   const mixed = !bothIntegrated && [factsA.order, factsB.order].sort().join() === '0,1';
@@ -130,7 +133,7 @@ export function diagnosePair(a: Float64Array, b: Float64Array, names: { a: strin
   const partial: Omit<PairReport, 'verdicts' | 'warnings'> = {
     a: names.a,
     b: names.b,
-    cointegration: pairCointegration({ engleGranger: eg, phillipsOuliaris, johansen, bothIntegrated, bounds }, verdict),
+    cointegration: pairCointegration({ engleGranger: eg, phillipsOuliaris, johansen, bothIntegrated, bounds, restrictions }, verdict),
     leadLag,
     relation,
     adjustment,

@@ -38,6 +38,8 @@ export interface PairCointegration {
    * case 3, orders by AIC. Absent otherwise.
    */
   bounds?: BoundsSummary | null;
+  /** Johansen's restriction tests (weights 1 and -1; who adjusts), where Johansen ran. */
+  restrictions?: PairRestrictions | null;
 }
 
 /** The bounds test's answer for a pair of mixed orders. */
@@ -252,6 +254,14 @@ export interface PairForecastReport {
   spread: { text: string; mean: number; recentFrom: number; recent: number[]; path: number[]; lower: number[]; upper: number[] };
   bandNote: string;
   warnings: string[];
+}
+
+/** Johansen's restriction tests of a pair (one relation): weights 1 and -1, and who adjusts. */
+export interface PairRestrictions {
+  /** The relation is the first series minus the second, up to scale (chi-square LR test). */
+  oneToOne: { statistic: number; df: number; pValue: number };
+  /** For each series: the test that its adjustment is zero (a small p-value: it moves to close the gap). */
+  adjusts: { series: string; statistic: number; df: number; pValue: number }[];
 }
 
 export interface PairReport {

@@ -3,14 +3,14 @@
  * spilled beside the prices, one value per row (empty in the rows the filter uses to set itself up
  * and in rows the preparation leaves out). show picks the column: ratio (filtered: from the rows up
  * to each one), smoothed (from every row), spread (y minus the line known the row before), zscore
- * (that spread over its standard deviation), or all (six columns: ratio, its standard deviation,
- * smoothed, its standard deviation, spread, z-score).
+ * (that spread over its standard deviation), all (six columns: ratio, its standard deviation,
+ * smoothed, its standard deviation, spread, z-score), or latest (the ratio on the newest row).
  */
 import { movingHedge } from '../../addin/kalman/moving-hedge';
 import { readPair, type Orientation } from '../cells/range-input';
 import { decimalValue, optionWord, prepValue } from '../options/option-values';
 import { MOVING_HEDGE_SHOW_WORDS } from '../options/option-words';
-import { spillByRow } from '../render/cell-number';
+import { cellNumber, spillByRow } from '../render/cell-number';
 
 function spill(values: (number | string)[], orientation: Orientation): (number | string)[][] {
   return orientation === 'row' ? [values] : values.map((v) => [v]);
@@ -31,6 +31,8 @@ export function movingHedgeCell(y: unknown, x: unknown, show: unknown, stateVar:
     spread: () => spillByRow(r.spread, rows, 'The filtered spread'),
     zscore: () => spillByRow(r.spreadStandardised, rows, 'The standardised spread'),
   };
+  // The ratio on the newest row (the last in time, wherever it sits in the range), as the report gives it.
+  if (what === 'latest') return [[cellNumber(r.latest.beta, 'The latest moving hedge ratio')]];
   if (what !== 'all') return spill(columns[what](), pair.orientation);
   const all = [columns.ratio(), columns.ratioStd(), columns.smoothed(), columns.smoothedStd(), columns.spread(), columns.zscore()];
   return all[0].map((_, i) => all.map((c) => c[i]));

@@ -48,7 +48,7 @@ export type ScreenShow = (typeof SCREEN_SHOW_WORDS)[number];
 export const HALF_LIFE_SHOW_WORDS = ['value', 'low', 'high', 'all'] as const;
 
 /** What MOOR.MOVINGHEDGE spills: one column, or all six. */
-export const MOVING_HEDGE_SHOW_WORDS = ['ratio', 'smoothed', 'spread', 'zscore', 'all'] as const;
+export const MOVING_HEDGE_SHOW_WORDS = ['ratio', 'smoothed', 'spread', 'zscore', 'all', 'latest'] as const;
 
 /** What MOOR.AHEAD returns: the forecasts, a bound, the spread's path, or all. */
 export const AHEAD_SHOW_WORDS = ['forecast', 'lower', 'upper', 'spread', 'all'] as const;

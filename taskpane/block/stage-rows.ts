@@ -97,11 +97,11 @@ export function tieStage(g: BlockGrid, c: StageContext): void {
     numberRow(g, 'Long-run relations found by Johansen', { formula: `=MOOR.RANK(${args},${alpha},${c.prep})` }, NUMBER_FORMAT.count, rankReading,
       'the trace test taken step by step at the level above');
     numberRow(g, `Is the relation simply ${a} minus ${b}? Weights 1 and -1 (p-value)`,
-      { formula: `=MOOR.RELATIONIS(${c.refs.pair(a, b)},HSTACK(1,-1),${j.lags},${textLiteral(j.case)},"headline",${c.prep})` }, NUMBER_FORMAT.pValue,
+      { formula: `=MOOR.RELATIONIS(HSTACK(${c.refs.column(a)},${c.refs.column(b)}),HSTACK(1,-1),${j.lags},${textLiteral(j.case)},"headline",${c.prep})` }, NUMBER_FORMAT.pValue,
       (cell) => pValueReading(cell, alpha, 'the weights differ from 1 and -1', 'no evidence against 1 and -1'),
       'Johansen likelihood-ratio test that the one relation is these weights up to scale (chi-square, 1 degree of freedom)');
     [a, b].forEach((name, i) => numberRow(g, `Does ${name} move to close the gap? (p-value)`,
-      { formula: `=MOOR.ADJUSTS(${c.refs.pair(a, b)},${i + 1},${j.lags},${textLiteral(j.case)},"headline",${c.prep})` }, NUMBER_FORMAT.pValue,
+      { formula: `=MOOR.ADJUSTS(HSTACK(${c.refs.column(a)},${c.refs.column(b)}),${i + 1},${j.lags},${textLiteral(j.case)},"headline",${c.prep})` }, NUMBER_FORMAT.pValue,
       (cell) => pValueReading(cell, alpha, `${name} moves back toward the relation`, `no sign that ${name} adjusts`),
       `Johansen likelihood-ratio test that ${name}'s adjustment is zero (weak exogeneity), with the trace test's number of relations (at least 1)`));
   }
@@ -128,7 +128,7 @@ export function lineStage(g: BlockGrid, c: StageContext): void {
     numberRow(g, 'Hedge ratio (dynamic OLS)', { formula: `=MOOR.HEDGE(${y},${x},"dols","slope",${c.prep})` }, NUMBER_FORMAT.ratio, null,
       'with leads and lags of the changes, chosen by AIC: the estimate with sound standard errors for wandering prices');
   }
-  numberRow(g, `${c.report.data.logged ? 'Elasticity' : 'Hedge ratio'} now, allowed to move (Kalman filter)`, { formula: `=INDEX(MOOR.MOVINGHEDGE(${y},${x},"ratio",,,${c.prep}),ROWS(${y}))` }, NUMBER_FORMAT.ratio, null,
+  numberRow(g, `${c.report.data.logged ? 'Elasticity' : 'Hedge ratio'} now, allowed to move (Kalman filter)`, { formula: `=MOOR.MOVINGHEDGE(${y},${x},"latest",,,${c.prep})` }, NUMBER_FORMAT.ratio, null,
     'the slope on the last row, from the rows up to it, with intercept and slope taking random steps (variances by maximum likelihood); a ratio that drifts says the fixed line is unstable');
   numberRow(g, `Does ${c.y} move back? Speed of adjustment`, { formula: `=MOOR.ECM(${y},${x},"aic","headline",${c.prep})` }, NUMBER_FORMAT.ratio,
     (cell) => speedReading(cell, c.y), `error-correction model: the share of yesterday's gap ${c.y} closes per ${period}; lags by AIC`);

@@ -119,6 +119,15 @@ function paneNumbers(report: DiagnosticReport): Record<string, number | null> {
     out['Tied? Johansen'] = j.trace[0].pValue;
     out['Long-run relations found by Johansen'] = j.rank.trace;
   }
+  const r = p.cointegration.restrictions;
+  if (r) {
+    out[`Is the relation simply ${p.a} minus ${p.b}?`] = r.oneToOne.pValue;
+    for (const t of r.adjusts) out[`Does ${t.series} move to close the gap?`] = t.pValue;
+  }
+  if (p.movingHedge) out[`${report.data.logged ? 'Elasticity' : 'Hedge ratio'} now, allowed to move`] = p.movingHedge.latest.beta;
+  if (p.forecast) out['Where the spread is heading'] = p.forecast.spread.path[p.forecast.horizon - 1];
+  out['Half-life, low end'] = p.adjustment.spreadAr1.halfLifeInterval.low;
+  out['Half-life, high end'] = p.adjustment.spreadAr1.halfLifeInterval.high;
   if (p.leadLag && (p.leadLag.method === 'f-differences' || p.leadLag.method === 'f-levels')) {
     out[`Does ${p.leadLag.aLeadsB.cause} lead`] = p.leadLag.aLeadsB.test.pValue;
     out[`Does ${p.leadLag.bLeadsA.cause} lead`] = p.leadLag.bLeadsA.test.pValue;

@@ -81,6 +81,13 @@ function paneNumbers(report: DiagnosticReport, tableRows: number): Record<string
     [`Does ${p.leadLag.aLeadsB.cause} lead`]: p.leadLag.aLeadsB.test.pValue,
     [`Does ${p.leadLag.bLeadsA.cause} lead`]: p.leadLag.bLeadsA.test.pValue,
   };
+  const r = p.cointegration.restrictions;
+  if (r) {
+    out[`Is the relation simply ${p.a} minus ${p.b}?`] = r.oneToOne.pValue;
+    for (const t of r.adjusts) out[`Does ${t.series} move to close the gap?`] = t.pValue;
+  }
+  if (p.movingHedge) out['Elasticity now, allowed to move'] = p.movingHedge.latest.beta;
+  if (p.forecast) out['Where the spread is heading'] = p.forecast.spread.path[p.forecast.horizon - 1];
   expect(report.data.logged, 'the run was made with logs on').toBe(true);
   out['Elasticity of'] = p.relation.ols.beta;
   out['Elasticity (dynamic OLS)'] = p.relation.dynamicOls.beta;

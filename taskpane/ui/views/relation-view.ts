@@ -98,6 +98,14 @@ export function relationStepView(report: DiagnosticReport, pair: PairReport): Re
         ]),
       ]
     : [];
+  const restrictions = pair.cointegration.restrictions;
+  if (restrictions) {
+    // Who closes the gap, by Johansen's test that a series' adjustment is zero (a small p-value: it moves).
+    for (const t of restrictions.adjusts) {
+      pullFacts.push({ label: `Does ${t.series} move to close the gap? Johansen test of no adjustment (p-value)`, value: showPValue(t.pValue) });
+    }
+    pullFacts.push({ label: `Is the relation simply ${pair.a} minus ${pair.b}? Johansen test of weights 1 and -1 (p-value)`, value: showPValue(restrictions.oneToOne.pValue) });
+  }
   if (s) {
     pullFacts.push(
       { label: `Spread (plain least-squares line) on ${s.latestDate ?? s.latestRow}, in standard deviations`, value: showNumber(s.latestZ, 2) },
