@@ -20,11 +20,48 @@ export function bartlettLongRunVariance(u: ArrayLike<number>, bandwidth: number)
   if (bandwidth >= n) {
     throw new MooringInputError(`A bandwidth of ${bandwidth} is too large for ${n} observations: the largest allowed is ${n - 1}.`);
   }
-  const c = autocovarianceSums(u, bandwidth);
-  let s = c[0];
-  for (let i = 1; i <= bandwidth; i++) s += 2 * (1 - i / (bandwidth + 1)) * c[i];
+  let s: number;
+  if (n * (bandwidth + 1) > BARTLETT_WINDOW_WORK) {
+    s = bartlettByWindows(u, bandwidth);
+  } else {
+    const c = autocovarianceSums(u, bandwidth);
+    s = c[0];
+    for (let i = 1; i <= bandwidth; i++) s += 2 * (1 - i / (bandwidth + 1)) * c[i];
+  }
   if (!Number.isFinite(s)) throw overflowError();
   return s / n;
+}
+
+/** Rows times lags above which the Bartlett sum is taken from window sums (O(n)) rather than lag by lag (O(n L)). */
+export const BARTLETT_WINDOW_WORK = 2e7;
+
+/**
+ * The Bartlett-weighted sum c_0 + 2 sum_{i=1..L} (1 - i/(L+1)) c_i in O(n + L): it equals
+ * (1/(L+1)) sum over every window of L + 1 consecutive positions that meets the data (the
+ * windows starting at -L .. n-1, cut to the data) of the square of the window's sum, since a
+ * pair of rows i apart shares L + 1 - i such windows. A sum of squares does not cancel, so
+ * it is at least as exact as the lag-by-lag sum. Each window's sum is carried from the last
+ * (one row in, one out) and recomputed from its rows every L + 1 windows, so rounding does not
+ * travel further than one window length.
+ */
+export function bartlettByWindows(u: ArrayLike<number>, L: number): number {
+  const n = u.length;
+  const width = L + 1;
+  let total = 0;
+  let w = 0;
+  for (let start = -L; start < n; start++) {
+    const from = Math.max(0, start);
+    const to = Math.min(n - 1, start + L);
+    if ((start + L) % width === 0) {
+      w = 0;
+      for (let t = from; t <= to; t++) w += u[t];
+    } else {
+      if (start + L <= n - 1) w += u[start + L];
+      if (start - 1 >= 0) w -= u[start - 1];
+    }
+    total += w * w;
+  }
+  return total / width;
 }
 
 /** Sums of squared residuals past the largest double: said where it happens, not passed on as NaN. */
