@@ -104,7 +104,7 @@ export function ardlBoundsTest(y: ArrayLike<number>, xs: readonly ArrayLike<numb
     const v = 'fixed' in c ? c.fixed : c.max;
     if (!Number.isInteger(v) || v < 1) throw new MooringInputError(`Orders of the ARDL model are whole numbers from 1 up; got ${v}.`);
   }
-  const topOrder = Math.max(...[lagChoice, ...orderChoices].map((c) => ('fixed' in c ? c.fixed : c.max)));
+  const topOrder = [lagChoice, ...orderChoices].reduce((top, c) => Math.max(top, 'fixed' in c ? c.fixed : c.max), -Infinity);
   const columnsAtMost = 2 + 1 + k + (topOrder - 1) + k * topOrder;
   if (y.length - topOrder < columnsAtMost + 5) {
     throw new MooringInputError(`Too few rows (${y.length}) for the orders asked (up to ${topOrder}) and ${k} x series: add rows or lower the orders.`);

@@ -87,7 +87,7 @@ export function benchScreenScale(): ScaleTiming[] {
     rmSync(csv, { force: true });
     const parts = [1, 2, 3, 4].map((k) => runCli(cli, ['screen', twoThousand, '--part', `${k}/4`, '--out', join(dir, `part-${k}.bin`)], `screen --part ${k}/4, 2,000 series x 300 rows`, 1500));
     const slowest = parts.reduce((a, b) => (a.medianMs >= b.medianMs ? a : b));
-    const biggest = Math.max(...parts.map((p) => p.peakRssMb ?? 0));
+    const biggest = parts.reduce((top, p) => Math.max(top, p.peakRssMb ?? 0), 0);
     out.push({ ...slowest, name: 'screen --part k/4 (the slowest of 4 parts, run one after another; peak of the largest)', peakRssMb: biggest, withinTarget: parts.every((p) => p.withinTarget) });
     out.push(runCli(cli, ['merge', ...[1, 2, 3, 4].map((k) => join(dir, `part-${k}.bin`)), '--top', '5'], 'merge of the 4 parts, --top 5', 1500));
     return out;

@@ -23,7 +23,7 @@ export type GlsStatistic = 'tau' | 'MZa' | 'MZt' | 'MSB' | 'MPT';
 export type CriticalLevels = { '1%': number; '5%': number; '10%': number };
 
 /** The smallest sample size the simulation covers; shorter samples read the surface there. */
-export const GLS_TABLE_SMALLEST_T: number = Math.min(...simulated.provenance.sampleSizes);
+export const GLS_TABLE_SMALLEST_T: number = simulated.provenance.sampleSizes.reduce((low: number, t: number) => Math.min(low, t), Infinity);
 
 const PROBABILITIES: readonly number[] = simulated.probabilities;
 const SCORES: readonly number[] = PROBABILITIES.map((p) => normalQuantile(p));
