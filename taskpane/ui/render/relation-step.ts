@@ -22,6 +22,8 @@ export function renderRelationStep(view: RelationStepView, picker: HTMLElement |
     view.spreadLineNote ? el('p', { class: 'why', 'data-role': 'spread-line' }, view.spreadLineNote) : null,
     view.charts ? chartSlot(view.charts.spread) : null,
     view.charts ? chartSlot(view.charts.rollingZ) : null,
+    view.pathCharts.movingHedge ? chartSlot(view.pathCharts.movingHedge) : null,
+    view.pathCharts.forecast ? chartSlot(view.pathCharts.forecast) : null,
     warningsBox('Worth knowing', [...view.warnings, ...view.unavailable]),
     throughTime);
 }

@@ -5,7 +5,7 @@
  */
 import type { DiagnosticReport } from '../../../addin/report/report-types';
 import type { PairReport } from '../../../addin/report/pair-types';
-import { rollingZChart, seriesChart, spreadChart, type ChartModel } from './chart-models';
+import { forecastChart, movingHedgeChart, rollingZChart, seriesChart, spreadChart, type ChartModel } from './chart-models';
 
 /** The series chart of the report. */
 export function chartModelsOf(report: DiagnosticReport): { series: ChartModel } {
@@ -16,4 +16,12 @@ export function chartModelsOf(report: DiagnosticReport): { series: ChartModel } 
 export function pairCharts(report: DiagnosticReport, pair: PairReport): { spread: ChartModel; rollingZ: ChartModel } | null {
   if (!pair.spread) return null;
   return { spread: spreadChart(report.data, pair.spread), rollingZ: rollingZChart(report.data, pair.spread) };
+}
+
+/** The moving hedge ratio and the forecast fan of a pair, each null where the report has none. */
+export function pathCharts(report: DiagnosticReport, pair: PairReport): { movingHedge: ChartModel | null; forecast: ChartModel | null } {
+  return {
+    movingHedge: pair.movingHedge ? movingHedgeChart(report.data, pair.movingHedge) : null,
+    forecast: pair.forecast ? forecastChart(report.data, pair.forecast) : null,
+  };
 }

@@ -5,7 +5,7 @@
  * pairs it with the x axis (dates when every row has one, else row positions) and says in
  * words what the chart shows, for readers who cannot see it.
  */
-import type { SpreadReport } from '../../../addin/report/pair-types';
+import type { MovingHedgeReport, PairForecastReport, SpreadReport } from '../../../addin/report/pair-types';
 import type { DataSection, SeriesReport } from '../../../addin/report/report-types';
 import { isoToUnixSeconds } from '../data/excel-date';
 import { showNumber } from './numbers';
@@ -88,5 +88,51 @@ export function rollingZChart(data: DataSection, spread: SpreadReport): ChartMod
       { label: '-2', values: flat(-2), role: 'guide' },
     ],
     description: `The spread in standard deviations from its mean over the trailing ${spread.rollingWindow} rows; latest ${showNumber(spread.latestRollingZ, 2)}.`,
+  };
+}
+
+/** The moving hedge ratio (Kalman filter, smoothed) with its 95% band, against the fixed least-squares ratio. */
+export function movingHedgeChart(data: DataSection, hedge: MovingHedgeReport): ChartModel {
+  const axis = chartAxis(data);
+  return {
+    id: 'moving-hedge',
+    title: 'The hedge ratio allowed to move (smoothed, with its 95% band) against the fixed least-squares ratio',
+    ...axis,
+    lines: [
+      { label: 'Moving ratio', values: hedge.betaSmoothed, role: 'series' },
+      { label: 'Band, high', values: hedge.betaSmoothedHigh, role: 'band' },
+      { label: 'Band, low', values: hedge.betaSmoothedLow, role: 'band' },
+      { label: 'Fixed ratio', values: hedge.betaSmoothed.map(() => hedge.fixedBeta), role: 'centre' },
+    ],
+    description: `The ratio of ${hedge.dependent} on ${hedge.regressor} from every row (Kalman smoother) with its 95% band, against the fixed ratio ${showNumber(hedge.fixedBeta, 4)}; ${hedge.driftText}`,
+  };
+}
+
+/** The Johansen relation's recent values, then its forecast path back towards equilibrium with the 95% band. */
+export function forecastChart(data: DataSection, forecast: PairForecastReport): ChartModel {
+  const s = forecast.spread;
+  const recentDates = data.dates ? data.dates.slice(s.recentFrom) : null;
+  const futureDates = forecast.dates;
+  const seconds = recentDates && futureDates ? [...recentDates, ...futureDates].map((d) => isoToUnixSeconds(d)) : null;
+  const n = s.recent.length + s.path.length;
+  const time = seconds !== null && seconds.every((v): v is number => v !== null);
+  const x = time ? (seconds as number[]) : Array.from({ length: n }, (_, i) => s.recentFrom + i + 1);
+  const gap = (k: number): null[] => Array.from({ length: k }, () => null);
+  const last = s.recent[s.recent.length - 1];
+  // The path starts from the last value, so the line runs on without a break.
+  const ahead = (values: number[]): (number | null)[] => [...gap(s.recent.length - 1), last, ...values];
+  return {
+    id: 'forecast',
+    title: `Where the relation is heading if it holds: ${forecast.horizon} rows ahead, with the 95% band`,
+    x,
+    time,
+    lines: [
+      { label: 'Relation, recent', values: [...s.recent, ...gap(s.path.length)], role: 'series' },
+      { label: 'Forecast', values: ahead(s.path), role: 'series' },
+      { label: 'Band, high', values: ahead(s.upper), role: 'band' },
+      { label: 'Band, low', values: ahead(s.lower), role: 'band' },
+      { label: 'Equilibrium', values: Array.from({ length: n }, () => s.mean), role: 'centre' },
+    ],
+    description: `The Johansen relation ${s.text}: its last ${s.recent.length} values, then the forecast ${showNumber(s.path[s.path.length - 1], 4)} after ${forecast.horizon} rows (likely ${showNumber(s.lower[s.lower.length - 1], 4)} to ${showNumber(s.upper[s.upper.length - 1], 4)}); equilibrium ${showNumber(s.mean, 4)}. ${forecast.bandNote}`,
   };
 }

@@ -13,7 +13,7 @@
 import type { DiagnosticReport } from '../../../addin/report/report-types';
 import type { PairReport } from '../../../addin/report/pair-types';
 import { cautionsView, type CautionsView } from './cautions-view';
-import { pairCharts } from './chart-list';
+import { pairCharts, pathCharts } from './chart-list';
 import type { ChartModel } from './chart-models';
 import { showNumber, showPValue } from './numbers';
 
@@ -40,6 +40,8 @@ export interface RelationStepView {
   pullFacts: FactView[];
   spreadVerdict: string | null;
   charts: { spread: ChartModel; rollingZ: ChartModel } | null;
+  /** The hedge ratio through time (Kalman) against the fixed one, and the forecast fan; null where the report has none. */
+  pathCharts: { movingHedge: ChartModel | null; forecast: ChartModel | null };
   /** Parts the engine could not estimate, with its reasons. */
   unavailable: string[];
   warnings: string[];
@@ -141,6 +143,7 @@ export function relationStepView(report: DiagnosticReport, pair: PairReport): Re
     pullFacts,
     spreadVerdict: s?.verdict ?? null,
     charts: pairCharts(report, pair),
+    pathCharts: pathCharts(report, pair),
     unavailable: pair.unavailable.map((u) => `No ${u.part}: ${u.reason}`),
     warnings: pair.warnings.filter((w) => w.kind === 'near-unit-root' || w.kind === 'relation-moved').map((w) => w.text),
     cautions: cautionsView(report),
