@@ -54,7 +54,8 @@ export function readCsv(text: string, choice: DialectChoice = {}): CsvTable {
     const sep = rawHeader[0].includes(';') ? 'semicolons' : 'tabs';
     throw new MooringInputError(`Line 1 is separated by ${sep}, not commas: give --delimiter ${sep === 'tabs' ? 'tab' : 'semicolon'}, or leave --delimiter out to have it found.`);
   }
-  const header = rawHeader.map((h, j) => h.trim() || `column ${j + 1}`);
+  // A quoted header may hold line breaks; as a series name they would split report lines, so they become spaces.
+  const header = rawHeader.map((h, j) => h.replace(/[\r\n\u2028\u2029]+/g, ' ').trim() || `column ${j + 1}`);
   const width = header.length;
   if (records.length === 1) throw new MooringInputError('The file has a header but no data lines: add the prices below the header.');
 
