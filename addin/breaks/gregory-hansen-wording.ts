@@ -24,7 +24,7 @@ function levelList(levels: readonly string[]): string {
 
 /**
  * Where the row's critical values come from, in one or two sentences: Gregory & Hansen
- * (1996), Table 1, with the points that were compared with an independent transcription of
+ * (1996), Table 1, with the points that were compared with an independent typed copy of
  * the printed table said to be so, and the rest said to be from memory. Null beyond the table.
  */
 export function criticalValueSourceText(model: GregoryHansenModel, m: number): string | null {
@@ -35,7 +35,7 @@ export function criticalValueSourceText(model: GregoryHansenModel, m: number): s
   if (status.compared.length === 0) {
     return `${head} This row is quoted from memory: it has not yet been compared with the printed table, so check it against the paper before relying on the second decimal.`;
   }
-  const compared = `The ${levelList(status.compared)} points were compared with an independent transcription of the printed table and agree to its two decimals`;
+  const compared = `The ${levelList(status.compared)} points were compared with an independent typed copy of the printed table and agree to its two decimals`;
   if (status.fromMemory.length === 0) return `${head} ${compared}.`;
   const one = status.fromMemory.length === 1;
   return `${head} ${compared}; the ${levelList(status.fromMemory)} point${one ? ' is' : 's are'} quoted from memory, not yet compared.`;

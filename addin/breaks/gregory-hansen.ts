@@ -13,7 +13,7 @@
  * Candidate dates: s = h .. T - h with h = floor(trim T), so each regime holds at least h
  * observations (the paper's tau in [0.15, 0.85] at trim 0.15).
  * Critical values: Gregory & Hansen (1996), Table 1 (addin/tables/gregory-hansen-table.ts;
- * most points compared with a transcription of the printed table, the rest from memory, and
+ * most points compared with a typed copy of the printed table, the rest from memory, and
  * each result says which). No p-value: none was published.
  */
 import { MooringInputError } from '../errors';

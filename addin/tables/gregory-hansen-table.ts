@@ -4,7 +4,7 @@
  * 1%, 2.5%, 5% and 10% points for m = 1..4 regressors and the three shift models.
  *
  * The 1%, 5% and 10% points for m = 1..3 in every model, and for m = 4 in the level model,
- * were compared value by value with an independent transcription of the printed table and
+ * were compared value by value with an independent typed copy of the printed table and
  * agree to its two decimals; the 2.5% column and m = 4 in the other two models are still
  * quoted from memory (gregory-hansen-critical.json, comparedWithPrintedTable; README.md).
  * No p-value surface was published, so none is offered: a result reads its decision off
@@ -52,7 +52,7 @@ const TABLE_LEVELS = ['1%', '2.5%', '5%', '10%'] as const;
 
 /** Which of a row's points have been compared with the printed table, and which are still from memory. */
 export interface GregoryHansenRowStatus {
-  /** Levels compared with an independent transcription of Gregory & Hansen (1996), Table 1. */
+  /** Levels compared with an independent typed copy of Gregory & Hansen (1996), Table 1. */
   compared: string[];
   /** Levels quoted from memory, not yet compared with the printed table. */
   fromMemory: string[];

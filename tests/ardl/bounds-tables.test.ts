@@ -1,5 +1,5 @@
 /**
- * The bounds test's tables: the transcription of Pesaran, Shin & Smith (2001) Tables CI and CII
+ * The bounds test's tables: the typed copy of Pesaran, Shin & Smith (2001) Tables CI and CII
  * checked against printed values (named beside each), its shape, and Mooring's seeded simulation
  * (addin/tables/ardl-bounds-simulated.json): reproducible from its seed, close to the paper's
  * asymptotic bounds at its largest size, and above them in short samples.

@@ -84,7 +84,7 @@ describe('mooring breaks --y --x (Gregory-Hansen), terminal output', () => {
 
   it('cites Gregory & Hansen (1996), Table 1 and says which points were compared', () => {
     expect(out.stdout).toContain('Gregory & Hansen (1996), Table 1');
-    expect(out.stdout.replace(/\s+/g, ' ')).toContain('1%, 5% and 10% points were compared with an independent transcription');
+    expect(out.stdout.replace(/\s+/g, ' ')).toContain('1%, 5% and 10% points were compared with an independent typed copy');
     expect(out.stdout).not.toMatch(/not checked against/);
   });
 });

@@ -57,7 +57,7 @@ describe('Gregory-Hansen on independent random walks (Monte Carlo)', () => {
     for (let r = 0; r < 300; r++) stats.push(gregoryHansenTest(randomWalk(rng, 200), [randomWalk(rng, 200)], { model: 'level', lags: 0 }).statistic);
     stats.sort((a, b) => a - b);
     const quoted = gregoryHansenCritical('level', 1)?.['5%'] as number;
-    expect(quoted).toBe(-4.61); // Gregory & Hansen (1996), Table 1, m = 1, model C, 5% (compared with a transcription of the printed table)
+    expect(quoted).toBe(-4.61); // Gregory & Hansen (1996), Table 1, m = 1, model C, 5% (compared with a typed copy of the printed table)
     expect(Math.abs(stats[Math.floor(0.05 * 300)] - quoted)).toBeLessThan(0.25);
   });
 });

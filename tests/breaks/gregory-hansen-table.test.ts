@@ -5,13 +5,13 @@ import table from '../../addin/tables/gregory-hansen-critical.json';
 
 /**
  * The Gregory & Hansen (1996) Table 1 critical values as stored (1/5/10% for m = 1..3, and m = 4
- * in model C, compared with a transcription of the printed table; the rest from memory, see
- * the JSON's transcribedFrom and tests/tables/gregory-hansen-transcription.test.ts): spot
+ * in model C, compared with a typed copy of the printed table; the rest from memory, see
+ * the JSON's transcribedFrom and tests/tables/gregory-hansen-typed copy.test.ts): spot
  * values, the shape any such table must have, and the lookups.
  */
 describe('Gregory-Hansen critical values (Gregory & Hansen 1996, Table 1)', () => {
   it('says in its provenance which numbers were compared with the printed table and which are from memory, and cites the paper', () => {
-    expect(table.transcribedFrom).toMatch(/compared, value by value, with an independent public transcription of Table 1/);
+    expect(table.transcribedFrom).toMatch(/compared, value by value, with an independent public typed copy of Table 1/);
     expect(table.transcribedFrom).toMatch(/still from memory/);
     expect(table.source).toMatch(/Gregory, A\. W\. & Hansen, B\. E\. \(1996\).*Journal of Econometrics, 70\(1\), 99-126 \(Table 1\)/);
   });

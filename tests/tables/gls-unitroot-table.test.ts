@@ -48,7 +48,7 @@ describe('DF-GLS: simulated quantiles against published critical values', () => 
   });
 });
 
-describe('Ng-Perron: Table 1 transcription and the simulation', () => {
+describe('Ng-Perron: Table 1 typed copy and the simulation', () => {
   // Ng & Perron (2001), Table 1 (p. 1524): asymptotic critical values. FROM MEMORY, as the
   // table file says. Each recalled value against the simulated asymptotic quantile: within
   // 4% of the value (MZa, MPT: the widest, slowest-converging statistics) or 0.006 (MSB)
@@ -68,7 +68,7 @@ describe('Ng-Perron: Table 1 transcription and the simulation', () => {
       });
     }
   }
-  it('the transcription holds the printed values named here (from memory): constant MZa 5% -8.1, MZt 5% -1.98, MSB 5% 0.233, MPT 5% 3.17; trend MZa 5% -17.3, MPT 5% 5.48', () => {
+  it('the typed copy holds the printed values named here (from memory): constant MZa 5% -8.1, MZt 5% -1.98, MSB 5% 0.233, MPT 5% 3.17; trend MZa 5% -17.3, MPT 5% 5.48', () => {
     expect(ngPerronTableCritical('MZa', 'const')['5%']).toBe(-8.1);
     expect(ngPerronTableCritical('MZt', 'const')['5%']).toBe(-1.98);
     expect(ngPerronTableCritical('MSB', 'const')['5%']).toBe(0.233);
