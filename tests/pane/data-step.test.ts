@@ -113,3 +113,17 @@ describe('date cells', () => {
     expect(isoToUnixSeconds('soon')).toBeNull();
   });
 });
+
+describe('a second date column', () => {
+  it('is never offered as a series, and says how to line the series up', async () => {
+    const { describeColumns } = await import('../../taskpane/ui/data/columns');
+    const region = {
+      sheet: 'Prices', address: 'A1:D4', tableName: null, firstDataRow: 2, dateColumn: 0,
+      headers: ['Date', 'Gasoil', 'Settle Date', 'Diesel'],
+      rows: [['2024-01-02', 1.5, 45293, 2.1], ['2024-01-03', 1.6, 45294, 2.2], ['2024-01-04', 1.7, 45295, 2.3]],
+    };
+    const columns = describeColumns(region as never);
+    expect(columns.map((c) => c.usable)).toEqual([false, true, false, true]);
+    expect(columns[2].note).toMatch(/another date column.*MOOR.COMMONDATES/);
+  });
+});

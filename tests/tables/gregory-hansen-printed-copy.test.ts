@@ -4,7 +4,7 @@ import { criticalValueSourceText } from '../../addin/breaks/gregory-hansen-wordi
 import { SeededRandom, randomWalk } from '../../addin/random';
 import table from '../../addin/tables/gregory-hansen-critical.json';
 import { GREGORY_HANSEN_MODELS, gregoryHansenComparedLevels, gregoryHansenCritical, type GregoryHansenModel } from '../../addin/tables/gregory-hansen-table';
-import typed copy from './fixtures/gregory-hansen-1996-table1.json';
+import typedCopy from './fixtures/gregory-hansen-1996-table1.json';
 
 /**
  * Our Gregory-Hansen critical values against an independent typed copy of the printed
@@ -15,7 +15,7 @@ import typed copy from './fixtures/gregory-hansen-1996-table1.json';
  */
 
 type Row = Record<string, number>;
-const printed = typed copy.models as Record<GregoryHansenModel, Record<string, Row>>;
+const printed = typedCopy.models as Record<GregoryHansenModel, Record<string, Row>>;
 const ALL_LEVELS = ['1%', '2.5%', '5%', '10%'];
 
 describe('value by value against Gregory & Hansen (1996), Table 1, as transcribed', () => {
@@ -32,14 +32,14 @@ describe('value by value against Gregory & Hansen (1996), Table 1, as transcribe
   it('the typed copy holds 30 values: 1/5/10% for m = 1..3 in all three models and m = 4 in the level model', () => {
     const count = GREGORY_HANSEN_MODELS.reduce((n, model) => n + Object.values(printed[model]).reduce((k, row) => k + Object.keys(row).length, 0), 0);
     expect(count).toBe(30);
-    expect(typed copy.source).toMatch(/Gregory, A\. W\. & Hansen, B\. E\. \(1996\).*Table 1/);
+    expect(typedCopy.source).toMatch(/Gregory, A\. W\. & Hansen, B\. E\. \(1996\).*Table 1/);
   });
 });
 
 describe('what the table calls compared is exactly what the typed copy holds', () => {
   it('comparedWithPrintedTable lists the same models, rows and levels as the typed copy', () => {
     const checked = table.comparedWithPrintedTable;
-    expect(checked.levels).toEqual(typed copy.levels);
+    expect(checked.levels).toEqual(typedCopy.levels);
     for (const model of GREGORY_HANSEN_MODELS) {
       expect((checked.regressors as Record<string, number[]>)[model]).toEqual(Object.keys(printed[model]).map(Number));
     }

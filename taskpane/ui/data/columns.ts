@@ -4,6 +4,7 @@
  * of its filled cells are numbers (the command line's rule), and the date column is never a
  * series.
  */
+import { headerNamesDate } from '../../../addin/csv/date-column';
 import type { DataRegion } from '../../workbook/port';
 
 /** One column of the region as the first step offers it. */
@@ -36,6 +37,7 @@ export function describeColumns(region: DataRegion): ColumnInfo[] {
     }
     let note: string | null = null;
     if (index === region.dateColumn) note = 'the date column: it labels the rows';
+    else if (headerNamesDate(header)) note = 'another date column: the pane reads one; line the series up on their dates first (MOOR.COMMONDATES)';
     else if (filled === 0) note = 'empty';
     else if (numbers * 2 <= filled) note = `mostly not numbers (${numbers} of ${filled} cells)`;
     return { index, header, filled, numbers, usable: note === null, note };
