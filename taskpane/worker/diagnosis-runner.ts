@@ -124,55 +124,49 @@ export function workerRunner(makeWorker: () => Worker): DiagnosisRunner {
   };
 }
 
+/**
+ * Runs `work` on the pane's thread after one turn (so the progress bar paints), settling with
+ * its answer, its failure, or a cancel; cancel only works before the work starts.
+ */
+function inlineJob<T extends { kind: string }>(work: () => T): { outcome: Promise<T | { kind: 'cancelled' } | { kind: 'failed'; message: string; inputError: boolean }>; cancel(): void } {
+  type Outcome = T | { kind: 'cancelled' } | { kind: 'failed'; message: string; inputError: boolean };
+  let cancelled = false;
+  let settle: (o: Outcome) => void = () => undefined;
+  const outcome = new Promise<Outcome>((resolve) => {
+    settle = resolve;
+  });
+  setTimeout(() => {
+    if (cancelled) return;
+    try {
+      settle(work());
+    } catch (e) {
+      settle({ kind: 'failed', message: e instanceof Error ? e.message : String(e), inputError: isMooringInputError(e) });
+    }
+  }, 30);
+  return {
+    outcome,
+    cancel() {
+      cancelled = true;
+      settle({ kind: 'cancelled' });
+    },
+  };
+}
+
 /** Runs each diagnosis on the pane's thread, after one turn so the progress bar paints; cancel only works before it starts. */
 export function inlineRunner(): DiagnosisRunner {
   return {
     offThread: false,
     run(input, options, onStart) {
-      let cancelled = false;
-      let settle: (o: RunOutcome) => void = () => undefined;
-      const outcome = new Promise<RunOutcome>((resolve) => {
-        settle = resolve;
-      });
-      setTimeout(() => {
-        if (cancelled) return;
+      const job = inlineJob(() => {
         const series = input.series.length;
         onStart?.({ series, pairs: (series * (series - 1)) / 2, rows: input.series[0]?.values.length ?? 0 });
-        try {
-          settle({ kind: 'done', report: diagnose(input, options) });
-        } catch (e) {
-          settle({ kind: 'failed', message: e instanceof Error ? e.message : String(e), inputError: isMooringInputError(e) });
-        }
-      }, 30);
-      return {
-        outcome,
-        cancel() {
-          cancelled = true;
-          settle({ kind: 'cancelled' });
-        },
-      };
+        return { kind: 'done' as const, report: diagnose(input, options) };
+      });
+      return { outcome: job.outcome as Promise<RunOutcome>, cancel: job.cancel };
     },
     stability(input, options, pair) {
-      let cancelled = false;
-      let settle: (o: StabilityOutcome) => void = () => undefined;
-      const outcome = new Promise<StabilityOutcome>((resolve) => {
-        settle = resolve;
-      });
-      setTimeout(() => {
-        if (cancelled) return;
-        try {
-          settle({ kind: 'done', stability: pairStability(input, options, pair) });
-        } catch (e) {
-          settle({ kind: 'failed', message: e instanceof Error ? e.message : String(e), inputError: isMooringInputError(e) });
-        }
-      }, 30);
-      return {
-        outcome,
-        cancel() {
-          cancelled = true;
-          settle({ kind: 'cancelled' });
-        },
-      };
+      const job = inlineJob(() => ({ kind: 'done' as const, stability: pairStability(input, options, pair) }));
+      return { outcome: job.outcome as Promise<StabilityOutcome>, cancel: job.cancel };
     },
   };
 }
