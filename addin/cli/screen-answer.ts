@@ -43,9 +43,9 @@ export interface ScreenAnswer {
 }
 
 /** The ranked pairs as a table: each column as wide as its widest cell, two spaces between. */
-function pairTable(shown: readonly ScreenPair[]): string[] {
+function pairTable(shown: readonly ScreenPair[], halfLifeUnit: string): string[] {
   return textTable(
-    ['rank', 'pair (y on x)', 'tau', 'p-value', 'adjusted', 'beta', 'half-life', 'z-score'],
+    ['rank', 'pair (y on x)', 'tau', 'p-value', 'adjusted', 'beta', `half-life (${halfLifeUnit})`, 'z-score'],
     shown.map((p, i) => [
       String(i + 1), `${p.y} on ${p.x}`, formatStatistic(p.statistic), formatPValue(p.pValue), formatPValue(p.adjustedPValue),
       formatStatistic(p.beta), p.halfLife === null ? 'none' : formatStatistic(p.halfLife), formatStatistic(p.zscore),
@@ -84,7 +84,7 @@ function terminalReport(a: ScreenAnswer): string {
     '',
     bullet(s.chanceSentence, 0, '*'),
     '',
-    ...(s.ranked === 0 ? [s.family.size === 0 ? '  No pair was tested.' : '  No pair meets the half-life range.'] : shown.length === 0 ? [] : pairTable(shown)),
+    ...(s.ranked === 0 ? [s.family.size === 0 ? '  No pair was tested.' : '  No pair meets the half-life range.'] : shown.length === 0 ? [] : pairTable(shown, a.source.halfLifeUnit)),
   ];
   if (s.ranked > shown.length) out.push(`  ... ${s.ranked - shown.length} more pairs (--top N shows more; --format jsonl or csv lists every pair)`);
   if (s.setAsideCount > 0) {
@@ -99,9 +99,9 @@ function terminalReport(a: ScreenAnswer): string {
   return out.join('\n');
 }
 
-/** The pair with the line and date of its last shared row. */
-function withRow(p: ScreenPair, source: ScreenSource): ScreenPair & { lastLine: number; lastDate: string | null } {
-  return { ...p, lastLine: source.lines[p.lastRow], lastDate: source.dates?.[p.lastRow]?.trim() || null };
+/** The pair with the unit of its half-life and the line and date of its last shared row. */
+function withRow(p: ScreenPair, source: ScreenSource): ScreenPair & { halfLifeUnit: string; lastLine: number; lastDate: string | null } {
+  return { ...p, halfLifeUnit: source.halfLifeUnit, lastLine: source.lines[p.lastRow], lastDate: source.dates?.[p.lastRow]?.trim() || null };
 }
 
 /** The fields every output shares about the screen as a whole. */
@@ -111,6 +111,7 @@ function screenFields(a: ScreenAnswer): Record<string, unknown> {
     series: s.names,
     leftOut: a.source.leftOut,
     alpha: s.alpha,
+    halfLifeUnit: a.source.halfLifeUnit,
     orders: s.orders,
     orderTests: s.orderTests,
     family: s.family,
@@ -140,7 +141,7 @@ function jsonObject(a: ScreenAnswer): Record<string, unknown> {
 /** Columns of the CSV stream. */
 const CSV_COLUMNS = [
   'y', 'x', 'status', 'orderY', 'orderX', 'statistic', 'pValue', 'adjustedPValue', 'discovery', 'inHalfLifeRange',
-  'beta', 'intercept', 'halfLife', 'zscore', 'lags', 'nobs', 'lastLine', 'lastDate', 'rSquared', 'johansenRank', 'reason',
+  'beta', 'intercept', 'halfLife', 'halfLifeUnit', 'zscore', 'lags', 'nobs', 'lastLine', 'lastDate', 'rSquared', 'johansenRank', 'reason',
 ] as const;
 
 /** A CSV field: text made safe for a terminal, quoted when it holds a comma or a quote; numbers in full; none as empty. */
@@ -164,7 +165,7 @@ function pairRow(
     const row: Record<string, unknown> = {
       y: p.y, x: p.x, status: 'tested', orderY: p.orderY, orderX: p.orderX, statistic: p.statistic, pValue: p.pValue,
       adjustedPValue: p.adjustedPValue, discovery: p.discovery, inHalfLifeRange: halfLifeInRange(records[base + FIELD.halfLife], settings),
-      beta: p.beta, intercept: p.intercept, halfLife: p.halfLife, zscore: p.zscore, lags: p.lags, nobs: p.nobs, lastRow: p.lastRow,
+      beta: p.beta, intercept: p.intercept, halfLife: p.halfLife, halfLifeUnit: a.source.halfLifeUnit, zscore: p.zscore, lags: p.lags, nobs: p.nobs, lastRow: p.lastRow,
       lastLine: a.source.lines[p.lastRow], lastDate: a.source.dates?.[p.lastRow]?.trim() || null, rSquared: p.rSquared,
     };
     if (settings.johansen) row.johansenRank = p.johansenRank;

@@ -35,6 +35,11 @@ export interface RollingOptions {
   step?: number;
   /** Windows that all start on the first row (default false: rolling). */
   expanding?: boolean;
+  /**
+   * What one row is, for the summary's words: "day", "week", "month", ... (report/row-period.ts);
+   * default "row". Only words change: every number stays a count of rows.
+   */
+  period?: string;
 }
 
 /** One column per statistic, one entry per window, oldest window first. */
@@ -132,6 +137,6 @@ export function rollingRelation(givenY: ArrayLike<number>, givenX: ArrayLike<num
     out.pValue.push(ok ? residualTauPValue(test.tau, 'const', 2) : null);
     out.lags.push(ok ? test.lags : null);
   });
-  out.summary = rollingSummary(out, names, flatWindows);
+  out.summary = rollingSummary(out, names, flatWindows, options.period);
   return out;
 }

@@ -11,9 +11,10 @@ import type { RollingRelation } from './rolling-relation';
 /** Level the summary reads the p-values at. */
 const SUMMARY_LEVEL = 0.05;
 
-/** The summary sentences of a finished analysis. */
-export function rollingSummary(r: RollingRelation, names: { y: string; x: string }, flatWindows: number): string[] {
-  const kind = r.expanding ? 'expanding windows' : `rolling windows of ${groupedNumber(r.window)} rows`;
+/** The summary sentences of a finished analysis; windows counted in `period`s (one row each: "row", "day", "week", ...). */
+export function rollingSummary(r: RollingRelation, names: { y: string; x: string }, flatWindows: number, period = 'row'): string[] {
+  const rows = (n: number) => `${groupedNumber(n)} ${period}${n === 1 ? '' : 's'}`;
+  const kind = r.expanding ? 'expanding windows' : `rolling windows of ${rows(r.window)}`;
   const total = r.endRow.length;
   const tested = r.pValue.filter((p): p is number => p !== null);
   const passing = tested.filter((p) => p <= SUMMARY_LEVEL).length;
@@ -24,7 +25,7 @@ export function rollingSummary(r: RollingRelation, names: { y: string; x: string
   const lastP = r.pValue[total - 1];
   const lastBeta = r.beta[total - 1];
   if (lastP !== null && lastBeta !== null) {
-    out.push(`In the latest window (${groupedNumber(r.nobs[total - 1])} rows) it is ${formatPValue(lastP)}, with a hedge ratio of ${formatCoefficient(lastBeta)}.`);
+    out.push(`In the latest window (${rows(r.nobs[total - 1])}) it is ${formatPValue(lastP)}, with a hedge ratio of ${formatCoefficient(lastBeta)}.`);
   }
   const range = betaRange(r.beta);
   if (range.count > 1) {

@@ -16,13 +16,18 @@ import { relationFromContext, relationJson, relationSampleTerminal, X_OPTION, Y_
 /** Windows shown in the terminal table (evenly spaced, the latest always among them). */
 const SHOWN_WINDOWS = 12;
 
-function windowTable(r: RollingRelation, endLabel: (k: number) => string): string[] {
+/** "104 weeks", "1 day", "60 rows": a count of rows in the words of the data's spacing. */
+function rowsText(n: number, period: string): string {
+  return `${n} ${period}${n === 1 ? '' : 's'}`;
+}
+
+function windowTable(r: RollingRelation, endLabel: (k: number) => string, period: string): string[] {
   const total = r.endRow.length;
   const count = Math.min(SHOWN_WINDOWS, total);
   const picks = count === 1 ? [0] : [...new Set(Array.from({ length: count }, (_, i) => Math.round(((total - 1) * i) / (count - 1))))];
   // Each column as wide as its widest cell, two spaces between: 'not available' never runs into its neighbour.
   return textTable(
-    ['window ends', 'rows', 'p-value', 'beta', 'half-life'],
+    ['window ends', `${period}s`, 'p-value', 'beta', `half-life (${period}s)`],
     picks.map((k) => [endLabel(k), String(r.nobs[k]), formatPValue(r.pValue[k]), formatStatistic(r.beta[k]), r.halfLife[k] === null ? 'none' : formatStatistic(r.halfLife[k])]),
   );
 }
@@ -52,7 +57,10 @@ export const rollingCommand: Command = {
     const expanding = context.args.switches.has('expanding');
     const input = relationFromContext(context, true);
     const names = { y: input.names.y, x: input.names.xs[0] };
-    const r = rollingRelation(input.y.series.values, input.xs[0].series.values, { window, step, expanding }, names);
+    // What one row is (found once from the dates): windows and half-lives are counted in it.
+    const period = context.period?.period ?? 'row';
+    const unit = context.period?.unit ?? 'rows';
+    const r = rollingRelation(input.y.series.values, input.xs[0].series.values, { window, step, expanding, period }, names);
     const rows = input.y.series.rows;
     const table = context.table;
     const dates = table.dateIndex >= 0 ? table.columns[table.dateIndex] : null;
@@ -61,11 +69,11 @@ export const rollingCommand: Command = {
     const out = [
       heading(`${expanding ? 'Expanding' : 'Rolling'} relation of ${names.y} on ${names.x}`),
       '',
-      labelled('Windows', `${r.endRow.length} ${expanding ? `from the first row, at least ${window} rows` : `of ${window} rows`}, ends every ${step} row${step === 1 ? '' : 's'} back from the last`),
+      labelled('Windows', `${r.endRow.length} ${expanding ? `from the first row, at least ${rowsText(window, period)}` : `of ${rowsText(window, period)}`}, ends every ${rowsText(step, period)} back from the last`),
       '',
       ...r.summary.map((s) => bullet(s)),
       '',
-      ...windowTable(r, (k) => label(rows[r.endRow[k]])),
+      ...windowTable(r, (k) => label(rows[r.endRow[k]]), period),
       '',
       relationSampleTerminal(input),
     ];
@@ -75,6 +83,7 @@ export const rollingCommand: Command = {
         ...relationJson(input),
         window,
         step,
+        windowUnit: unit,
         expanding,
         endRow: r.endRow,
         endLine: r.endRow.map((i) => table.lines[rows[i]]),
@@ -88,6 +97,7 @@ export const rollingCommand: Command = {
         intercept: r.intercept,
         rSquared: r.rSquared,
         halfLife: r.halfLife,
+        halfLifeUnit: unit,
         summary: r.summary,
       },
     };

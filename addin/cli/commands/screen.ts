@@ -6,14 +6,14 @@
  * its own and each pair tested on the rows both have, so a series that starts later still
  * pairs with the others.
  */
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { csvSeries, seriesNames } from '../../csv/csv-series';
 import type { CsvTable } from '../../csv/read-csv';
 import { MooringInputError } from '../../errors';
 import { RECORD_SIZE } from '../../screen/pair-record';
-import { screenRecordsInThreads, withSeriesOrdersInThreads, type ThreadReport } from '../../screen/parallel-node';
+import { screenRecordsInThreads, startScreenThreads, withSeriesOrdersInThreads, type ThreadReport } from '../../screen/parallel-node';
 import type { NamedSeries } from '../../screen/screen-pairs';
 import { resolveScreenOptions, type ScreenSettings } from '../../screen/screen-options';
 import { ScreenTally } from '../../screen/screen-tally';
@@ -28,6 +28,14 @@ import { LAGS_OPTION, MAX_LAGS_OPTION, readLags } from '../test-options';
 
 /** Pairs listed in the terminal report unless --top says otherwise. */
 const DEFAULT_TOP = 20;
+
+/**
+ * Files of at least this many bytes start the worker threads before they are read: a megabyte
+ * holds 70,000 prices or more, past the work that earns the orders of integration a second
+ * thread (ORDER_WORK_PER_THREAD); a smaller screen may not use the threads, and a thread started
+ * for nothing would cost more than the head start saves.
+ */
+const EARLY_THREADS_BYTES = 2 ** 20;
 
 /** A number of rows for the half-life range: decimals allowed. */
 function rowsValue(option: string, raw: string | undefined): number | undefined {
@@ -145,8 +153,8 @@ export const screenCommand: Command = {
   usage: 'mooring screen <file.csv> [--series A,B,...] [options]',
   options: [
     { name: 'alpha', value: 'LEVEL', help: 'level for the orders of integration, the chance sentence and the discoveries (default 0.05)' },
-    { name: 'min-half-life', value: 'ROWS', help: 'show only pairs whose spread half-life is at least this' },
-    { name: 'max-half-life', value: 'ROWS', help: 'show only pairs whose spread half-life is at most this' },
+    { name: 'min-half-life', value: 'ROWS', help: 'show only pairs whose spread half-life is at least this many rows (days, weeks, ... where the file has dates)' },
+    { name: 'max-half-life', value: 'ROWS', help: 'show only pairs whose spread half-life is at most this many rows' },
     { name: 'min-obs', value: 'N', help: 'test only pairs with at least N shared rows (default 20)' },
     { name: 'johansen', help: "also give each pair's Johansen trace rank (slower)" },
     { name: 'threads', value: 'N', help: 'most threads to use (default: every core; a small screen uses fewer, as starting a thread would cost more than it saves)' },
@@ -163,6 +171,18 @@ export const screenCommand: Command = {
     'mooring screen prices.csv --format csv > every-pair.csv',
     'mooring screen prices.csv --part 3/8 --out part-3.bin   (then: mooring merge part-*.bin)',
   ],
+  beforeReading(files, args) {
+    let bytes = 0;
+    for (const file of files) {
+      try {
+        bytes += statSync(file).size;
+      } catch {
+        return; // reading it will say what is wrong
+      }
+    }
+    const raw = args.values.get('threads');
+    if (bytes >= EARLY_THREADS_BYTES) startScreenThreads({ threads: raw === undefined ? undefined : Number(raw) });
+  },
   run(context) {
     const alpha = levelValue('alpha', context.args.values.get('alpha'));
     const minHalfLife = rowsValue('min-half-life', context.args.values.get('min-half-life'));

@@ -63,6 +63,8 @@ export const spreadCommand: Command = {
     if (givenIntercept !== undefined && givenBeta === undefined) throw new MooringInputError('--intercept goes with --beta; without --beta the hedge estimator gives the intercept.');
     const window = wholeNumberValue('window', context.args.values.get('window'), 'rows');
     const period = context.args.values.get('period')?.trim() || (context.period && context.period.unit !== 'rows' ? context.period.period : 'period');
+    // The trailing window is counted in the same period (rows where the file has no dates).
+    const windowWord = period === 'period' ? 'row' : period;
     const input = relationFromContext(context, true);
     const y = input.y.series.values;
     const x = input.xs[0].series.values;
@@ -102,7 +104,7 @@ export const spreadCommand: Command = {
       labelled('Half-life interval', `${life.interval.text} (${HALF_LIFE_INTERVAL_METHOD})`),
       labelled('Verdict', life.verdict),
       labelled('Latest value', `${formatStatistic(values[last])}${when}: z-score ${formatStatistic(z.values[last])} over the whole sample` +
-        (rolling ? `, ${formatStatistic(rolling[last])} over the last ${window} rows` : '')),
+        (rolling ? `, ${formatStatistic(rolling[last])} over the last ${window} ${windowWord}${window === 1 ? '' : 's'}` : '')),
       '',
       relationSampleTerminal(input),
     ];
@@ -126,6 +128,7 @@ export const spreadCommand: Command = {
         standardDeviation: z.standardDeviation,
         zscore: z.values,
         window: window ?? null,
+        windowUnit: rowPeriod(null, windowWord).unit,
         rollingZscore: rolling,
       },
     };
