@@ -35,6 +35,12 @@ export interface DiagnosticOptions {
    * done before the diagnostic, by the surface.
    */
   preparation?: string;
+  /**
+   * The unit-root test that decides whether each series' levels wander: 'adf' (default) or
+   * 'dfgls' (more power against slow mean reversion; the differences keep ADF). See
+   * addin/unitroot/integration-order.ts.
+   */
+  unitRootTest?: 'adf' | 'dfgls';
 }
 
 /** Fewest observations the diagnostic works with: enough for the unit-root steps, the halves and the lag searches. */
@@ -115,7 +121,7 @@ export function checkDiagnosticInput(input: DiagnosticInput, options: Diagnostic
 }
 
 /** Reads and checks the level, the deterministic terms, the lag rule and the Johansen case. */
-export function checkDiagnosticOptions(options: DiagnosticOptions): { alpha: number; deterministic: Deterministic; lagRule: 'aic' | 'bic'; johansenCase: JohansenCase | 'auto'; preparation: string } {
+export function checkDiagnosticOptions(options: DiagnosticOptions): { alpha: number; deterministic: Deterministic; lagRule: 'aic' | 'bic'; johansenCase: JohansenCase | 'auto'; preparation: string; unitRootTest: 'adf' | 'dfgls' } {
   const alpha = options.alpha ?? 0.05;
   if (typeof alpha !== 'number' || !(alpha > 0 && alpha < 0.5)) {
     throw new MooringInputError(`The significance level must lie between 0 and 0.5, such as 0.05; got ${String(alpha)}.`);
@@ -129,7 +135,9 @@ export function checkDiagnosticOptions(options: DiagnosticOptions): { alpha: num
   const johansenCase = options.johansenCase ?? 'auto';
   if (johansenCase !== 'auto') requireJohansenCase(johansenCase);
   const preparation = describePreparation(parsePreparation(options.preparation ?? null, 'The preparation of the prices'));
-  return { alpha, deterministic, lagRule, johansenCase, preparation };
+  const unitRootTest = options.unitRootTest ?? 'adf';
+  if (unitRootTest !== 'adf' && unitRootTest !== 'dfgls') throw new MooringInputError(`The unit-root test that decides the order must be 'adf' or 'dfgls'; got '${String(unitRootTest)}'.`);
+  return { alpha, deterministic, lagRule, johansenCase, preparation, unitRootTest };
 }
 
 function lengthOf(input: DiagnosticInput, names: string[]): number {

@@ -61,7 +61,7 @@ export function diagnose(input: DiagnosticInput, options: DiagnosticOptions = {}
   };
 
   const series = checked.names.map((name, j) =>
-    seriesSection(name, checked.values[j], { alpha: settings.alpha, deterministic: settings.deterministic, logged: checked.logged }));
+    seriesSection(name, checked.values[j], { alpha: settings.alpha, deterministic: settings.deterministic, logged: checked.logged, unitRootTest: settings.unitRootTest }));
   const orders: PairContext['orders'] = {};
   for (const s of series) orders[s.name] = { order: s.order, agree: s.agree };
   const context: PairContext = {

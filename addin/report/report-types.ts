@@ -66,6 +66,8 @@ export interface OrderStepSummary {
   differences: number;
   adf: TestSummary;
   kpss: TestSummary;
+  /** DF-GLS on the levels (differences 0 only; null on the differences, or with no deterministic terms). */
+  gls: TestSummary | null;
 }
 
 /** One series' order of integration, with the tests behind it. */
@@ -75,8 +77,10 @@ export interface SeriesReport {
   order: number;
   /** "I(1)", "I(0)", "above I(2)". */
   orderText: string;
-  /** Whether KPSS tells the same story as ADF. */
+  /** Whether KPSS tells the same story as the test that decided. */
   agree: boolean;
+  /** The unit-root test that decided the levels step ('adf' or 'dfgls'); the differences always take ADF. */
+  decidedBy: 'adf' | 'dfgls';
   verdict: string;
   steps: OrderStepSummary[];
   warnings: string[];
@@ -121,6 +125,8 @@ export interface DiagnosticSettings {
   rollingWindow: number;
   /** How the prices were prepared before the diagnostic (addin/series/preparation.ts); '' when as given. */
   preparation: string;
+  /** The unit-root test that decides whether each series' levels wander: 'adf' or 'dfgls'. */
+  unitRootTest: 'adf' | 'dfgls';
 }
 
 /** A headline finding, in plain words, with the subject it is about. */

@@ -5,6 +5,8 @@
  */
 import { toUnitScale } from '../linalg/power-of-two-scale';
 import type { Deterministic } from '../result';
+import { adfTest } from '../unitroot/adf';
+import { dfglsTest } from '../unitroot/dfgls';
 import { integrationOrder, type IntegrationOrderResult } from '../unitroot/integration-order';
 import type { SeriesReport } from './report-types';
 import { summariseTest } from './test-summary';
@@ -38,20 +40,36 @@ export function chartLine(values: Float64Array, logged: boolean): SeriesReport['
   return { kind: 'standardised', values: Array.from(unit, (v) => (v - mean) / sd) };
 }
 
-/** The series section of one series. */
-export function seriesSection(name: string, values: Float64Array, options: { alpha: number; deterministic: Deterministic; logged: boolean }): SeriesReport {
-  const result = integrationOrder(values, { alpha: options.alpha, deterministic: options.deterministic }, name);
+/**
+ * The series section of one series. `unitRootTest` names the test that decides the levels step
+ * (integration-order.ts); the levels row carries both ADF and DF-GLS whichever decided, so a
+ * reader sees the two side by side (the one not deciding is run on the same values with the same
+ * terms, exactly as it would run if it decided).
+ */
+export function seriesSection(name: string, values: Float64Array, options: { alpha: number; deterministic: Deterministic; logged: boolean; unitRootTest?: 'adf' | 'dfgls' }): SeriesReport {
+  const decidedBy = options.unitRootTest ?? 'adf';
+  const result = integrationOrder(values, { alpha: options.alpha, deterministic: options.deterministic, unitRootTest: decidedBy }, name);
   const order = orderNumber(result.order);
+  const glsTerms = options.deterministic === 'trend' ? 'trend' : 'const';
+  const levels = (s: IntegrationOrderResult['steps'][number]) => {
+    if (s.differences !== 0) return { adf: s.adf, gls: null };
+    if (decidedBy === 'dfgls') return { adf: adfTest(values, { deterministic: options.deterministic }, name), gls: s.adf };
+    return { adf: s.adf, gls: options.deterministic === 'none' ? null : dfglsTest(values, { deterministic: glsTerms }, name) };
+  };
   return {
     name,
     order,
     orderText: orderText(order),
     agree: result.agree,
+    decidedBy,
     verdict: result.verdict,
     steps: result.steps
       .slice()
       .sort((u, v) => u.differences - v.differences)
-      .map((s) => ({ differences: s.differences, adf: summariseTest(s.adf, options.alpha), kpss: summariseTest(s.kpss, options.alpha) })),
+      .map((s) => {
+        const { adf, gls } = levels(s);
+        return { differences: s.differences, adf: summariseTest(adf, options.alpha), kpss: summariseTest(s.kpss, options.alpha), gls: gls && summariseTest(gls, options.alpha) };
+      }),
     warnings: result.warnings.slice(),
     chart: chartLine(values, options.logged),
   };

@@ -39,17 +39,21 @@ export function ppCell(series: unknown, deterministic: unknown, bandwidth: unkno
   return showAnswer(testAnswer(phillipsPerronTest(input.series.values, { deterministic: det, bandwidth: bw }, NAME)), show);
 }
 
-/** The order of integration: 0, 1 or 2, or the text "above 2". */
-export function orderCell(series: unknown, alpha: unknown, deterministic: unknown, prep?: unknown): (number | string)[][] {
+/** The unit-root tests that can decide the levels step of the order (integration-order.ts). */
+export const ORDER_TESTS = ['adf', 'dfgls'] as const;
+
+/** The order of integration: 0, 1 or 2, or the text "above 2". `test` names the test that decides the levels: adf or dfgls. */
+export function orderCell(series: unknown, alpha: unknown, deterministic: unknown, test?: unknown, prep?: unknown): (number | string)[][] {
   const level = levelValue('alpha', alpha, 0.05);
   const det = optionWord('deterministic', deterministic, DETERMINISTIC_WORDS, 'const');
+  const unitRootTest = optionWord('test', test, ORDER_TESTS, 'adf');
   const how = prepValue(prep);
   if (isBlockRange(series)) {
     // Several columns: one order per column, on the rows they share (one analysis, one sample).
     const block = readBlock(series, 'the block', how);
-    return [block.map((s) => integrationOrder(s.values, { alpha: level, deterministic: det }, s.name).order)];
+    return [block.map((s) => integrationOrder(s.values, { alpha: level, deterministic: det, unitRootTest }, s.name).order)];
   }
   const input = readSeries(series, NAME, how);
-  const result = integrationOrder(input.series.values, { alpha: level, deterministic: det }, NAME);
+  const result = integrationOrder(input.series.values, { alpha: level, deterministic: det, unitRootTest }, NAME);
   return [[result.order]];
 }

@@ -30,6 +30,8 @@ export interface BlockAnalysis {
   deterministic: string;
   lagRule: string;
   johansenCase: string;
+  /** The test that decided the levels step of each order ('adf' or 'dfgls'); 'adf' in notes written before it was recorded. */
+  unitRootTest: string;
 }
 
 /** Longest comment Excel keeps on a name. */
@@ -42,7 +44,7 @@ export function encodeBlockNote(note: BlockNote): string {
   const n = note.analysis;
   const full = {
     k: KIND, s: note.sheet, r: note.address, t: note.table, a: note.a, b: note.b, x: note.reserved,
-    ...(n ? { p: n.preparation, o: [n.alpha, n.deterministic, n.lagRule, n.johansenCase] } : {}),
+    ...(n ? { p: n.preparation, o: [n.alpha, n.deterministic, n.lagRule, n.johansenCase, n.unitRootTest] } : {}),
   };
   const tries = [full, { ...full, x: [] as string[] }, ...(note.table ? [{ ...full, x: [] as string[], r: '' }] : [])];
   for (const t of tries) {
@@ -75,6 +77,6 @@ export function decodeBlockNote(text: string | null | undefined): BlockNote | nu
 
 function analysisOf(o: Record<string, unknown>): { analysis?: BlockAnalysis } {
   const c = o.o;
-  if (typeof o.p !== 'string' || !Array.isArray(c) || c.length !== 4 || typeof c[0] !== 'number' || !c.slice(1).every((v) => typeof v === 'string')) return {};
-  return { analysis: { preparation: o.p, alpha: c[0], deterministic: c[1] as string, lagRule: c[2] as string, johansenCase: c[3] as string } };
+  if (typeof o.p !== 'string' || !Array.isArray(c) || (c.length !== 4 && c.length !== 5) || typeof c[0] !== 'number' || !c.slice(1).every((v) => typeof v === 'string')) return {};
+  return { analysis: { preparation: o.p, alpha: c[0], deterministic: c[1] as string, lagRule: c[2] as string, johansenCase: c[3] as string, unitRootTest: (c[4] as string | undefined) ?? 'adf' } };
 }

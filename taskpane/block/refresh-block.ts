@@ -37,6 +37,7 @@ export async function refreshBlock(port: WorkbookPort, name: string, options: Di
         deterministic: note.analysis.deterministic as DiagnosticOptions['deterministic'],
         lagRule: note.analysis.lagRule as DiagnosticOptions['lagRule'],
         johansenCase: note.analysis.johansenCase as DiagnosticOptions['johansenCase'],
+        unitRootTest: note.analysis.unitRootTest as DiagnosticOptions['unitRootTest'],
       }
     : {};
   const report = regionReport(region, [note.a, note.b], { ...recorded, ...options });

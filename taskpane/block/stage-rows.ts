@@ -16,7 +16,7 @@ import type { DiagnosticReport } from '../../addin/report/report-types';
 import type { BlockCell } from '../workbook/port';
 import { COL, type BlockGrid } from './block-grid';
 import { FILL, NUMBER_FORMAT, STYLE, periodsFormat } from './block-style';
-import { textLiteral, type SeriesReferences } from './series-reference';
+import { textLiteral, type PriceReferences } from './series-reference';
 import { FORECAST_BAND_NOTE } from '../../addin/forecast/vecm-forecast';
 import { REPORT_HORIZON } from '../../addin/report/pair-forecast';
 import { halfLifeReading, orderReading, pValueReading, pullReading, rankReading, speedReading, stretchReading } from './verdict-formulas';
@@ -25,7 +25,7 @@ import { halfLifeReading, orderReading, pValueReading, pullReading, rankReading,
 export interface StageContext {
   report: DiagnosticReport;
   pair: PairReport;
-  refs: SeriesReferences;
+  refs: PriceReferences;
   /** The relation's dependent and regressor (the report's normalisation). */
   y: string;
   x: string;
@@ -65,12 +65,16 @@ function section(g: BlockGrid, title: string): void {
 /** Each series on its own: the order of integration. */
 export function seriesStage(g: BlockGrid, c: StageContext): void {
   const { alpha, deterministic } = c.report.settings;
+  const test = c.report.settings.unitRootTest ?? 'adf';
   section(g, 'Each series on its own');
   const both = `HSTACK(${c.refs.column(c.pair.a)},${c.refs.column(c.pair.b)})`;
+  const how = test === 'dfgls'
+    ? 'DF-GLS on the levels (more power against a slow return to a mean), ADF on the changes, checked by KPSS: 0 settles, 1 wanders, 2 wanders in its changes too'
+    : 'ADF down from the levels, checked by KPSS: 0 settles, 1 wanders, 2 wanders in its changes too';
   for (const [k, name] of [c.pair.a, c.pair.b].entries()) {
     // Both columns go in so the order is found on the rows the pair shares, as in the pane.
-    numberRow(g, `Does ${name} wander? Order of integration`, { formula: `=INDEX(MOOR.ORDER(${both},${alpha},${textLiteral(deterministic)},${c.prep}),1,${k + 1})` },
-      NUMBER_FORMAT.count, orderReading, 'ADF down from the levels, checked by KPSS: 0 settles, 1 wanders, 2 wanders in its changes too');
+    numberRow(g, `Does ${name} wander? Order of integration`, { formula: `=INDEX(MOOR.ORDER(${both},${alpha},${textLiteral(deterministic)},${textLiteral(test)},${c.prep}),1,${k + 1})` },
+      NUMBER_FORMAT.count, orderReading, how);
   }
 }
 

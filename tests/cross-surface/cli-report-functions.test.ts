@@ -92,7 +92,7 @@ describe('the command line, the report and the formulas agree on one analysis', 
       for (const s of [A, B]) {
         const fromReport = report.series.find((r: { name: string }) => r.name.replace(/^ln\((.*)\)$/, '$1') === s).order;
         const order = json(csv, ['order', '--series', s, ...common]).order;
-        const both = moor.order([...cells[A].map((r, i) => [r[0], cells[B][i][0]])], null, null, prep) as unknown as number[][];
+        const both = moor.order([...cells[A].map((r, i) => [r[0], cells[B][i][0]])], null, null, null, prep) as unknown as number[][];
         expect([order, both[0][s === A ? 0 : 1]], `order of ${s}`).toEqual([fromReport, fromReport]);
       }
 

@@ -48,7 +48,7 @@ describe('the demo block', () => {
 
   it('points every number at the table by structured reference, with the report\'s settings', () => {
     const r = (label: string) => formula(`J${rowOf(demo.built, label)}`);
-    expect(r('Does GateGasoil wander?')).toBe('=INDEX(MOOR.ORDER(HSTACK(QuennelPrices[GateGasoil],QuennelPrices[DockDiesel]),0.05,"const",$J$5),1,1)');
+    expect(r('Does GateGasoil wander?')).toBe('=INDEX(MOOR.ORDER(HSTACK(QuennelPrices[GateGasoil],QuennelPrices[DockDiesel]),0.05,"const","adf",$J$5),1,1)');
     expect(r('Tied? Engle-Granger, GateGasoil on DockDiesel')).toBe('=MOOR.ENGLEGRANGER(QuennelPrices[GateGasoil],QuennelPrices[DockDiesel],"const","aic","headline",$J$5)');
     expect(r('Tied? Engle-Granger, DockDiesel on GateGasoil')).toBe('=MOOR.ENGLEGRANGER(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"const","aic","headline",$J$5)');
     expect(r('Tied? Phillips-Ouliaris')).toBe('=MOOR.PHILLIPSOULIARIS(QuennelPrices[DockDiesel],QuennelPrices[GateGasoil],"const","auto","headline",$J$5)');

@@ -7,6 +7,7 @@ import { leaderStepView } from '../../taskpane/ui/views/leader-view';
 import { chosenPair, pairOptions } from '../../taskpane/ui/views/pair-choice';
 import { relationStepView } from '../../taskpane/ui/views/relation-view';
 import { seriesStepView } from '../../taskpane/ui/views/series-view';
+import { showNumber } from '../../taskpane/ui/views/numbers';
 import { tiedStepView } from '../../taskpane/ui/views/tied-view';
 import { COLUMN, demoReport } from './demo-reports';
 
@@ -44,7 +45,14 @@ describe('How each series moves', () => {
     expect(gasoil.warnings.some((w) => /ADF and KPSS disagree for GateGasoil/.test(w))).toBe(true);
     expect(v.warnings.some((w) => /disagree for GateGasoil/.test(w))).toBe(false);
     expect(gasoil.tests.map((t) => t.stage)).toEqual(['Price levels', 'Changes from day to day', 'Changes of those changes']);
-    expect(gasoil.tests[0].adf).toMatchObject({ label: 'Unit root (ADF)', decision: 'does not reject' });
+    expect(gasoil.tests[0].adf).toMatchObject({ label: 'Unit root (ADF), decides', decision: 'does not reject' });
+    // DF-GLS beside ADF and KPSS on the levels, each with the engine's critical value at the report's level.
+    const levels = two.series[0].steps[0];
+    expect(gasoil.tests[0].gls?.label).toBe('Unit root, more power against a slow return (DF-GLS)');
+    expect(gasoil.tests[0].gls?.note).toContain(`Rejects below ${showNumber(levels.gls!.critical['5%'])} at 5%`);
+    expect(gasoil.tests[0].adf.note).toContain(`Rejects below ${showNumber(levels.adf.critical['5%'])} at 5%`);
+    expect(gasoil.tests[1].gls).toBeNull();
+    expect(gasoil.decidedBy).toMatch(/^Decided by ADF/);
   });
 
   it('marks a stationary series apart and says not every price wanders', () => {

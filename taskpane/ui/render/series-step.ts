@@ -11,7 +11,8 @@ export function renderSeriesStep(view: SeriesStepView, onChoice: (key: ChoiceKey
     el('h3', {}, item.name, el('span', { class: 'order' }, ` ${item.orderText}`)),
     verdictLine(item.mark, item.verdict),
     el('details', {}, el('summary', {}, 'The tests behind it'),
-      ...item.tests.map((t) => testTable(t.stage, [t.adf, t.kpss]))),
+      el('p', { class: 'decided-by', 'data-role': 'decided-by' }, item.decidedBy),
+      ...item.tests.map((t) => testTable(t.stage, t.gls ? [t.adf, t.gls, t.kpss] : [t.adf, t.kpss]))),
     warningsBox('Worth knowing', item.warnings)));
   return el('div', { class: 'step-body' },
     el('p', { class: 'headline' }, view.headline),

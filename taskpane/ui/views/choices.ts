@@ -12,6 +12,8 @@ export interface StageChoices {
   deterministic: Deterministic;
   lagRule: 'aic' | 'bic';
   johansenCase: JohansenCase | 'auto';
+  /** The unit-root test that decides whether each price's levels wander. */
+  unitRootTest: 'adf' | 'dfgls';
 }
 
 /** Which of the stage choices a control sets. */
@@ -38,7 +40,7 @@ export interface ChoiceView {
 }
 
 /** The stage choices at their defaults. */
-export const DEFAULT_CHOICES: StageChoices = { deterministic: 'const', lagRule: 'aic', johansenCase: 'auto' };
+export const DEFAULT_CHOICES: StageChoices = { deterministic: 'const', lagRule: 'aic', johansenCase: 'auto', unitRootTest: 'adf' };
 
 /** When each Johansen case suits prices, in a line. */
 const CASE_WHY: Record<JohansenCase, string> = {
@@ -64,6 +66,14 @@ const OPTIONS: Record<ChoiceKey, { label: string; matters: string; options: Choi
     options: [
       { value: 'aic', label: 'Generous (AIC)', why: 'Allows more past changes; safer when moves echo for several days.' },
       { value: 'bic', label: 'Sparing (BIC)', why: 'Prefers fewer past changes; steadier in short samples.' },
+    ],
+  },
+  unitRootTest: {
+    label: 'Which test decides whether a price wanders',
+    matters: 'A price that returns to its mean only slowly looks much like one that wanders; a test with more power tells them apart more often.',
+    options: [
+      { value: 'adf', label: 'The usual test (ADF)', why: 'The long-standing choice; every later step of the walk was first checked with it.' },
+      { value: 'dfgls', label: 'The test with more power (DF-GLS)', why: 'Removes the level before testing, so a slow return to a mean is caught more often; the changes still use ADF.' },
     ],
   },
   johansenCase: {
@@ -92,5 +102,5 @@ export function choiceViews(keys: readonly ChoiceKey[], settings: Pick<Diagnosti
 
 /** The stage choices of a report (what it was made with). */
 export function choicesOf(settings: Pick<DiagnosticSettings, ChoiceKey>): StageChoices {
-  return { deterministic: settings.deterministic, lagRule: settings.lagRule, johansenCase: settings.johansenCase };
+  return { deterministic: settings.deterministic, lagRule: settings.lagRule, johansenCase: settings.johansenCase, unitRootTest: settings.unitRootTest ?? 'adf' };
 }

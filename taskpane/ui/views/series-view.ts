@@ -1,10 +1,12 @@
 /**
  * The view of "How each series moves": for each series, whether its price wanders (I(1)),
  * keeps returning to a level (I(0)) or is something else, in one sentence from the engine,
- * with the ADF and KPSS numbers behind it, whether the two tests agree, and its warnings;
+ * with the ADF, DF-GLS and KPSS numbers behind it (each with its critical value), which test decided, whether the two tests agree, and its warnings;
  * then the chart of the series rebased to 100 and the deterministic-terms choice.
  */
 import type { DiagnosticReport, SeriesReport } from '../../../addin/report/report-types';
+import type { TestSummary } from '../../../addin/report/test-summary';
+import { showNumber } from './numbers';
 import { cautionsView, type CautionsView } from './cautions-view';
 import { chartModelsOf } from './chart-list';
 import type { ChartModel } from './chart-models';
@@ -20,7 +22,9 @@ export interface SeriesItemView {
   verdict: string;
   /** Whether ADF and KPSS tell the same story (the engine's warning says more when not). */
   testsAgree: boolean;
-  tests: { stage: string; adf: TestRowView; kpss: TestRowView }[];
+  tests: { stage: string; adf: TestRowView; kpss: TestRowView; gls: TestRowView | null }[];
+  /** Which test decided the levels, in words. */
+  decidedBy: string;
   warnings: string[];
 }
 
@@ -48,18 +52,38 @@ export function seriesMark(s: Pick<SeriesReport, 'order'>): VerdictMark {
   return mark('Drifts faster than a random walk', 'no');
 }
 
+/** The engine's critical value at the report's level, in words ("rejects below -2.89 at 5%"); null when the test has none there. */
+export function criticalWords(test: TestSummary, alpha: number): string | null {
+  const key = `${Math.round(alpha * 1000) / 10}%`;
+  const value = test.critical[key];
+  if (value === undefined) return null;
+  return `rejects ${test.rejectTail === 'lower' ? 'below' : 'above'} ${showNumber(value)} at ${key}`;
+}
+
+/** A unit-root test row with its critical value in its note. */
+function unitRootRow(label: string, test: TestSummary, alpha: number): TestRowView {
+  const row = testRow(label, test);
+  const critical = criticalWords(test, alpha);
+  if (!critical) return row;
+  return { ...row, note: row.note ? `${critical[0].toUpperCase()}${critical.slice(1)}; ${row.note}` : `${critical[0].toUpperCase()}${critical.slice(1)}.` };
+}
+
 /** The view of one series. */
-export function seriesItem(s: SeriesReport, period: string): SeriesItemView {
+export function seriesItem(s: SeriesReport, period: string, alpha = 0.05): SeriesItemView {
   return {
     name: s.name,
     mark: seriesMark(s),
     orderText: s.orderText,
     verdict: s.verdict,
     testsAgree: s.agree,
+    decidedBy: s.decidedBy === 'dfgls'
+      ? 'Decided on the levels by the test with more power against a slow return to a mean (DF-GLS); the changes by ADF.'
+      : 'Decided by ADF; the test with more power against a slow return to a mean (DF-GLS) is shown beside it.',
     tests: s.steps.map((step) => ({
       stage: stageName(step.differences, period),
-      adf: testRow('Unit root (ADF)', step.adf),
-      kpss: testRow('Steadiness (KPSS)', step.kpss),
+      adf: unitRootRow(s.decidedBy === 'adf' || step.differences > 0 ? 'Unit root (ADF), decides' : 'Unit root (ADF)', step.adf, alpha),
+      kpss: unitRootRow('Steadiness (KPSS)', step.kpss, alpha),
+      gls: step.gls ? unitRootRow(s.decidedBy === 'dfgls' ? 'Unit root, more power against a slow return (DF-GLS), decides' : 'Unit root, more power against a slow return (DF-GLS)', step.gls, alpha) : null,
     })),
     warnings: s.warnings.slice(),
   };
@@ -89,9 +113,9 @@ export function seriesStepView(report: DiagnosticReport): SeriesStepView {
   const headline = seriesHeadline(wandering, total);
   return {
     headline,
-    items: report.series.map((s) => seriesItem(s, report.data.period)),
+    items: report.series.map((s) => seriesItem(s, report.data.period, report.settings.alpha)),
     chart: chartModelsOf(report).series,
-    choices: choiceViews(['deterministic'], report.settings),
+    choices: choiceViews(['deterministic', 'unitRootTest'], report.settings),
     // Each series shows its own warnings; the step's list keeps the data's.
     warnings: report.warnings.filter((w) => !report.series.some((s) => s.warnings.includes(w))),
     cautions: cautionsView(report),
