@@ -9,13 +9,15 @@ import { MooringInputError } from '../../addin/errors';
 import { describePreparation, parsePreparation, type Preparation } from '../../addin/series/preparation';
 import type { PairReport } from '../../addin/report/pair-types';
 import type { DiagnosticReport } from '../../addin/report/report-types';
-import { cellAddress, parseRange, rangeAddress } from '../workbook/a1-address';
+import { cellAddress, parseCell, parseRange, rangeAddress } from '../workbook/a1-address';
 import { safeName } from '../workbook/block-geometry';
 import type { BlockToWrite, ChartToAdd, DataRegion } from '../workbook/port';
 import { encodeBlockNote } from './block-note';
 import { BlockGrid, COL } from './block-grid';
 import { COLUMN_WIDTHS, NUMBER_FORMAT, STYLE } from './block-style';
-import { SeriesReferences } from './series-reference';
+import { JoinedReferences } from './joined-references';
+import { joinedRegionFor } from './joined-region';
+import { SeriesReferences, type PriceReferences } from './series-reference';
 import { closingStage, leadStage, lineStage, seriesStage, tieStage, type StageContext } from './stage-rows';
 
 /** A block and its chart, ready to plan and write. */
@@ -60,12 +62,20 @@ const CHART_COLS = ['Date', 'Spread', 'Upper band (+2 sd)', 'Lower band (-2 sd)'
 const TOP_ROWS = { title: 0, heads: 1, spill: 2 };
 
 /** Builds the block of one pair of the report over the region its data came from, under `blockName` (default the pair's first name). */
-export function buildPairBlock(report: DiagnosticReport, pair: { a: string; b: string }, region: DataRegion, placement: BlockPlacement = besideRegion(region), blockName?: string): PairBlock {
+export function buildPairBlock(report: DiagnosticReport, pair: { a: string; b: string }, sheetRegion: DataRegion, placement: BlockPlacement = besideRegion(sheetRegion), blockName?: string): PairBlock {
   const p = findPair(report, pair.a, pair.b);
-  const refs = new SeriesReferences(region);
+  // Series of the report on several calendars: the block joins them on their dates with one
+  // MOOR.COMMONDATES formula, placed after the chart's columns, and reads its spill.
+  const joined = joinedRegionFor(sheetRegion, report.series.map((s) => s.name));
+  const region: DataRegion = joined ?? sheetRegion;
+  const joinCol = COL.chart + CHART_COLS.length + 1;
+  const width = joined ? joinCol + joined.headers.length : COL.chart + CHART_COLS.length;
+  const anchorAt = parseCell(placement.anchor);
+  const joinRefs = joined ? new JoinedReferences(joined, cellAddress({ row: anchorAt.row + TOP_ROWS.spill, col: anchorAt.col + joinCol }, true)) : null;
+  const refs: PriceReferences = joinRefs ?? new SeriesReferences(region);
   const y = p.relation?.dependent ?? p.a;
   const x = p.relation?.regressor ?? p.b;
-  const g = new BlockGrid(placement.anchor, COL.chart + CHART_COLS.length);
+  const g = new BlockGrid(placement.anchor, width);
   const { data } = report;
   const name = blockName ?? blockNameFor(p.a, p.b);
 
@@ -110,6 +120,11 @@ export function buildPairBlock(report: DiagnosticReport, pair: { a: string; b: s
     { formula: `=MOOR.ZSCORE(${yRef},${xRef},,${prepCell})`, format: { numberFormat: NUMBER_FORMAT.statistic } },
   ];
   spills.forEach((cell, k) => g.set(spillRow, COL.chart + k, cell));
+  if (joinRefs) {
+    joinRefs.heads.forEach((head, k) => g.set(TOP_ROWS.heads, joinCol + k, { value: head, format: STYLE.columnHead }));
+    g.set(spillRow, joinCol, { formula: joinRefs.joinFormula(), format: { numberFormat: NUMBER_FORMAT.date } });
+    g.set(TOP_ROWS.title, joinCol, { value: 'The prices on the dates every series shares: every number of this block is read from these columns.', format: STYLE.note });
+  }
 
   const context: StageContext = { report, pair: p, refs, y, x, zSpill, prep: prepCell };
   seriesStage(g, context);
@@ -126,6 +141,9 @@ export function buildPairBlock(report: DiagnosticReport, pair: { a: string; b: s
   const left = g.anchor.col + COL.chart;
   const right = left + CHART_COLS.length - 1;
   const reserved = spillBottom > blockBottom ? [rangeAddress({ top: blockBottom + 1, bottom: spillBottom, left, right })] : [];
+  if (joined && spillBottom > blockBottom) {
+    reserved.push(rangeAddress({ top: blockBottom + 1, bottom: spillBottom, left: g.anchor.col + joinCol, right: g.anchor.col + width - 1 }));
+  }
   const column = (k: number) => rangeAddress({ top: spillTop, bottom: spillBottom, left: left + k, right: left + k });
 
   const block: BlockToWrite = {
@@ -137,7 +155,7 @@ export function buildPairBlock(report: DiagnosticReport, pair: { a: string; b: s
     reserved,
     note: encodeBlockNote({
       sheet: region.sheet, address: region.address, table: region.tableName, a: p.a, b: p.b, reserved,
-      analysis: { preparation: report.settings.preparation ?? '', alpha: report.settings.alpha, deterministic: report.settings.deterministic, lagRule: report.settings.lagRule, johansenCase: report.settings.johansenCase },
+      analysis: { preparation: report.settings.preparation ?? '', alpha: report.settings.alpha, deterministic: report.settings.deterministic, lagRule: report.settings.lagRule, johansenCase: report.settings.johansenCase, unitRootTest: report.settings.unitRootTest ?? 'adf' },
     }),
   };
   const chart: ChartToAdd = {
@@ -149,7 +167,7 @@ export function buildPairBlock(report: DiagnosticReport, pair: { a: string; b: s
       { name: 'Upper band (+2 sd)', values: column(2) },
       { name: 'Lower band (-2 sd)', values: column(3) },
     ],
-    anchor: cellAddress({ row: g.anchor.row + TOP_ROWS.heads, col: right + 2 }),
+    anchor: cellAddress({ row: g.anchor.row + TOP_ROWS.heads, col: g.anchor.col + width + 1 }),
     name,
   };
   return { block, chart };

@@ -24,8 +24,18 @@ export function textLiteral(text: string): string {
   return `"${text.replace(/"/g, '""')}"`;
 }
 
+/** How a block's formulas point at the prices: the columns of a region, or the columns of a join of its calendars (joined-references.ts). */
+export interface PriceReferences {
+  readonly live: boolean;
+  column(name: string): string;
+  pair(a: string, b: string): string;
+  dates(): string | null;
+  readonly rowCount: number;
+  describe(): string;
+}
+
 /** Points a block's formulas at the columns of one data region. */
-export class SeriesReferences {
+export class SeriesReferences implements PriceReferences {
   private readonly range: CellRange;
 
   constructor(private readonly region: DataRegion) {
@@ -66,6 +76,12 @@ export class SeriesReferences {
       return qualified(this.region.sheet, this.dataColumns(Math.min(i, j), Math.max(i, j)));
     }
     return `HSTACK(${this.column(a)},${this.column(b)})`;
+  }
+
+  /** The data rows of the columns from index `from` to index `to`: Table[[A]:[B]] or Sheet!$A$2:$B$781. */
+  span(from: number, to: number): string {
+    if (this.region.tableName) return `${this.region.tableName}[[${this.bare(this.region.headers[from])}]:[${this.bare(this.region.headers[to])}]]`;
+    return qualified(this.region.sheet, this.dataColumns(from, to));
   }
 
   /** The date column's data rows, or null when the region has none. */

@@ -3,7 +3,7 @@
  * through the very implementations functions/functions.ts registers with Excel (so a test
  * of the block exercises the same code a user's cell runs), and the handful of Excel
  * built-ins the results block uses (IF, ISNUMBER, NA, ABS, AVERAGE, STDEV.S, COUNT, ROWS,
- * ROW, INDEX, HSTACK, ISNA, MATCH). Any other name is #NAME?, as in Excel for an unknown function.
+ * ROW, INDEX, HSTACK, CHOOSECOLS, ISNA, MATCH). Any other name is #NAME?, as in Excel for an unknown function.
  */
 import * as registered from '../../functions/functions';
 import {
@@ -143,6 +143,22 @@ const BUILTINS: Record<string, Builtin> = {
     const cells = gridOf(arg(call, 1), call.read).flat();
     const k = cells.findIndex((x) => x === want);
     return k < 0 ? new FormulaError('#N/A', 'MATCH found no such value.') : k + 1;
+  },
+  // CHOOSECOLS(array, k, ...): the k-th columns of the array, in the order given (negative k counts from the right).
+  CHOOSECOLS: (call) => {
+    if (arg(call, 0) instanceof FormulaError) return arg(call, 0);
+    const grid = gridOf(arg(call, 0), call.read);
+    const width = grid[0]?.length ?? 0;
+    const picks: number[] = [];
+    for (let i = 1; i < call.args.length; i++) {
+      const k = toNumber(scalarOf(arg(call, i), call.read));
+      if (k instanceof FormulaError) return k;
+      const at = k < 0 ? width + k + 1 : k;
+      if (!Number.isInteger(k) || at < 1 || at > width) return new FormulaError('#VALUE!', 'CHOOSECOLS asks for a column outside the array.');
+      picks.push(at - 1);
+    }
+    if (picks.length === 0) return new FormulaError('#VALUE!', 'CHOOSECOLS needs at least one column number.');
+    return arrayOf(grid.map((row) => picks.map((c) => row[c])));
   },
   HSTACK: (call) => {
     const grids = call.args.map((a) => gridOf(a ?? null, call.read));

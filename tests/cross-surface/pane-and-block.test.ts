@@ -6,7 +6,8 @@
  * The pane's side is the engine report made exactly as the pane makes it (prepareData, then
  * diagnose with the pane's options): every number the pane's steps show is read from that
  * report. The block's side is what its live MOOR formulas calculate in the in-memory
- * workbook, through the same implementations Excel calls. Source of the expected values: the
+ * workbook, through the same implementations Excel calls. Two price histories on two calendars
+ * are joined on their dates by the pane and by the block's MOOR.COMMONDATES formula alike. Source of the expected values: the
  * other surface (the check is agreement, 1e-12 relative); the demo data are our own.
  */
 import { describe, expect, it } from 'vitest';
@@ -21,6 +22,8 @@ import { loadCsvTable } from '../../taskpane/workbook/demo-workbook';
 import type { MemoryWorkbook } from '../../taskpane/workbook/memory-workbook';
 import type { CellContent, DataRegion } from '../../taskpane/workbook/port';
 import { DEMO_CSV, PAIR, rowOf } from '../pane-workbook/demo-block';
+import { sharedDates, twoCalendarCsv } from '../pane/two-calendars';
+import { refreshBlock } from '../../taskpane/block/refresh-block';
 
 interface Combo {
   name: string;
@@ -201,6 +204,43 @@ describe('the pane and the block it writes show the same numbers', () => {
       wb.appendRows('QuennelPrices', twelveRows(region));
       region = await wb.readTable('QuennelPrices');
       report = paneReport(region, combo);
+      expectSameNumbers(wb, built, paneNumbers(report));
+    }, 60_000);
+  }
+});
+
+describe('two price histories on two calendars: the block joins them as the pane does', () => {
+  const CASES = [
+    { name: 'logs on, every shared date, ADF decides the orders', log: true, from: null, to: null, unitRootTest: 'adf' as const },
+    { name: 'logs off, a window of dates, DF-GLS decides the orders', log: false, from: '2022-06-01', to: '2024-06-28', unitRootTest: 'dfgls' as const },
+  ];
+  for (const c of CASES) {
+    it(`${c.name}: the same numbers when written and after the block is refreshed`, async () => {
+      const wb = loadCsvTable(twoCalendarCsv());
+      const region = await wb.readTable('QuennelPrices');
+      const choice: DataChoice = { columns: [PAIR.a, PAIR.b].map((n) => region.headers.indexOf(n)), log: c.log, skipGaps: true, from: c.from, to: c.to, alpha: 0.05 };
+      const prepared = prepareData(region, choice);
+      const report = diagnose(prepared.input, {
+        log: choice.log, alpha: choice.alpha, window: prepared.window, preparation: prepared.prepText,
+        deterministic: 'const', lagRule: 'aic', johansenCase: 'auto', unitRootTest: c.unitRootTest,
+      });
+      expect(report.warnings[0]).toMatch(/^Joined on dates/);
+      expect(report.settings.unitRootTest).toBe(c.unitRootTest);
+      const built = buildPairBlock(report, PAIR, region, { sheet: 'Prices', anchor: 'I1' });
+      // The block joins the two calendars with one formula and every number reads its spill.
+      const formulas = built.block.cells.flat().map((x) => x.formula ?? '').filter((f) => f !== '');
+      expect(formulas).toContain('=MOOR.COMMONDATES(QuennelPrices[[Date A]:[GateGasoil]],QuennelPrices[[Date B]:[DockDiesel]])');
+      expect(formulas.filter((f) => f.includes('QuennelPrices[') && !f.includes('COMMONDATES'))).toEqual([]);
+      expect(formulas.find((f) => f.includes('MOOR.ORDER'))).toContain(`"${c.unitRootTest}"`);
+      const outcome = await writePlannedBlock(wb, await planBlockWrite(wb, built.block, built.chart), true);
+      expect(outcome.ok).toBe(true);
+      expectSameNumbers(wb, built, paneNumbers(report));
+      expect(String(wb.shownValue('Prices', `I${rowOf(built, 'Numbers from')}`))).toMatch(/joined on the dates every series shares by the MOOR.COMMONDATES formula/);
+      expect(wb.shownValue('Prices', `J${rowOf(built, 'Rows in the data now')}`)).toBe(sharedDates().length);
+
+      // A refresh re-reads the sheet and runs the analysis the block's note recorded: the same numbers.
+      const again = await refreshBlock(wb, built.block.name);
+      expect(again.ok).toBe(true);
       expectSameNumbers(wb, built, paneNumbers(report));
     }, 60_000);
   }

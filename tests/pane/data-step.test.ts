@@ -115,7 +115,7 @@ describe('date cells', () => {
 });
 
 describe('a second date column', () => {
-  it('is never offered as a series, and says how to line the series up', async () => {
+  it('is never offered as a series, and says its prices are joined on their dates', async () => {
     const { describeColumns } = await import('../../taskpane/ui/data/columns');
     const region = {
       sheet: 'Prices', address: 'A1:D4', tableName: null, firstDataRow: 2, dateColumn: 0,
@@ -124,6 +124,6 @@ describe('a second date column', () => {
     };
     const columns = describeColumns(region as never);
     expect(columns.map((c) => c.usable)).toEqual([false, true, false, true]);
-    expect(columns[2].note).toMatch(/another date column.*MOOR.COMMONDATES/);
+    expect(columns[2].note).toMatch(/another date column: prices to its right are joined with the others on the dates they share/);
   });
 });

@@ -1,10 +1,11 @@
 /**
  * What the columns of a detected region hold, so the first step can offer the columns of
  * prices and leave out the rest with a reason: a column counts as numbers when more than half
- * of its filled cells are numbers (the command line's rule), and the date column is never a
- * series.
+ * of its filled cells are numbers (the command line's rule), and a date column is never a
+ * series (prices beside a second date column are joined on their dates: prepare-data.ts).
  */
 import { headerNamesDate } from '../../../addin/csv/date-column';
+import { calendarsOf } from '../../block/joined-region';
 import type { DataRegion } from '../../workbook/port';
 
 /** One column of the region as the first step offers it. */
@@ -25,6 +26,7 @@ export interface ColumnInfo {
 
 /** The columns of a region, left to right, each with whether it can be a series. */
 export function describeColumns(region: DataRegion): ColumnInfo[] {
+  const dateColumns = new Set(calendarsOf(region).map((c) => c.date));
   return region.headers.map((raw, index) => {
     const header = String(raw ?? '').trim() || `column ${index + 1}`;
     let filled = 0;
@@ -37,7 +39,7 @@ export function describeColumns(region: DataRegion): ColumnInfo[] {
     }
     let note: string | null = null;
     if (index === region.dateColumn) note = 'the date column: it labels the rows';
-    else if (headerNamesDate(header)) note = 'another date column: the pane reads one; line the series up on their dates first (MOOR.COMMONDATES)';
+    else if (dateColumns.has(index) || headerNamesDate(header)) note = 'another date column: prices to its right are joined with the others on the dates they share';
     else if (filled === 0) note = 'empty';
     else if (numbers * 2 <= filled) note = `mostly not numbers (${numbers} of ${filled} cells)`;
     return { index, header, filled, numbers, usable: note === null, note };

@@ -15,6 +15,7 @@ import { isoDayNumber } from '../../../addin/dates/read-dates';
 import { cleanBlock } from '../../../addin/series/clean-block';
 import { AS_GIVEN, describePreparation, windowPositions, type Preparation } from '../../../addin/series/preparation';
 import type { DataRegion } from '../../workbook/port';
+import { isJoined, joinedRegionFor } from '../../block/joined-region';
 import { describeColumns } from './columns';
 import { dateCellText } from './excel-date';
 
@@ -61,19 +62,36 @@ export interface PreparedData {
   prep: Preparation;
   /** The preparation in words ("log, skip gaps, from row 260"). */
   prepText: string;
+  /**
+   * The region the analysis reads: the detected one, or, when the chosen series sit on several
+   * calendars (a date column each), those calendars joined on their dates (joined-region.ts).
+   * Rows and the window count in this region.
+   */
+  region: DataRegion;
 }
 
-/** Cleans the chosen columns of the region and cuts the sample window. */
-export function prepareData(region: DataRegion, choice: DataChoice): PreparedData {
-  const columns = describeColumns(region);
-  if (choice.columns.length < 2) {
+/**
+ * Cleans the chosen columns of the region and cuts the sample window. Series chosen from
+ * several calendars are first joined on their dates, and the join is said in the notices.
+ */
+export function prepareData(sheetRegion: DataRegion, sheetChoice: DataChoice): PreparedData {
+  if (sheetChoice.columns.length < 2) {
     throw new MooringInputError('Choose at least two series: the diagnosis compares prices in pairs.');
   }
+  const sheetColumns = describeColumns(sheetRegion);
+  const chosenNames = sheetChoice.columns.map((j) => sheetColumns[j]?.header ?? `column ${j + 1}`);
+  const joined = joinedRegionFor(sheetRegion, chosenNames);
+  const region = joined ?? sheetRegion;
+  const choice = joined ? { ...sheetChoice, columns: chosenNames.map((n) => joined.headers.indexOf(n)) } : sheetChoice;
+  const columns = joined ? joined.headers.map((header, index) => ({ index, header })) : sheetColumns;
   const names = choice.columns.map((j) => columns[j]?.header ?? `column ${j + 1}`);
   const n = region.rows.length;
   const first = region.firstDataRow;
   const sheetDates = region.dateColumn === null ? null : region.rows.map((row) => dateCellText(row[region.dateColumn as number] ?? null));
-  const sheetLabel = (i: number): string => (sheetDates?.[i] ? `row ${first + i} (${sheetDates[i]})` : `row ${first + i}`);
+  const sheetLabel = (i: number): string => {
+    if (isJoined(region)) return `shared date ${region.join.rowLabels[i]}`;
+    return sheetDates?.[i] ? `row ${first + i} (${sheetDates[i]})` : `row ${first + i}`;
+  };
   // Rows that run newest first are read bottom up, so every test sees them oldest first; the
   // preparation says so ("newest first") and the block's formulas read them the same way.
   const newestFirst = runsNewestFirst(sheetDates, sheetLabel, region);
@@ -88,6 +106,7 @@ export function prepareData(region: DataRegion, choice: DataChoice): PreparedDat
     source: `${region.sheet}!${region.address}`,
   });
   if (newestFirst) input.notices = [`The rows of ${region.sheet}!${region.address} run newest first; Mooring reads them oldest first.`];
+  if (isJoined(region)) input.notices = region.join.notices.slice();
   const timeRows = Array.from(block[0].rows);
   const range = windowFromBounds({ from: choice.from, to: choice.to }, timeRows, dates, first);
   // The window as rows of the region (positions from the top), read back through the one
@@ -120,6 +139,7 @@ export function prepareData(region: DataRegion, choice: DataChoice): PreparedDat
     names,
     prep,
     prepText: describePreparation(prep),
+    region,
   };
 }
 

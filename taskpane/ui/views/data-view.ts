@@ -4,6 +4,7 @@
  * many rows the choices leave, which were dropped and why. Built from the detected region
  * and the prepared input before any test runs, so the user sees the sample first.
  */
+import { calendarsOf } from '../../block/joined-region';
 import type { DataRegion } from '../../workbook/port';
 import type { ColumnInfo } from '../data/columns';
 import type { PreparedData } from '../data/prepare-data';
@@ -44,7 +45,10 @@ export const DROPPED_LISTED = 20;
 export function dataStepView(region: DataRegion, columns: readonly ColumnInfo[], picked: readonly number[], prepared: PreparedData | null, problem: string | null): DataStepView {
   const where = `${region.sheet}, ${region.address}`;
   const found = region.tableName ? `Found the table '${region.tableName}' on ${where}.` : `Found a block of cells on ${where} (not a table).`;
-  const dateColumn = region.dateColumn === null ? 'No date column: rows are named by their sheet row.' : `Dates from the column '${columns[region.dateColumn]?.header ?? ''}'.`;
+  const calendars = calendarsOf(region);
+  const dateColumn = calendars.length > 1
+    ? `Dates from the columns ${calendars.map((c) => `'${columns[c.date]?.header ?? ''}'`).join(', ')}: each dates the prices to its right, and prices on different dates are joined on the dates they share.`
+    : region.dateColumn === null ? 'No date column: rows are named by their sheet row.' : `Dates from the column '${columns[region.dateColumn]?.header ?? ''}'.`;
   const dropped = prepared ? prepared.dropped.map((d) => `${d.series}, ${d.row}: ${d.reason}`) : [];
   const shown = dropped.length > DROPPED_LISTED ? [...dropped.slice(0, DROPPED_LISTED), `and ${dropped.length - DROPPED_LISTED} more`] : dropped;
   let rowsSentence: string | null = null;
