@@ -15,11 +15,14 @@
 import { powerOfTwoScale, scaled } from '../linalg/power-of-two-scale';
 import { MooringInputError } from '../errors';
 import { chiSquareUpperP, fCriticalValues, fUpperP } from '../distributions';
-import { leastSquares } from '../regression/least-squares';
+import { HouseholderQr, assertFullRank } from '../linalg/householder-qr';
 import type { TestResult } from '../result';
 import { checkedBlock, laggedColumn } from '../var/var-design';
-import { resolveLags, liftedWarning, type LagChoice } from './causality-lags';
+import { resolveLags, liftedWarning, type LagChoice, type ResolvedLags } from './causality-lags';
 import { DEFAULT_PAIR_NAMES, leadLagHypotheses, possessive, type DataForm, type PairNames } from './causality-wording';
+
+/** Smallest share of its own size a cause lag's pivot may keep for SSR_r - SSR_u to come from R_22 b_2. */
+const PIVOT_FLOOR = 1e-4;
 
 /** Options of grangerF. */
 export interface GrangerFOptions {
@@ -29,6 +32,8 @@ export interface GrangerFOptions {
   maxLags?: number;
   /** Whether the arrays are values or changes; only the wording of the hypotheses depends on it. */
   form?: DataForm;
+  /** The lags already resolved on this pair (leadLag chooses them once for both directions). */
+  resolved?: ResolvedLags;
 }
 
 /** F test (with chi-square and likelihood-ratio forms) that the cause's past helps predict the effect. */
@@ -41,7 +46,7 @@ export function grangerF(cause: ArrayLike<number>, effect: ArrayLike<number>, op
   const x = scaled(rawX, powerOfTwoScale(rawX));
   const y = scaled(rawY, fy);
   const T = y.length;
-  const resolved = resolveLags([x, y], options.lags, options.maxLags);
+  const resolved = options.resolved ?? resolveLags([x, y], options.lags, options.maxLags);
   const P = resolved.lags;
   if (T <= 3 * P + 1) {
     const most = Math.floor((T - 2) / 3);
@@ -60,23 +65,47 @@ export function grangerF(cause: ArrayLike<number>, effect: ArrayLike<number>, op
   const constant = new Float64Array(n).fill(1);
   const ownNames = own.map((_, j) => `${names.effect} lag ${j + 1}`);
   const otherNames = other.map((_, j) => `${names.cause} lag ${j + 1}`);
-  const restricted = leastSquares(response, [...own, constant], { names: [...ownNames, 'constant'], withoutCovariance: true });
-  const unrestricted = leastSquares(response, [...own, ...other, constant], {
-    names: [...ownNames, ...otherNames, 'constant'],
-    withoutCovariance: true,
-  });
+  // One Householder QR of X = [own lags, constant, cause's lags] = QR serves both regressions.
+  // The unrestricted fit is solved with one step of refinement and SSR_u summed from its explicit
+  // residuals, as leastSquares does. The restricted regression is the leading block, so with
+  // z = Q'y its SSR exceeds SSR_u by the squares of z over the cause's P columns, and there
+  // z_2 = R_22 b_2 (R_22 the trailing P x P block of R, b_2 the cause's coefficients;
+  // Golub & Van Loan 2013, sec. 5.3.3): SSR_r - SSR_u = |R_22 b_2|^2, with the refined b_2.
+  // Where a lag of the cause is nearly a combination of the columns before it (its pivot keeps
+  // less than PIVOT_FLOOR of its size), b_2 is poorly determined and that product loses digits;
+  // there the restricted regression is solved on its own from the same factorisation.
+  const design = [...own, constant, ...other];
+  const qr = new HouseholderQr(design, n);
+  assertFullRank(qr, [...ownNames, 'constant', ...otherNames]);
+  const k = 2 * P + 1;
+  const unrestricted = refinedFit(qr, design, k, response);
+  const ssrU = unrestricted.ssr;
+  let reduction = 0;
+  if (causeLagsSeparate(qr, design, P + 1, k)) {
+    for (let i = P + 1; i < k; i++) {
+      let s = 0;
+      for (let j = i; j < k; j++) s += qr.r(i, j) * unrestricted.b[j];
+      reduction += s * s;
+    }
+  } else {
+    reduction = refinedFit(qr, design, P + 1, response).ssr - ssrU;
+  }
+  const ssrR = ssrU + reduction;
+  let mean = 0;
+  for (let i = 0; i < n; i++) mean += response[i];
+  mean /= n;
+  let tss = 0;
+  for (let i = 0; i < n; i++) tss += (response[i] - mean) * (response[i] - mean);
   // A perfect fit leaves nothing to compare (the reference library refuses it too).
-  if (!(unrestricted.ssr > 0) || unrestricted.rSquared > 1 - Number.EPSILON) {
+  if (!(ssrU > 0) || (tss > 0 && 1 - ssrU / tss > 1 - Number.EPSILON)) {
     throw new MooringInputError(
       `${names.effect} is predicted exactly by its own past and ${possessive(names.cause)} past, so no test is possible: check that the series are not copies, shifts or exact combinations of each other.`,
     );
   }
-  const ssrR = restricted.ssr;
-  const ssrU = unrestricted.ssr;
-  const dfDenom = unrestricted.dfResid;
-  const fStatistic = ((ssrR - ssrU) / P) / (ssrU / dfDenom);
-  const chiSquare = (n * (ssrR - ssrU)) / ssrU;
-  const likelihoodRatio = n * Math.log(ssrR / ssrU);
+  const dfDenom = n - (2 * P + 1);
+  const fStatistic = (reduction / P) / (ssrU / dfDenom);
+  const chiSquare = (n * reduction) / ssrU;
+  const likelihoodRatio = n * Math.log1p(reduction / ssrU);
   const form = options.form ?? 'values';
   const { nullHypothesis, alternative } = leadLagHypotheses(names, form);
   const warnings = liftedWarning(resolved);
@@ -109,4 +138,57 @@ export function grangerF(cause: ArrayLike<number>, effect: ArrayLike<number>, op
       { key: 'dataForm', label: 'Data tested', value: form },
     ],
   };
+}
+
+/**
+ * Least squares of y on the first m columns of the factorised design: coefficients from R's
+ * leading block and Q'y, one refinement step from the residuals (Golub & Van Loan 2013,
+ * sec. 5.3.8), and the SSR summed from the explicit residuals.
+ */
+function refinedFit(qr: HouseholderQr, columns: readonly Float64Array[], m: number, y: Float64Array): { b: Float64Array; ssr: number } {
+  const b = leadingSolve(qr, m, qr.qtY(y));
+  const r = residualsOn(columns, m, b, y);
+  const c = leadingSolve(qr, m, qr.qtY(r));
+  let moved = false;
+  for (let j = 0; j < m; j++) {
+    if (c[j] !== 0) moved = true;
+    b[j] += c[j];
+  }
+  const final = moved ? residualsOn(columns, m, b, y) : r;
+  let ssr = 0;
+  for (let i = 0; i < final.length; i++) ssr += final[i] * final[i];
+  return { b, ssr };
+}
+
+/** Solves R_m b = z[0..m) with R_m the leading m x m block of R. */
+function leadingSolve(qr: HouseholderQr, m: number, z: Float64Array): Float64Array {
+  const b = new Float64Array(m);
+  for (let i = m - 1; i >= 0; i--) {
+    let s = z[i];
+    for (let j = i + 1; j < m; j++) s -= qr.r(i, j) * b[j];
+    b[i] = s / qr.r(i, i);
+  }
+  return b;
+}
+
+/** y - (first m columns) b. */
+function residualsOn(columns: readonly Float64Array[], m: number, b: Float64Array, y: Float64Array): Float64Array {
+  const out = Float64Array.from(y);
+  for (let j = 0; j < m; j++) {
+    const c = columns[j];
+    const bj = b[j];
+    for (let i = 0; i < out.length; i++) out[i] -= bj * c[i];
+  }
+  return out;
+}
+
+/** Whether every column from..to-1 keeps at least PIVOT_FLOOR of its norm in its pivot |R_jj|. */
+function causeLagsSeparate(qr: HouseholderQr, columns: readonly Float64Array[], from: number, to: number): boolean {
+  for (let j = from; j < to; j++) {
+    const c = columns[j];
+    let norm2 = 0;
+    for (let i = 0; i < c.length; i++) norm2 += c[i] * c[i];
+    if (!(Math.abs(qr.r(j, j)) >= PIVOT_FLOOR * Math.sqrt(norm2))) return false;
+  }
+  return true;
 }

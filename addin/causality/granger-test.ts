@@ -16,6 +16,7 @@ import { DEFAULT_PAIR_NAMES, type PairNames } from './causality-wording';
 import type { CausalityMethod } from './choose-causality-test';
 import { errorCorrectionCausality } from './error-correction-causality';
 import { grangerF } from './granger-f';
+import type { PairWork } from './pair-work';
 import { todaYamamoto } from './toda-yamamoto';
 
 /** The method words grangerTest accepts. */
@@ -36,6 +37,8 @@ export interface GrangerTestOptions {
   alpha?: number;
   /** Toda-Yamamoto only: how a given extraLags was found, for the record. */
   extraLagsRule?: string;
+  /** Work shared by both directions of a pair (leadLag); used when cause and effect are its two series. */
+  work?: PairWork;
 }
 
 /** One direction's answer: which test, its result and, for the error-correction form, the long-run result. */
@@ -54,15 +57,22 @@ export function grangerTest(cause: ArrayLike<number>, effect: ArrayLike<number>,
   const method = options.method ?? 'f-levels';
   const base = { cause: names.cause, effect: names.effect, method };
   const lagOptions = { lags: options.lags, maxLags: options.maxLags };
+  // The pair's shared work, when cause and effect are its two series (in either order).
+  const at = options.work?.indexOf(cause) ?? -1;
+  const work = at >= 0 && options.work?.indexOf(effect) === 1 - at ? options.work : undefined;
   switch (method) {
     case 'f-levels':
-      return { ...base, test: grangerF(cause, effect, lagOptions, names), longRun: null };
+      return { ...base, test: grangerF(cause, effect, { ...lagOptions, resolved: work?.lagsOn('values') }, names), longRun: null };
     case 'f-differences': {
       const [x, y] = checkedBlock([cause, effect], [names.cause, names.effect]);
-      return { ...base, test: grangerF(differences(x), differences(y), { ...lagOptions, form: 'changes' }, names), longRun: null };
+      return { ...base, test: grangerF(differences(x), differences(y), { ...lagOptions, form: 'changes', resolved: work?.lagsOn('changes') }, names), longRun: null };
     }
     case 'toda-yamamoto':
-      return { ...base, test: todaYamamoto(cause, effect, { ...lagOptions, extraLags: options.extraLags, alpha: options.alpha, extraLagsRule: options.extraLagsRule }, names), longRun: null };
+      return {
+        ...base,
+        test: todaYamamoto(cause, effect, { ...lagOptions, extraLags: options.extraLags, alpha: options.alpha, extraLagsRule: options.extraLagsRule, work }, names),
+        longRun: null,
+      };
     case 'error-correction': {
       const ecm = errorCorrectionCausality(cause, effect, { ...lagOptions, equilibriumError: options.equilibriumError }, names);
       return { ...base, test: ecm.shortRun, longRun: ecm.longRun };

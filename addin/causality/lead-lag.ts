@@ -12,6 +12,7 @@ import { LEAD_LAG_CAUTION, levelText, pText, type PairNames } from './causality-
 import { METHOD_LABEL, chooseCausalityTest, type CausalityChoice, type CausalityMethod, type OrderEvidence } from './choose-causality-test';
 import { cautiousGivenOrder, cautiousOrder, orderEvidence } from './extra-lags';
 import { directionLeads, grangerTest, type CausalityDirection } from './granger-test';
+import { PairWork } from './pair-work';
 
 /** 'auto' picks the valid test; 'f', 'ty' and 'ecm' ask for the F test, Toda-Yamamoto or the error-correction form. */
 export type LeadLagMethod = 'auto' | 'f' | 'ty' | 'ecm';
@@ -202,6 +203,8 @@ export function leadLag(a: ArrayLike<number>, b: ArrayLike<number>, options: Lea
   const pair = checkedBlock([a, b], names);
   const facts = orderFacts(pair, names, options, alpha, method !== 'ecm');
   const choice = requestedChoice(method, data, facts, options.cointegrated);
+  // Both directions (and the companions) share the lag order and the VAR fit (pair-work.ts).
+  const work = new PairWork([pair[0], pair[1]], options.lags, options.maxLags);
 
   const run = (m: CausalityMethod, forward: boolean): LeadLagDirection => {
     const [cause, effect] = forward ? [pair[0], pair[1]] : [pair[1], pair[0]];
@@ -218,6 +221,7 @@ export function leadLag(a: ArrayLike<number>, b: ArrayLike<number>, options: Lea
         extraLagsRule: extraLags === undefined ? undefined : `highest order of integration (${facts.source}): ${names[0]} ${facts.a}, ${names[1]} ${facts.b}`,
         equilibriumError: options.equilibriumError,
         alpha,
+        work,
       },
       pairNames,
     );
