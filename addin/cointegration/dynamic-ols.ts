@@ -19,7 +19,9 @@
  * Leads and lags k: 'aic' (default) minimises AIC over k = 0..kmax on the common sample kmax
  * allows, from one QR factorisation (the columns are ordered so each k nests the one
  * before: [x, 1, Δx_t, Δx_{t-1}, Δx_{t+1}, ..., Δx_{t-k}, Δx_{t+k}]), then refits the choice
- * on every row it can use, as the ADF lag search does. kmax defaults to floor(T^(1/3))
+ * on every row it can use, as the ADF lag search does. On long series both steps come from the
+ * design's cross products instead (dynamic-ols-long.ts: the choice from one Cholesky, the fit
+ * refined from the true residuals and checked, else QR). kmax defaults to floor(T^(1/3))
  * (a common rule of thumb: it grows with T slowly enough for the asymptotics of Saikkonen
  * 1991), capped so the regression keeps at least 10 residual degrees of freedom.
  */
@@ -30,6 +32,7 @@ import { powerOfTwoScale, scaled } from '../linalg/power-of-two-scale';
 import { gaussianLogLikelihood, leastSquares } from '../regression/least-squares';
 import { bartlettLongRunVariance } from '../regression/long-run-variance';
 import { persistentBandwidth } from '../regression/persistent-bandwidth';
+import { DOLS_GRAM_WORK, chooseLeadsLagsByGram, dynamicOlsByGram } from './dynamic-ols-long';
 
 export interface DynamicOlsOptions {
   /** Leads and lags of Δx on each side: a whole number or 'aic' (default). */
@@ -101,9 +104,13 @@ function dynamicOlsDesign(y: ArrayLike<number>, x: ArrayLike<number>, k: number,
   return { response, columns: [level, ones, ...changes], names };
 }
 
-/** AIC choice of k in 0..kmax on the common sample of kmax. */
+/** AIC choice of k in 0..kmax on the common sample of kmax (from cross products on long series, dynamic-ols-long.ts). */
 function chooseLeadsLags(y: ArrayLike<number>, x: ArrayLike<number>, kmax: number): number {
   const T = y.length;
+  if ((T - 1 - 2 * kmax) * (3 + 2 * kmax) ** 2 > DOLS_GRAM_WORK) {
+    const byGram = chooseLeadsLagsByGram(y, x, kmax);
+    if (byGram !== null) return byGram;
+  }
   const { response, columns } = dynamicOlsDesign(y, x, kmax, kmax + 1, T - 1 - kmax);
   const n = response.length;
   const ssr = new HouseholderQr(columns, n).nestedSsr(response);
@@ -161,21 +168,20 @@ function dynamicOlsInUnits(y: ArrayLike<number>, x: ArrayLike<number>, options: 
     throw new MooringInputError(`Unknown leads-and-lags rule '${String(requested)}': use a whole number or aic.`);
   }
 
-  const design = dynamicOlsDesign(y, x, k, k + 1, T - 1 - k);
-  const fit = leastSquares(design.response, design.columns, { names: design.names });
+  const fit = chosenFit(y, x, k);
   const e = fit.residuals;
   const bw = options.bandwidth ?? 'auto';
   if (bw !== 'auto' && typeof bw !== 'number') throw new MooringInputError(`Unknown bandwidth '${String(bw)}': use a whole number or auto.`);
   const bandwidth = bw === 'auto' ? persistentBandwidth(e).bandwidth : bw;
   const lambda2 = bartlettLongRunVariance(e, bandwidth);
-  const olsSe = fit.standardErrors[0];
+  const olsSe = fit.olsStandardError;
   // A negative long-run variance cannot arise with the Bartlett kernel (its weights keep it positive semi-definite).
   const standardError = olsSe * Math.sqrt(lambda2 / fit.sigma2);
-  const beta = fit.coefficients[0];
+  const beta = fit.beta;
   const tValue = beta / standardError;
   return {
     beta,
-    intercept: fit.coefficients[1],
+    intercept: fit.intercept,
     standardError,
     tValue,
     pValue: 2 * (1 - normalCdf(Math.abs(tValue))),
@@ -188,4 +194,20 @@ function dynamicOlsInUnits(y: ArrayLike<number>, x: ArrayLike<number>, options: 
     nobs: fit.nobs,
     residuals: e,
   };
+}
+
+/**
+ * The regression with k leads and lags on every row it can use: by QR, or on long series by the
+ * refined cross-product route (dynamic-ols-long.ts), which falls back to QR where it cannot vouch
+ * for its answer.
+ */
+function chosenFit(y: ArrayLike<number>, x: ArrayLike<number>, k: number): { beta: number; intercept: number; olsStandardError: number; sigma2: number; residuals: Float64Array; nobs: number } {
+  const T = y.length;
+  if ((T - 1 - 2 * k) * (3 + 2 * k) ** 2 > DOLS_GRAM_WORK) {
+    const byGram = dynamicOlsByGram(y, x, k);
+    if (byGram !== null) return byGram;
+  }
+  const design = dynamicOlsDesign(y, x, k, k + 1, T - 1 - k);
+  const fit = leastSquares(design.response, design.columns, { names: design.names });
+  return { beta: fit.coefficients[0], intercept: fit.coefficients[1], olsStandardError: fit.standardErrors[0], sigma2: fit.sigma2, residuals: fit.residuals, nobs: fit.nobs };
 }
