@@ -19,7 +19,8 @@
  *
  * Lags p: fixed, or 'aic' (default): the system AIC n ln det(Sigma) + 2 (coefficients in both
  * equations) over p = 0..pmax on the common sample pmax allows, from one QR factorisation
- * (the columns are ordered so each p nests the one before), then the choice is refitted on
+ * (the columns are ordered so each p nests the one before; on long series from one Cholesky of
+ * the cross products instead, error-correction-long.ts), then the choice is refitted on
  * every row it can use, as the ADF lag search does. pmax defaults to Schwert's
  * 12 (T/100)^(1/4), capped so each equation keeps 10 residual degrees of freedom.
  */
@@ -31,6 +32,7 @@ import { leastSquares, type LeastSquaresFit } from '../regression/least-squares'
 import { schwertMaxLag } from '../unitroot/max-lag';
 import { halfLifeFromSpeed } from '../spread/half-life';
 import { cointegratingRegression, relationText } from './cointegrating-regression';
+import { ECM_GRAM_WORK, chooseEcmLagsByGram } from './error-correction-long';
 import { formatCoefficient, formatPeriods, formatPValue, formatShareClosed } from './wording';
 
 export interface ErrorCorrectionOptions {
@@ -133,8 +135,12 @@ function ecmDesign(y: ArrayLike<number>, x: ArrayLike<number>, u: ArrayLike<numb
   return { dy, dx, columns: [error, new Float64Array(n).fill(1), ...lagged], names: labels };
 }
 
-/** System-AIC choice of p in 0..pmax on the common sample of pmax. */
+/** System-AIC choice of p in 0..pmax on the common sample of pmax (from cross products on long series, error-correction-long.ts). */
 function chooseEcmLags(y: ArrayLike<number>, x: ArrayLike<number>, u: ArrayLike<number>, pmax: number): number {
+  if ((y.length - 1 - pmax) * (2 + 2 * pmax) ** 2 > ECM_GRAM_WORK) {
+    const byGram = chooseEcmLagsByGram(y, x, u, pmax);
+    if (byGram !== null) return byGram;
+  }
   const d = ecmDesign(y, x, u, pmax, pmax + 1, { y: 'y', x: 'x' });
   const n = d.dy.length;
   const qr = new HouseholderQr(d.columns, n);
