@@ -4,7 +4,8 @@
  * and mapping every failure to one line on standard error with an exit code: 2 for bad
  * input, 1 for an internal error. Output goes through `io`, so tests run it in-process.
  * Everything written passes through terminal-text.ts first, so no control character from the
- * data reaches the terminal raw.
+ * data reaches the terminal raw; names from the data longer than a screen can use are shortened
+ * on the terminal (render/shown-name.ts), never in JSON.
  */
 import { decimalChoice, delimiterChoice, type DialectChoice } from '../csv/dialect';
 import { readCsv, type CsvTable } from '../csv/read-csv';
@@ -15,7 +16,9 @@ import { commandHelp, overallHelp } from './help';
 import { preparedInput } from './prepared-input';
 import { CAUTIONS, renderCautions } from './render/cautions';
 import { bullet, heading } from './render/format';
+import { shownMessage, shownNames, withShownNames } from './render/shown-name';
 import { jsonText, terminalText } from './render/terminal-text';
+import type { ParsedArguments } from './arguments';
 
 /** Where the runner reads and writes. */
 export interface CliIo {
@@ -36,22 +39,23 @@ const HELP_WORDS = new Set(['--help', '-h', 'help']);
 
 /** Runs one command line against the table; returns the exit code. Never throws. */
 export function runCommandLine(argv: readonly string[], io: CliIo, commands: readonly Command[]): number {
+  // The long names met so far (option values, then the file's header), for the messages.
+  const names = new Map<string, string>();
   try {
-    return dispatch(argv, io, commands);
+    return dispatch(argv, io, commands, names);
   } catch (e) {
     if (isMooringInputError(e)) {
-      io.stderr(`mooring: ${terminalText(oneLine(e.message), true)}\n`);
+      io.stderr(`mooring: ${terminalText(oneLine(shownMessage(e.message, names)), true)}\n`);
       return EXIT_BAD_INPUT;
     }
     const message = e instanceof Error ? `${e.name}: ${e.message}` : String(e);
-    io.stderr(`mooring: internal error (${terminalText(oneLine(message), true)}); please report it with the command that caused it\n`);
+    io.stderr(`mooring: internal error (${terminalText(oneLine(shownMessage(message, names)), true)}); please report it with the command that caused it\n`);
     return EXIT_INTERNAL;
   }
 }
 
-function dispatch(argv: readonly string[], io: CliIo, commands: readonly Command[]): number {
-  const names = commands.map((c) => c.name);
-  if (argv.length === 0) throw new MooringInputError(`No command given; the commands are ${names.join(', ')} (mooring --help describes them).`);
+function dispatch(argv: readonly string[], io: CliIo, commands: readonly Command[], names: Map<string, string>): number {
+  if (argv.length === 0) throw new MooringInputError(`No command given; the commands are ${commands.map((c) => c.name).join(', ')} (mooring --help describes them).`);
   const [first, ...rest] = argv;
   if (HELP_WORDS.has(first.toLowerCase())) {
     if (rest.length === 0) {
@@ -68,6 +72,7 @@ function dispatch(argv: readonly string[], io: CliIo, commands: readonly Command
     return EXIT_OK;
   }
   const args = parseArguments(rest, [...COMMON_OPTIONS, ...command.options], command.name);
+  learnNames(names, optionNames(args));
   if (args.positionals.length === 0) {
     throw new MooringInputError(`${command.name} needs ${command.runOnFiles ? "its files" : "a CSV file"}: ${command.usage}.`);
   }
@@ -84,9 +89,46 @@ function dispatch(argv: readonly string[], io: CliIo, commands: readonly Command
   }
   const file = files.join(' + ');
   const dialect = { delimiter: delimiterChoice(args.values.get('delimiter')), decimal: decimalChoice(args.values.get('decimal')) };
+  command.beforeReading?.(files, args);
   const input = preparedInput(files.map((f) => ({ file: f, table: readTable(f, io, dialect) })), args);
-  const output = command.run({ command: command.name, file, table: input.table, args, common, notices: input.notices, period: input.period, window: input.window });
-  return print(output, command.name, file, input.notices, input.period, common, io);
+  learnNames(names, [...optionNames(args), ...input.table.header]);
+  // A report for the terminal runs on the shortened names; JSON, streams and parts keep them whole.
+  const onTerminal = !common.json && !args.values.has('format') && !args.values.has('part');
+  if (!onTerminal || names.size === 0) {
+    const output = command.run({ command: command.name, file, table: input.table, args, common, notices: input.notices, period: input.period, window: input.window });
+    return print(output, command.name, file, input.notices, input.period, common, io);
+  }
+  const shownArgs = argsWithShownNames(args, names);
+  const notices = input.notices.map((n) => withShownNames(n, names));
+  const output = command.run({
+    command: command.name, file, table: tableWithShownNames(input.table, names), args: shownArgs, common: { ...common, series: shownArgs.values.get('series') },
+    notices, period: input.period, window: input.window,
+  });
+  return print({ ...output, terminal: withShownNames(output.terminal, names) }, command.name, file, notices, input.period, common, io);
+}
+
+/** Every option value split at its commas (where lists of names are given); a value without a comma whole. */
+function optionNames(args: ParsedArguments): string[] {
+  return [...args.values.values()].flatMap((v) => v.split(',').map((p) => p.trim()));
+}
+
+/** Replaces the map's contents with the shortened forms of the long names among `candidates`. */
+function learnNames(names: Map<string, string>, candidates: readonly string[]): void {
+  const found = shownNames(candidates);
+  names.clear();
+  for (const [name, shown] of found) names.set(name, shown);
+}
+
+/** The arguments with every long name (a whole value, or one of its comma-separated parts) shortened. */
+function argsWithShownNames(args: ParsedArguments, names: ReadonlyMap<string, string>): ParsedArguments {
+  const values = new Map([...args.values].map(([option, v]): [string, string] =>
+    [option, names.get(v) ?? v.split(',').map((part) => names.get(part.trim()) ?? part).join(',')]));
+  return { ...args, values };
+}
+
+/** The table with its long column names shortened (the fields untouched). */
+function tableWithShownNames(table: CsvTable, names: ReadonlyMap<string, string>): CsvTable {
+  return { ...table, header: table.header.map((h) => names.get(h) ?? h), dateColumn: table.dateColumn === null ? null : (names.get(table.dateColumn) ?? table.dateColumn) };
 }
 
 /** Prints a command's output: its stream, one JSON object, or the report with the cautions. */

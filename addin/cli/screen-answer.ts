@@ -16,6 +16,7 @@ import { setAsidePairs, setAsideReason, type SeriesOrder } from '../screen/serie
 import type { ThreadReport } from '../screen/parallel-node';
 import type { CommandOutput } from './command';
 import { bullet, formatPValue, formatStatistic, heading, labelled } from './render/format';
+import { shownName, shownNames, withShownNames } from './render/shown-name';
 import { jsonText, terminalText } from './render/terminal-text';
 import { textTable } from './render/text-table';
 import type { ScreenSource } from './screen-part-file';
@@ -47,7 +48,7 @@ function pairTable(shown: readonly ScreenPair[], halfLifeUnit: string): string[]
   return textTable(
     ['rank', 'pair (y on x)', 'tau', 'p-value', 'adjusted', 'beta', `half-life (${halfLifeUnit})`, 'z-score'],
     shown.map((p, i) => [
-      String(i + 1), `${p.y} on ${p.x}`, formatStatistic(p.statistic), formatPValue(p.pValue), formatPValue(p.adjustedPValue),
+      String(i + 1), `${shownName(p.y)} on ${shownName(p.x)}`, formatStatistic(p.statistic), formatPValue(p.pValue), formatPValue(p.adjustedPValue),
       formatStatistic(p.beta), p.halfLife === null ? 'none' : formatStatistic(p.halfLife), formatStatistic(p.zscore),
     ]),
     [1],
@@ -72,12 +73,16 @@ function orderCounts(orders: readonly SeriesOrder[]): string {
 function terminalReport(a: ScreenAnswer): string {
   const s = a.summary;
   const shown = s.pairs.slice(0, a.top);
+  // Long names shortened here too: a merge reads its names from the part files, not from a table.
+  const long = shownNames([...s.names, ...a.source.leftOut]);
+  const show = (text: string) => withShownNames(text, long);
+  const names = s.names.map(shownName);
   const out = [
     heading(`Pair screen of ${s.names.length} series`),
     '',
-    labelled('Series', s.names.length <= NAMED_IN_FULL ? s.names.join(', ') : `${s.names.slice(0, 8).join(', ')}, ... (${s.names.length} in all; --json lists them)`),
-    ...(a.source.leftOut.length ? [labelled('Left out', `${a.source.leftOut.join(', ')} (not numeric)`)] : []),
-    labelled('Orders', s.orders.length <= NAMED_IN_FULL ? s.orders.map((o) => `${o.name} ${o.orderText ?? 'undecided'}`).join(', ') : orderCounts(s.orders)),
+    labelled('Series', names.length <= NAMED_IN_FULL ? names.join(', ') : `${names.slice(0, 8).join(', ')}, ... (${names.length} in all; --json lists them)`),
+    ...(a.source.leftOut.length ? [labelled('Left out', `${a.source.leftOut.map(shownName).join(', ')} (not numeric)`)] : []),
+    labelled('Orders', s.orders.length <= NAMED_IN_FULL ? s.orders.map((o) => `${shownName(o.name)} ${o.orderText ?? 'undecided'}`).join(', ') : orderCounts(s.orders)),
     labelled('Tested', `${s.family.size} directed pairs (Engle-Granger, constant, lags by the rule)`),
     labelled('Adjustment', `Benjamini-Hochberg over ${s.family.description}`),
     labelled('parts' in a.threads ? 'Parts' : 'Threads', threadText(a.threads)),
@@ -91,11 +96,11 @@ function terminalReport(a: ScreenAnswer): string {
     out.push(
       '',
       labelled('Set aside', `${s.setAsideCount} directed pairs, not ranked: a pair needs two wandering series of the same order (--json lists them under setAside)`),
-      ...s.setAsideSummary.map((line) => bullet(line)),
+      ...s.setAsideSummary.map((line) => bullet(show(line))),
     );
   }
   if (s.untestedCount > 0) out.push('', labelled('Not tested', `${s.untestedCount} directed pairs; --json lists them with the reason`));
-  out.push('', ...s.cautions.map((c) => bullet(c)));
+  out.push('', ...s.cautions.map((c) => bullet(show(c))));
   return out.join('\n');
 }
 
