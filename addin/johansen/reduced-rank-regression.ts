@@ -13,13 +13,13 @@
  * C u = λ u, C = L^{-1} S10 S00^{-1} S01 L^{-T}, and v = L^{-T} u: solving it this way
  * keeps the eigenvalues real and in [0, 1) and gives S11-orthonormal vectors directly.
  *
- * Why the residuals are never formed: one Householder QR of the short-run block gives
- * Q'y for each column y of the other two blocks, and the residual of y is Q'y with its
- * first k entries dropped (in an orthonormal basis), so S_ij are dot products of those tails.
+ * The residuals are never formed: S_ij come from the cross products of all the columns and
+ * one Cholesky factorisation, or, where that would lose accuracy, from one Householder QR of
+ * the short-run block (concentrated-moments.ts).
  */
 import { CholeskyDecomposition, EigenvalueDecomposition, Matrix, solve } from 'ml-matrix';
 import { MooringInputError } from '../errors';
-import { HouseholderQr } from '../linalg/householder-qr';
+import { momentsByCholesky, momentsByQr, type ConcentratedMoments } from './concentrated-moments';
 import type { JohansenDesign } from './johansen-design';
 
 /** What the eigenproblem gives: all p eigenvalues and S11-orthonormal eigenvectors. */
@@ -46,32 +46,34 @@ const EXACT_FIT = 1e-12;
  * for the columns (the caller checks the row count first, so that is a backstop).
  */
 export function reducedRankRegression(design: JohansenDesign): ReducedRankFit {
-  const { nobs: n, changes, levels, shortRun } = design;
-  const k = shortRun.length;
-  const p = levels.length;
-  const m = changes.length;
+  requireEnoughRows(design);
+  return eigenSolution(design.nobs, momentsByCholesky(design) ?? momentsByQr(design));
+}
+
+/**
+ * The same regression with the moments always from Householder QR (momentsByQr): the route
+ * the cross products are checked against in the tests, and the one they fall back to.
+ */
+export function reducedRankRegressionByQr(design: JohansenDesign): ReducedRankFit {
+  requireEnoughRows(design);
+  return eigenSolution(design.nobs, momentsByQr(design));
+}
+
+/** The backstop on the row count (the caller checks it first with its own message). */
+function requireEnoughRows(design: JohansenDesign): void {
+  const n = design.nobs;
+  const k = design.shortRun.length;
+  const p = design.levels.length;
+  const m = design.changes.length;
   if (n - k < p + m + 1) {
     throw new MooringInputError(`Too few observations (${n}) for ${k + p} terms per equation and ${m} equations: add rows or use fewer lags.`);
   }
+}
 
-  const qr = new HouseholderQr(shortRun, n);
-  if (!qr.isFullRank()) {
-    const j = qr.firstDependentColumn;
-    const name = design.shortRunNames[j];
-    throw new MooringInputError(
-      j < design.shortRun.length - design.unrestrictedCount
-        ? `The test cannot separate ${name} from the lagged changes before it: one series copies or mixes others (for example C = 2A + B + constant). Remove the series responsible.`
-        : `The test cannot separate ${name} from the lagged changes: some series (or mix of series) moves by the same amount every row. Remove the series responsible.`,
-    );
-  }
-  const levelTails = levels.map((c) => qr.qtY(c).subarray(k));
-  const changeTails = changes.map((c) => qr.qtY(c).subarray(k));
-  requireSeparable(levelTails, changeTails, design);
-
-  const s00 = productMoments(changeTails, changeTails, n);
-  const s01 = productMoments(changeTails, levelTails, n);
-  const s11 = productMoments(levelTails, levelTails, n);
-
+/** Eigenvalues and S11-orthonormal eigenvectors from the concentrated moments. */
+function eigenSolution(n: number, moments: ConcentratedMoments): ReducedRankFit {
+  const { s00, s01, s11 } = moments;
+  const p = s11.rows;
   const cholesky11 = new CholeskyDecomposition(s11);
   const cholesky00 = new CholeskyDecomposition(s00);
   if (!cholesky11.isPositiveDefinite() || !cholesky00.isPositiveDefinite()) {
@@ -100,46 +102,4 @@ export function reducedRankRegression(design: JohansenDesign): ReducedRankFit {
   const v = solve(lower.transpose(), u); // v = L^{-T} u, so v' S11 v = u'u = I
   const vectors = Array.from({ length: p }, (_, j) => v.getColumn(j));
   return { nobs: n, eigenvalues, vectors, s01, s11, s00 };
-}
-
-/** Cross products a_i' b_j / n of two lists of equal-length vectors, as a matrix. */
-function productMoments(a: readonly Float64Array[], b: readonly Float64Array[], n: number): Matrix {
-  const out = new Matrix(a.length, b.length);
-  const same = a === b;
-  for (let i = 0; i < a.length; i++) {
-    for (let j = same ? i : 0; j < b.length; j++) {
-      const x = a[i];
-      const y = b[j];
-      let s = 0;
-      for (let t = 0; t < x.length; t++) s += x[t] * y[t];
-      out.set(i, j, s / n);
-      if (same) out.set(j, i, s / n);
-    }
-  }
-  return out;
-}
-
-/**
- * Refuses designs where a level or a change is an exact combination of the others once
- * the short-run block is partialled out (one QR of the residual tails, levels first).
- */
-function requireSeparable(levelTails: Float64Array[], changeTails: Float64Array[], design: JohansenDesign): void {
-  const check = new HouseholderQr([...levelTails, ...changeTails], levelTails[0].length);
-  const j = check.firstDependentColumn;
-  if (j < 0) return;
-  const m = design.changes.length;
-  if (j < m) {
-    throw new MooringInputError(
-      `The test cannot separate ${design.levelNames[j]} from the other series and the deterministic terms: it is an exact combination of them. Remove it; a relation that holds exactly needs no test.`,
-    );
-  }
-  if (j < levelTails.length) {
-    throw new MooringInputError(
-      `A combination of the series follows ${design.inRelation === 'trend' ? 'a straight-line trend' : 'a constant'} exactly, so the test cannot separate ${design.levelNames[j]}: remove the series that duplicates others.`,
-    );
-  }
-  const name = design.changeNames[j - levelTails.length];
-  throw new MooringInputError(
-    `The changes of '${name}' are explained exactly by the other terms (for example, '${name}' is another series plus a constant): remove it or choose another deterministic case.`,
-  );
 }
