@@ -79,6 +79,11 @@ export interface Command {
   /** Runs the command; bad input throws MooringInputError. */
   run(context: CommandContext): CommandOutput;
   /**
+   * Work a command may start before its files are read, to run while they are (the screen starts
+   * its worker threads). It never refuses anything: `run` checks the options.
+   */
+  beforeReading?(files: readonly string[], args: ParsedArguments): void;
+  /**
    * For a command whose files are not price CSVs (merge reads screen parts): runs instead of
    * `run`, with the file names as given, and says what the JSON envelope should name.
    */

@@ -36,6 +36,9 @@ import { resolveScreenOptions, type ScreenOptions, type ScreenSettings } from '.
 import { screenUniverse, unorderedPairCount, type NamedSeries, type ScreenUniverse } from './screen-universe';
 import { withSeriesOrders } from './series-orders';
 import { MooringInputError } from '../errors';
+import { ORDER_WORK_PER_THREAD, threadsWorth, WORK_PER_THREAD } from './thread-work';
+
+export { ORDER_WORK_PER_THREAD, WORK_PER_THREAD } from './thread-work';
 
 /** How to spread the work. */
 export interface ThreadOptions {
@@ -67,13 +70,6 @@ export interface ThreadReport {
   /** Why fewer threads helped than were asked for, if so. */
   note?: string;
 }
-
-/**
- * Pairs times rows that earn each thread beyond the first: 2,000,000, about 800 pairs of
- * 2,500 rows or a tenth of a second of one thread's work, well above what starting a worker
- * and warming its compiler cost. Below it the main thread finishes sooner alone.
- */
-export const WORK_PER_THREAD = 2_000_000;
 
 /** Collects the error messages waiting on the workers' ports; true when there was one. */
 function readErrors(ports: readonly MessagePort[], errors: string[]): boolean {
@@ -140,6 +136,18 @@ function pooledWorkers(count: number, workerFile: string | URL | undefined, erro
   return pool.slice(0, count);
 }
 
+/**
+ * Starts the pool's workers for a screen about to run (the command line calls it before it reads
+ * the file), so that starting them (some 100 ms each: a thread, a JavaScript engine, the worker's
+ * code) overlaps the reading instead of delaying the first orders of integration. A count that is
+ * not a whole number from 1 to 64 starts nothing: the screen itself refuses it.
+ */
+export function startScreenThreads(threading: ThreadOptions = {}): number {
+  const requested = threading.threads ?? Math.min(availableParallelism(), 16);
+  if (!Number.isInteger(requested) || requested < 2 || requested > 64) return 0;
+  return pooledWorkers(requested - 1, threading.workerFile, []).length;
+}
+
 /** Hands a job to pooled workers, each with a port of its own for errors; returns the main thread's ends. */
 function postJob(workers: readonly Worker[], kind: 'orders' | 'pairs', job: ScreenJob | OrdersJob): MessagePort[] {
   return workers.map((worker) => {
@@ -150,20 +158,13 @@ function postJob(workers: readonly Worker[], kind: 'orders' | 'pairs', job: Scre
 }
 
 /**
- * Series times rows of orders of integration that earn each thread beyond the first: 100,000,
- * about 40 series of 2,500 rows or a fifth of a second of one thread's work (three ADF and three
- * KPSS tests a series).
- */
-export const ORDER_WORK_PER_THREAD = 100_000;
-
-/**
  * withSeriesOrders on several threads (orders-queue.ts): the same orders, decided by the pooled
  * workers and the main thread together. The pair screen then finds the workers started and warm.
  */
 export function withSeriesOrdersInThreads(universe: ScreenUniverse, settings: ScreenSettings, threading: ThreadOptions = {}): ScreenUniverse {
   const N = universe.names.length;
   const requested = threadsFor(1, universe.rows, threading).requested;
-  const threads = Math.max(1, Math.min(requested, N, Math.floor((N * universe.rows) / ORDER_WORK_PER_THREAD) + 1));
+  const threads = threadsWorth(N, universe.rows, requested, ORDER_WORK_PER_THREAD);
   if (threads === 1) return withSeriesOrders(universe, settings);
   const job = ordersJob(sharedUniverse(universe), settings);
   const errors: string[] = [];
@@ -198,8 +199,7 @@ export function threadsFor(pairs: number, rows: number, threading: ThreadOptions
   if (!Number.isInteger(requested) || requested < 1 || requested > 64) {
     throw new MooringInputError(`The number of threads must be a whole number from 1 to 64; got ${String(requested)}.`);
   }
-  const perThread = threading.workPerThread ?? WORK_PER_THREAD;
-  return { requested, threads: Math.max(1, Math.min(requested, pairs, Math.floor((pairs * rows) / Math.max(perThread, 1)) + 1)) };
+  return { requested, threads: threadsWorth(pairs, rows, requested, threading.workPerThread ?? WORK_PER_THREAD) };
 }
 
 /**

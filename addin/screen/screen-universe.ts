@@ -75,15 +75,21 @@ export function screenUniverse(series: readonly NamedSeries[]): ScreenUniverse {
         `series '${names[j]}'`,
       );
     }
+    // One pass checks the values, copies them and finds the largest |price| (what powerOfTwoScale
+    // reads); a second scales them only when the factor is not 1. The screen packs its universe
+    // once per run on the main thread, before any worker can help, so this loop is kept lean.
     let gaps = 0;
+    let largest = 0;
     const offset = j * rows;
     for (let t = 0; t < rows; t++) {
       const v = values[t];
-      if (v === null || (typeof v === 'number' && Number.isNaN(v))) {
+      if (typeof v === 'number' && v - v === 0) {
+        data[offset + t] = v;
+        const a = v < 0 ? -v : v;
+        if (a > largest) largest = a;
+      } else if (v === null || (typeof v === 'number' && Number.isNaN(v))) {
         data[offset + t] = Number.NaN;
         gaps++;
-      } else if (typeof v === 'number' && Number.isFinite(v)) {
-        data[offset + t] = v;
       } else {
         throw new MooringInputError(
           `'${names[j]}' has ${String(v)} at row ${t + 1}: use a number, or a blank (null) for a missing price.`,
@@ -91,9 +97,9 @@ export function screenUniverse(series: readonly NamedSeries[]): ScreenUniverse {
         );
       }
     }
-    const factor = powerOfTwoScale(data.subarray(offset, offset + rows).filter((v) => v === v));
+    const factor = powerOfTwoScale([largest]);
     scales[j] = factor;
-    for (let t = 0; t < rows; t++) data[offset + t] *= factor;
+    if (factor !== 1) for (let t = 0; t < rows; t++) data[offset + t] *= factor;
     if (gaps === 0 && rows > 0) {
       complete[j] = 1;
       let m = 0;
