@@ -82,10 +82,22 @@ export function critCell(test: unknown, observations: unknown, variables: unknow
   const which = optionWord('test', test, CRITICAL_TESTS, 'adf');
   const alpha = levelValue('level', level, 0.05);
   const table = tableFor(which, observations, variables, deterministic);
-  const key = `${Number((alpha * 100).toPrecision(6))}%`;
-  const value = table[key];
-  if (value === undefined) {
-    throw new MooringInputError(`The ${which} table has no ${key} column: use one of ${Object.keys(table).join(', ')}.`);
+  const levels = Object.keys(table);
+  // Match the level against the table's own levels ("1%" is 0.01) rather than writing the level
+  // as a percentage first: 1e-300 would become "1e-298%".
+  const key = levels.find((k) => Math.abs(Number(k.replace('%', '')) / 100 - alpha) <= 1e-9 * alpha);
+  if (key === undefined) {
+    const decimals = levels.map((k) => String(Number(k.replace('%', '')) / 100));
+    throw new MooringInputError(
+      `The ${which} table gives critical values at ${levels.join(', ')} only; level ${levelText(alpha)} is not among them: ` +
+        `give one of ${decimals.join(', ')} (or ${levels.join(', ')} as text).`,
+    );
   }
-  return value;
+  return table[key];
+}
+
+/** A level for a message: as a percentage where that reads plainly (2.5%), else as the number given (1e-300). */
+function levelText(alpha: number): string {
+  const percent = alpha * 100;
+  return percent >= 0.01 && Number(percent.toPrecision(4)) === Number(percent.toPrecision(12)) ? `${Number(percent.toPrecision(4))}%` : String(alpha);
 }

@@ -59,7 +59,16 @@ describe('MOOR.CRIT refusals', () => {
     expect(cellErrorOf(() => crit('dickey'), '#VALUE!')).toMatch(/test must be one of adf, pp/);
   });
   it('refuses a level the table does not print, listing those it does', () => {
-    expect(cellErrorOf(() => crit('adf', null, null, null, 0.025), '#VALUE!')).toMatch(/no 2\.5% column: use one of 1%, 5%, 10%/);
+    expect(cellErrorOf(() => crit('adf', null, null, null, 0.025), '#VALUE!'))
+      .toBe('The adf table gives critical values at 1%, 5%, 10% only; level 2.5% is not among them: give one of 0.01, 0.05, 0.1 (or 1%, 5%, 10% as text).');
+  });
+  it('refuses a level far outside the tables in plain words (1e-300 once read as a "1e-298%" column)', () => {
+    for (const level of [1e-300, 5e-7, '0.0000001%']) {
+      const message = cellErrorOf(() => crit('kpss', null, null, null, level), '#VALUE!');
+      expect(message).toMatch(/^The kpss table gives critical values at 10%, 5%, 2\.5%, 1% only; level [\d.e-]+ is not among them: give one of 0\.1, 0\.05, 0\.025, 0\.01/);
+      expect(message).not.toMatch(/e-\d+%/);
+    }
+    expect(cellErrorOf(() => crit('adf', null, null, null, 1e-300), '#VALUE!')).toContain('level 1e-300 is not among them');
   });
   it('refuses observations for an asymptotic table and several series for a one-series table', () => {
     expect(cellErrorOf(() => crit('kpss', 200), '#VALUE!')).toMatch(/asymptotic/);

@@ -29,7 +29,38 @@ function decimalOption(option: string, raw: string | undefined): number | undefi
   if (raw === undefined) return undefined;
   const t = raw.trim();
   if (!/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(t)) throw new MooringInputError(`--${option} must be a number such as 1.25 or -0.4, not '${raw}'.`);
-  return Number(t);
+  const value = Number(t);
+  if (!Number.isFinite(value)) throw new MooringInputError(`--${option} ${t} is beyond the largest number a double holds (about 1.8e308): give a number on the scale of the prices, such as 1.25 or -0.4.`);
+  return value;
+}
+
+/** Digits of the spread's movement that must survive subtracting the intercept. */
+const KEPT_DIGITS = 6;
+
+/**
+ * Refuses an intercept so large that y - intercept - beta x keeps fewer than KEPT_DIGITS digits
+ * of how y - beta x moves: a double carries about 16 significant digits, so subtracting
+ * 1e308 from a spread that moves by 1 leaves only rounding, and every statistic of the spread
+ * would be made of that rounding.
+ */
+function requireInterceptOnScale(raw: string, intercept: number, beta: number, y: ArrayLike<number>, x: ArrayLike<number>, names: { y: string; x: string }): void {
+  let low = Infinity;
+  let high = -Infinity;
+  let sum = 0;
+  for (let t = 0; t < y.length; t++) {
+    const v = y[t] - beta * x[t];
+    if (v < low) low = v;
+    if (v > high) high = v;
+    sum += v;
+  }
+  const width = high - low;
+  if (!(width > 0) || Math.abs(intercept) * Number.EPSILON * 10 ** KEPT_DIGITS <= width) return;
+  const mean = sum / y.length;
+  throw new MooringInputError(
+    `--intercept ${raw.trim()} is far larger than the spread it shifts: ${names.y} - ${formatStatistic(beta)} ${names.x} moves between ` +
+      `${formatStatistic(low)} and ${formatStatistic(high)}, and after subtracting ${raw.trim()} fewer than ${KEPT_DIGITS} digits of that movement would survive rounding (a double holds about 16). ` +
+      `Give an intercept on the scale of the spread, such as its mean ${formatStatistic(mean)}, or leave --intercept out (0).`,
+  );
 }
 
 /** The spread command. */
@@ -69,6 +100,7 @@ export const spreadCommand: Command = {
     const y = input.y.series.values;
     const x = input.xs[0].series.values;
     const names = { y: input.names.y, x: input.names.xs[0] };
+    if (givenIntercept !== undefined) requireInterceptOnScale(context.args.values.get('intercept') as string, givenIntercept, givenBeta as number, y, x, names);
 
     const method: HedgeWord | 'given' = givenBeta !== undefined ? 'given' : (hedgeWord ?? 'ols');
     // The default is the one spread of the pair (pair-spread.ts); another line gives that line's spread.
