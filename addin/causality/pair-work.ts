@@ -1,17 +1,14 @@
 /**
  * Work that both directions of a lead-lag question share, done once per pair (leadLag runs
- * a -> b and b -> a on the same data):
- * - the VAR lag order: AIC, BIC and ln|Sigma| do not depend on the order of the series in the
- *   VAR (a permutation leaves the determinant as it is), so the order chosen for [a, b] serves
- *   [b, a] too; chosen once on the values and once on the changes, as each test needs;
- * - the VAR in levels that Toda-Yamamoto fits: one fit of [a, b] holds both equations, the
- *   effect's equation of each direction (equation-by-equation least squares, so each
- *   equation's fit is the one a fit of [b, a] would make, up to the column order).
- * At a million rows the lag search is the costliest step of the lead-lag test, and the VAR fit
- * the next; each is now made once rather than once per direction.
+ * a -> b and b -> a on the same data): the VAR lag order. AIC, BIC and ln|Sigma| do not depend on the order of the series in the VAR
+ * (a permutation leaves the determinant as it is), so the order chosen for [a, b] serves [b, a]
+ * too; it is chosen once on the values and once on the changes, as each test needs. At a million
+ * rows the lag search was the costliest step of the lead-lag test, made once per direction.
+ *
+ * The Toda-Yamamoto VAR is not shared: a fit of [b, a] orders its columns differently, and on
+ * long price series (levels' lags nearly collinear) the Wald statistic then moves by a few 1e-10
+ * of itself; each direction keeps the column order it always had.
  */
-import { powerOfTwoScale, scaled } from '../linalg/power-of-two-scale';
-import { fitVar, type VarFit } from '../var/fit-var';
 import { differences } from '../var/var-design';
 import { resolveLags, type LagChoice, type ResolvedLags } from './causality-lags';
 
@@ -21,7 +18,6 @@ export type LagData = 'values' | 'changes';
 /** A pair's shared work; `pair` holds [a, b] as checked by the caller. */
 export class PairWork {
   private readonly lagsByData = new Map<LagData, ResolvedLags>();
-  private readonly varsByLags = new Map<number, { fit: VarFit; factors: number[] }>();
 
   constructor(
     readonly pair: readonly [Float64Array, Float64Array],
@@ -41,21 +37,6 @@ export class PairWork {
       const block = data === 'values' ? [this.pair[0], this.pair[1]] : [differences(this.pair[0]), differences(this.pair[1])];
       found = resolveLags(block, this.lags, this.maxLags);
       this.lagsByData.set(data, found);
-    }
-    return found;
-  }
-
-  /**
-   * The VAR(lags) in levels of [a, b], each series brought near one by a power of two (the
-   * factors, exact), fitted once; `names` label it on the first call.
-   */
-  levelsVar(lags: number, names: readonly [string, string]): { fit: VarFit; factors: number[] } {
-    let found = this.varsByLags.get(lags);
-    if (found === undefined) {
-      const factors = this.pair.map((s) => powerOfTwoScale(s));
-      const unit = this.pair.map((s, i) => scaled(s, factors[i]));
-      found = { fit: fitVar(unit, lags, { names }), factors };
-      this.varsByLags.set(lags, found);
     }
     return found;
   }

@@ -14,7 +14,7 @@ import { MooringInputError } from '../errors';
 import { chiSquareCriticalValues, chiSquareUpperP } from '../distributions';
 import type { TestResult } from '../result';
 import { coefficientWald } from '../var/coefficient-wald';
-import { coefficientRow, fitVar, type VarFit } from '../var/fit-var';
+import { coefficientRow, fitVar } from '../var/fit-var';
 import { checkedBlock, checkedLagCount } from '../var/var-design';
 import { resolveLags, liftedWarning, type LagChoice } from './causality-lags';
 import { DEFAULT_PAIR_NAMES, leadLagHypotheses, possessive, type PairNames } from './causality-wording';
@@ -33,29 +33,30 @@ export interface TodaYamamotoOptions {
   alpha?: number;
   /** How a given extraLags was found, for the record (default "given"). */
   extraLagsRule?: string;
-  /** Work shared with the other direction of the pair (leadLag): the lag order and the VAR fit, made once. */
+  /** Work shared with the other direction of the pair (leadLag): the lag order, chosen once. */
   work?: PairWork;
 }
 
 /** Wald test that the cause's first p lags are zero in the effect's equation of a VAR(p + dmax) in levels. */
 export function todaYamamoto(cause: ArrayLike<number>, effect: ArrayLike<number>, options: TodaYamamotoOptions = {}, names: PairNames = DEFAULT_PAIR_NAMES): TestResult {
   const given = checkedBlock([cause, effect], [names.cause, names.effect]);
-  // The pair's shared work applies when cause and effect are its two series, in either order.
-  const causeIndex = options.work?.indexOf(cause) ?? -1;
-  const work = causeIndex >= 0 && options.work?.indexOf(effect) === 1 - causeIndex ? options.work : undefined;
   // The Wald statistic is free of units; the VAR's moments are not (they overflow for prices of
   // 1e300 and vanish for 1e-300): each series is brought to a size near one by a power of two,
   // and the coefficients reported below are converted back (effect's units per cause's unit).
-  const T = given[0].length;
+  const factors = given.map((s) => powerOfTwoScale(s));
+  const pair = given.map((s, i) => scaled(s, factors[i]));
+  const T = pair[0].length;
   let extra: ExtraLagsChoice;
   if (options.extraLags === undefined) {
-    const factors = given.map((s) => powerOfTwoScale(s));
-    extra = extraLagsFromOrders(given.map((s, i) => scaled(s, factors[i])), names, options.alpha ?? 0.05);
+    extra = extraLagsFromOrders(pair, names, options.alpha ?? 0.05);
   } else {
     extra = { extraLags: checkedLagCount(options.extraLags, 'The extra lags (dmax)'), rule: options.extraLagsRule ?? 'given', orders: null, warnings: [] };
   }
   const dmax = extra.extraLags;
-  const resolved = work ? work.lagsOn('values') : resolveLags(given, options.lags, options.maxLags);
+  // The pair's shared lag order applies when cause and effect are its two series, in either order.
+  const at = options.work?.indexOf(cause) ?? -1;
+  const shared = at >= 0 && options.work?.indexOf(effect) === 1 - at;
+  const resolved = shared && options.work ? options.work.lagsOn('values') : resolveLags(pair, options.lags, options.maxLags);
   const p = resolved.lags;
   const fitted = p + dmax;
   const needed = fitted + 2 * fitted + 2;
@@ -65,12 +66,9 @@ export function todaYamamoto(cause: ArrayLike<number>, effect: ArrayLike<number>
     );
   }
 
-  // Variables of the VAR: [cause, effect], or the pair's own order when its fit is shared.
-  const { fit, factors, causeAt, effectAt } = work
-    ? { ...work.levelsVar(fitted, causeIndex === 0 ? [names.cause, names.effect] : [names.effect, names.cause]), causeAt: causeIndex, effectAt: 1 - causeIndex }
-    : fittedPair(given, fitted, names);
-  const effectEquation = fit.equations[effectAt];
-  const rows = Array.from({ length: p }, (_, j) => coefficientRow(fit, causeAt, j + 1));
+  const fit = fitVar(pair, fitted, { names: [names.cause, names.effect] });
+  const effectEquation = fit.equations[1];
+  const rows = Array.from({ length: p }, (_, j) => coefficientRow(fit, 0, j + 1));
   const wald = coefficientWald(effectEquation, rows);
   const { nullHypothesis, alternative } = leadLagHypotheses(names, 'values');
   const warnings = [...extra.warnings, ...liftedWarning(resolved)];
@@ -102,15 +100,8 @@ export function todaYamamoto(cause: ArrayLike<number>, effect: ArrayLike<number>
       ...wald.coefficients.map((b, j) => ({
         key: `causeLag${j + 1}`,
         label: `Coefficient on ${possessive(names.cause)} lag ${j + 1} in ${possessive(names.effect)} equation`,
-        value: (b * factors[causeAt]) / factors[effectAt],
+        value: (b * factors[0]) / factors[1],
       })),
     ],
   };
-}
-
-/** The VAR of [cause, effect] at unit scale, fitted for one direction alone. */
-function fittedPair(given: Float64Array[], fitted: number, names: PairNames): { fit: VarFit; factors: number[]; causeAt: number; effectAt: number } {
-  const factors = given.map((s) => powerOfTwoScale(s));
-  const pair = given.map((s, i) => scaled(s, factors[i]));
-  return { fit: fitVar(pair, fitted, { names: [names.cause, names.effect] }), factors, causeAt: 0, effectAt: 1 };
 }

@@ -56,22 +56,31 @@ export function gaussianLogLikelihood(ssr: number, n: number): number {
 
 /** Fits y on the given columns (each of length n). Refuses rank-deficient designs with a clear error. */
 export function leastSquares(y: ArrayLike<number>, columns: readonly ArrayLike<number>[], options: LeastSquaresOptions = {}): LeastSquaresFit {
-  const n = y.length;
+  return leastSquaresEach([y], columns, options)[0];
+}
+
+/**
+ * Fits each response on the same columns from one factorisation (the equations of a VAR share
+ * their regressors); each fit is the one leastSquares makes for that response alone.
+ */
+export function leastSquaresEach(responses: readonly ArrayLike<number>[], columns: readonly ArrayLike<number>[], options: LeastSquaresOptions = {}): LeastSquaresFit[] {
+  const n = responses[0].length;
   const k = columns.length;
-  for (const c of columns) {
+  for (const c of [...columns, ...responses]) {
     if (c.length !== n) throw new MooringInputError('Internal: regression columns differ in length from the response.');
   }
   if (n <= k) {
     throw new MooringInputError(`Too few observations (${n}) for ${k} regressors: add rows or use fewer lags.`);
   }
-  const yScale = powerOfTwoScale(y);
   const columnScales = columns.map((c) => powerOfTwoScale(c));
-  const fit = fitScaled(
-    yScale === 1 ? y : scaled(y, yScale),
-    columns.map((c, j) => (columnScales[j] === 1 ? c : scaled(c, columnScales[j]))),
-    options,
-  );
-  return yScale === 1 && columnScales.every((f) => f === 1) ? fit : inOriginalUnits(fit, yScale, columnScales);
+  const unitColumns = columns.map((c, j) => (columnScales[j] === 1 ? c : scaled(c, columnScales[j])));
+  const qr = new HouseholderQr(unitColumns, n);
+  assertFullRank(qr, options.names);
+  return responses.map((y) => {
+    const yScale = powerOfTwoScale(y);
+    const fit = fitScaled(qr, yScale === 1 ? y : scaled(y, yScale), unitColumns, options);
+    return yScale === 1 && columnScales.every((f) => f === 1) ? fit : inOriginalUnits(fit, yScale, columnScales);
+  });
 }
 
 /**
@@ -105,12 +114,10 @@ function inOriginalUnits(fit: LeastSquaresFit, yScale: number, columnScales: rea
   };
 }
 
-/** The least-squares fit proper, on the response and columns as given (see the file comment). */
-function fitScaled(y: ArrayLike<number>, columns: readonly ArrayLike<number>[], options: LeastSquaresOptions): LeastSquaresFit {
+/** The least-squares fit proper, on the response and columns as given and the columns' factorisation (see the file comment). */
+function fitScaled(qr: HouseholderQr, y: ArrayLike<number>, columns: readonly ArrayLike<number>[], options: LeastSquaresOptions): LeastSquaresFit {
   const n = y.length;
   const k = columns.length;
-  const qr = new HouseholderQr(columns, n);
-  assertFullRank(qr, options.names);
 
   const z = qr.qtY(y);
   const coefficients = qr.backSubstitute(z);

@@ -9,7 +9,7 @@
  * Sigma_ml = E'E / n, the maximum-likelihood form the lag-order criteria use.
  */
 import { MooringInputError } from '../errors';
-import { leastSquares, type LeastSquaresFit } from '../regression/least-squares';
+import { leastSquaresEach, type LeastSquaresFit } from '../regression/least-squares';
 import { VAR_TRENDS, checkedBlock, checkedLagCount, varDesign, varLagRow, varTrendCount, type VarTrend } from './var-design';
 
 /** Options of fitVar. */
@@ -79,7 +79,8 @@ export function fitVar(block: readonly ArrayLike<number>[], lags: number, option
   }
 
   const design = varDesign(series, lags, trend, sampleStart, names);
-  const equations = design.responses.map((y) => leastSquares(y, design.columns, { names: design.columnNames, withoutCovariance: options.withoutCovariance }));
+  // One factorisation of the shared regressors serves every equation.
+  const equations = leastSquaresEach(design.responses, design.columns, { names: design.columnNames, withoutCovariance: options.withoutCovariance });
   const coefficients = design.columns.map((_, r) => equations.map((eq) => eq.coefficients[r]));
   const dfResid = n - k;
   const cross = residualCrossProducts(equations);

@@ -3,7 +3,7 @@
  * - the Granger F from one Householder QR (the restricted regression as the leading block of the
  *   unrestricted one) against two separate least-squares fits of the restricted and the
  *   unrestricted regression, as the test was computed before;
- * - leadLag's shared lag order and VAR fit (pair-work.ts) against each direction run alone.
+ * - leadLag's shared lag order (pair-work.ts) against each direction run alone.
  * Data: our own seeded series (invented, for these checks only), including near-collinear pairs.
  */
 import { describe, expect, it } from 'vitest';
@@ -81,7 +81,7 @@ describe('Granger F from one QR equals the two separate fits', () => {
   });
 });
 
-describe('leadLag shares the lag order and the VAR between the two directions', () => {
+describe('leadLag shares the lag order between the two directions', () => {
   it('each direction equals the same test run alone, for every method (seed 20250613)', () => {
     const rng = new SeededRandom(20250613);
     const T = 800;
