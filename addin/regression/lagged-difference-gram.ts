@@ -57,11 +57,8 @@ export function dickeyFullerGram(x: ArrayLike<number>, deterministic: Determinis
   // G_D(i, j) = sum_t dx[t-i] dx[t-j], 0 <= i <= j <= pmax, with i = 0 the response.
   const size = pmax + 1;
   const gd = new Float64Array(size * size);
-  for (let j = 0; j <= pmax; j++) {
-    let s = 0;
-    for (let t = a; t <= b; t++) s += dx[t] * dx[t - j];
-    gd[j] = s;
-  }
+  // With them, the lagged level's sums with the response and each lag: levelSums[j] = sum_t level[t] dx[t - j].
+  const levelSums = lagSums(dx, level, a, b, pmax, gd);
   for (let i = 1; i <= pmax; i++) {
     for (let j = i; j <= pmax; j++) {
       gd[i * size + j] = gd[(i - 1) * size + (j - 1)] + dx[a - i] * dx[a - j] - dx[b + 1 - i] * dx[b + 1 - j];
@@ -82,18 +79,10 @@ export function dickeyFullerGram(x: ArrayLike<number>, deterministic: Determinis
   // Level with itself, the response and each lag; deterministic terms with everything.
   const trendScale = 1 / n;
   let ll = 0;
-  let ly = 0;
-  for (let t = a; t <= b; t++) {
-    ll += level[t] * level[t];
-    ly += level[t] * dx[t];
-  }
+  for (let t = a; t <= b; t++) ll += level[t] * level[t];
   set(0, 0, ll);
-  xty[0] = ly;
-  for (let j = 1; j <= pmax; j++) {
-    let s = 0;
-    for (let t = a; t <= b; t++) s += level[t] * dx[t - j];
-    set(0, lagCol(j), s);
-  }
+  xty[0] = levelSums[0];
+  for (let j = 1; j <= pmax; j++) set(0, lagCol(j), levelSums[j]);
   if (nd > 0) {
     // constant column (all ones)
     let sl = 0;
@@ -163,4 +152,60 @@ function condition(v: Float64Array, deterministic: Deterministic): number {
   if (!(scaledRms > 0)) return 1;
   for (let i = 0; i < n; i++) v[i] = (v[i] * f) / scaledRms;
   return scaledRms / f;
+}
+
+/**
+ * For j = 0..pmax: out[j] = sum_t dx[t] dx[t - j] and (returned) sum_t level[t] dx[t - j], over
+ * t = a..b, each sum taken in row order as a sum of its own (so the doubles are those of one
+ * pass per sum); four lags share one pass over the rows.
+ */
+function lagSums(dx: Float64Array, level: Float64Array, a: number, b: number, pmax: number, out: Float64Array): Float64Array {
+  const sums = new Float64Array(pmax + 1);
+  let j = 0;
+  for (; j + 3 <= pmax; j += 4) {
+    let d0 = 0;
+    let d1 = 0;
+    let d2 = 0;
+    let d3 = 0;
+    let l0 = 0;
+    let l1 = 0;
+    let l2 = 0;
+    let l3 = 0;
+    for (let t = a; t <= b; t++) {
+      const u = dx[t];
+      const v = level[t];
+      const i = t - j;
+      const c0 = dx[i];
+      const c1 = dx[i - 1];
+      const c2 = dx[i - 2];
+      const c3 = dx[i - 3];
+      d0 += u * c0;
+      d1 += u * c1;
+      d2 += u * c2;
+      d3 += u * c3;
+      l0 += v * c0;
+      l1 += v * c1;
+      l2 += v * c2;
+      l3 += v * c3;
+    }
+    out[j] = d0;
+    out[j + 1] = d1;
+    out[j + 2] = d2;
+    out[j + 3] = d3;
+    sums[j] = l0;
+    sums[j + 1] = l1;
+    sums[j + 2] = l2;
+    sums[j + 3] = l3;
+  }
+  for (; j <= pmax; j++) {
+    let s = 0;
+    let l = 0;
+    for (let t = a; t <= b; t++) {
+      s += dx[t] * dx[t - j];
+      l += level[t] * dx[t - j];
+    }
+    out[j] = s;
+    sums[j] = l;
+  }
+  return sums;
 }

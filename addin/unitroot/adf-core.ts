@@ -11,6 +11,7 @@ import { adfRegression, type AdfRegression } from './adf-regression';
 import { ADF_GRAM_WORK, adfTauByGram } from './adf-tau-gram';
 import { chooseAdfLags, LAG_RULES, type LagChoice, type LagRule } from './adf-lag-search';
 import { resolveMaxLag } from './max-lag';
+import { dickeyFullerGram, type DickeyFullerGram } from '../regression/lagged-difference-gram';
 
 /** A fixed number of lagged changes, or a rule that chooses it. */
 export type LagOption = number | LagRule;
@@ -44,8 +45,11 @@ export function adfCore(x: ArrayLike<number>, options: AdfCoreOptions): AdfCore 
     throw new MooringInputError(`Unknown lag rule '${String(lags)}': use a whole number or one of ${LAG_RULES.join(', ')}.`);
   }
   const maxLags = resolveMaxLag(x.length, cap, options.maxLags);
-  const choice = chooseAdfLags(x, options.deterministic, maxLags, lags);
-  return { regression: chosenRegression(x, choice.lags, options.deterministic), lagRule: lags, maxLags, choice };
+  // The search's cross products are built once: where it chooses its largest lag, the chosen
+  // regression has the same sample and columns, and reads them again.
+  const gram = dickeyFullerGram(x, options.deterministic, maxLags);
+  const choice = chooseAdfLags(x, options.deterministic, maxLags, lags, gram);
+  return { regression: chosenRegression(x, choice.lags, options.deterministic, choice.lags === maxLags ? gram : undefined), lagRule: lags, maxLags, choice };
 }
 
 /**
@@ -53,11 +57,11 @@ export function adfCore(x: ArrayLike<number>, options: AdfCoreOptions): AdfCore 
  * ADF_GRAM_WORK) from its O(n p) cross products (adf-tau-gram.ts), with QR wherever those
  * are not numerically safe.
  */
-function chosenRegression(x: ArrayLike<number>, lags: number, deterministic: Deterministic): AdfStatistic {
+function chosenRegression(x: ArrayLike<number>, lags: number, deterministic: Deterministic, gram?: DickeyFullerGram): AdfStatistic {
   const n = x.length - 1 - lags;
   const k = 1 + lags + deterministicCount(deterministic);
   if (n > 0 && n * k * k > ADF_GRAM_WORK) {
-    const fast = adfTauByGram(x, lags, deterministic);
+    const fast = adfTauByGram(x, lags, deterministic, gram);
     if (fast !== null) return { tau: fast.tau, gamma: fast.gamma, lags, nobs: fast.nobs };
   }
   return adfRegression(x, lags, deterministic);

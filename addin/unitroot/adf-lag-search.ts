@@ -11,7 +11,7 @@
  */
 import type { Deterministic } from '../result';
 import { gaussianLogLikelihood } from '../regression/least-squares';
-import { dickeyFullerGram } from '../regression/lagged-difference-gram';
+import { dickeyFullerGram, type DickeyFullerGram } from '../regression/lagged-difference-gram';
 import { nestedFitsFromGram } from '../regression/nested-cholesky';
 import { deterministicCount } from '../regression/deterministic-terms';
 
@@ -32,8 +32,8 @@ export interface LagChoice {
   commonNobs: number;
 }
 
-export function chooseAdfLags(x: ArrayLike<number>, deterministic: Deterministic, maxLags: number, rule: LagRule): LagChoice {
-  const gram = dickeyFullerGram(x, deterministic, maxLags);
+/** `gram`, when given, must be dickeyFullerGram(x, deterministic, maxLags) (the caller built it to reuse it). */
+export function chooseAdfLags(x: ArrayLike<number>, deterministic: Deterministic, maxLags: number, rule: LagRule, gram: DickeyFullerGram = dickeyFullerGram(x, deterministic, maxLags)): LagChoice {
   const fits = nestedFitsFromGram(gram.xtx, gram.xty, gram.yty, gram.k, gram.n);
   const base = 1 + deterministicCount(deterministic); // columns of the 0-lag model
   const n = gram.n;

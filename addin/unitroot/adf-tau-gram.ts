@@ -54,9 +54,12 @@ export interface AdfTauByGram {
   nobs: number;
 }
 
-/** tau and gamma of the ADF regression with `lags` lagged changes, or null where the cross products are not safe. */
-export function adfTauByGram(x: ArrayLike<number>, lags: number, deterministic: Deterministic): AdfTauByGram | null {
-  const gram = dickeyFullerGram(x, deterministic, lags);
+/**
+ * tau and gamma of the ADF regression with `lags` lagged changes, or null where the cross products
+ * are not safe. `gram`, when given, must be dickeyFullerGram(x, deterministic, lags) (the lag
+ * search's, when it chose its largest lag: the same sample and columns).
+ */
+export function adfTauByGram(x: ArrayLike<number>, lags: number, deterministic: Deterministic, gram: DickeyFullerGram = dickeyFullerGram(x, deterministic, lags)): AdfTauByGram | null {
   const k = gram.k;
   const n = gram.n;
   if (n - k < 1) return null;

@@ -109,25 +109,16 @@ export function varChangeGram(block: readonly Float64Array[], maxLags: number): 
     for (let b = 0; b < K; b++) {
       const db = d[b];
       const yb = y[b];
-      for (let j = 0; j < M; j++) {
-        let s = 0;
-        for (let t = M; t < T; t++) s += da[t] * db[t - j];
-        dd[(a * K + b) * size + j] = s;
-      }
-      // y_a[t-1] with y_b[t-1] (each pair once) and with the response Δy_b[t].
+      // Each D_ab(j) and each sum of y_a[t-1] d_b[t-j] (j = 0: with the response) runs over the rows
+      // in order as a sum of its own; four lags share one pass (the same doubles, fewer passes).
+      const ly = lagSums(da, ya, db, M, T, dd, (a * K + b) * size);
       if (b >= a) {
         let s = 0;
         for (let t = M; t < T; t++) s += ya[t - 1] * yb[t - 1];
         set(levelColumn(a), levelColumn(b), s);
       }
-      let r = 0;
-      for (let t = M; t < T; t++) r += ya[t - 1] * db[t];
-      xty[levelColumn(a) * K + b] = r;
-      for (let j = 1; j < M; j++) {
-        let s = 0;
-        for (let t = M; t < T; t++) s += ya[t - 1] * db[t - j];
-        set(levelColumn(a), changeColumn(j, b), s);
-      }
+      xty[levelColumn(a) * K + b] = ly[0];
+      for (let j = 1; j < M; j++) set(levelColumn(a), changeColumn(j, b), ly[j]);
     }
   }
   const D = (a: number, b: number, j: number): number => dd[(a * K + b) * size + j];
@@ -183,4 +174,59 @@ function centredChanges(v: Float64Array): Float64Array {
   m /= Math.max(T - 1, 1);
   for (let t = 1; t < T; t++) d[t] -= m;
   return d;
+}
+
+/**
+ * For j = 0..M-1: out[at + j] = sum_t da[t] db[t-j], and (returned) sum_t ya[t-1] db[t-j], over
+ * t = M..T-1, each sum taken in row order. Four lags per pass over the rows.
+ */
+function lagSums(da: Float64Array, ya: Float64Array, db: Float64Array, M: number, T: number, out: Float64Array, at: number): Float64Array {
+  const level = new Float64Array(M);
+  let j = 0;
+  for (; j + 3 < M; j += 4) {
+    let d0 = 0;
+    let d1 = 0;
+    let d2 = 0;
+    let d3 = 0;
+    let l0 = 0;
+    let l1 = 0;
+    let l2 = 0;
+    let l3 = 0;
+    for (let t = M; t < T; t++) {
+      const u = da[t];
+      const v = ya[t - 1];
+      const i = t - j;
+      const b0 = db[i];
+      const b1 = db[i - 1];
+      const b2 = db[i - 2];
+      const b3 = db[i - 3];
+      d0 += u * b0;
+      d1 += u * b1;
+      d2 += u * b2;
+      d3 += u * b3;
+      l0 += v * b0;
+      l1 += v * b1;
+      l2 += v * b2;
+      l3 += v * b3;
+    }
+    out[at + j] = d0;
+    out[at + j + 1] = d1;
+    out[at + j + 2] = d2;
+    out[at + j + 3] = d3;
+    level[j] = l0;
+    level[j + 1] = l1;
+    level[j + 2] = l2;
+    level[j + 3] = l3;
+  }
+  for (; j < M; j++) {
+    let s = 0;
+    let l = 0;
+    for (let t = M; t < T; t++) {
+      s += da[t] * db[t - j];
+      l += ya[t - 1] * db[t - j];
+    }
+    out[at + j] = s;
+    level[j] = l;
+  }
+  return level;
 }
