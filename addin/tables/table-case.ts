@@ -54,16 +54,23 @@ export function requireTableCase(regression: string): asserts regression is Tabl
 /** Throws unless `n` is a whole number of at least 1 (a count of series or of trends). */
 export function requireCount(n: number, what: string): void {
   if (!Number.isInteger(n) || n < 1) {
-    throw new MooringInputError(`The ${what} must be a whole number of at least 1; got ${n}.`);
+    const given = typeof n !== 'number' ? `'${String(n)}'` : Number.isNaN(n) ? 'no number' : String(n);
+    throw new MooringInputError(`The ${what} must be a whole number of at least 1, such as 1 or 2; got ${given}.`);
   }
 }
 
-/** Throws when a statistic handed to a table is NaN (a NaN would only travel on as a result). */
+/**
+ * Throws when a statistic handed to a table is not a number (it would only travel on as a
+ * result). The cleaner has already refused gaps and non-finite prices by then, so what is left
+ * is a series that does not move, prices so large that sums of their squares overflow, or too
+ * few rows for the regression: the message says how to mend each.
+ */
 export function requireNotNaN(stat: number, what: string): void {
   if (Number.isNaN(stat)) {
     throw new MooringInputError(
-      `The ${what} is not a number (NaN), so no p-value can be read from the table; ` +
-        'check the data for gaps or a constant series.',
+      `The ${what} could not be computed from these data, so no p-value can be read from the table. ` +
+        'What would work: series that move (not the same value on every row), prices within about 1e150 in size ' +
+        '(rescale larger ones, for example to thousands), and more rows than the test\'s lags and terms (at least 20).',
     );
   }
 }
