@@ -43,6 +43,8 @@ export function readCsv(text: string, choice: DialectChoice = {}): CsvTable {
   if (typeof text !== 'string') throw new MooringInputError('The CSV input is not text.');
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   const dialect = findDialect(body, choice);
+  const plain = plainColumns(body, dialect.delimiter.charCodeAt(0));
+  if (plain !== null) return finishTable(plain.header, plain.columns, plain.lines, dialect);
   const { records, lines } = parseRecords(body, dialect.delimiter.charCodeAt(0));
   while (records.length > 0 && isBlankRecord(records[records.length - 1])) {
     records.pop();
@@ -87,8 +89,12 @@ export function readCsv(text: string, choice: DialectChoice = {}): CsvTable {
     const rec = records[r];
     for (let j = 0; j < width; j++) columns[j][r - 1] = rec[j];
   }
+  return finishTable(header, columns, lines.slice(1), dialect);
+}
+
+/** The date column found, numbers rewritten to decimal points (or a decimal comma refused), the notices. */
+function finishTable(header: string[], columns: string[][], dataLines: number[], dialect: CsvDialect): CsvTable {
   const dateIndex = findDateColumn(header, columns);
-  const dataLines = lines.slice(1);
   columns.forEach((fields, j) => {
     if (j === dateIndex) return;
     if (dialect.decimal === ',') {
@@ -104,6 +110,51 @@ export function readCsv(text: string, choice: DialectChoice = {}): CsvTable {
   });
   const notices = dialect.delimiter === ',' && dialect.decimal === '.' ? [] : [`Read as ${describeDialect(dialect)}${dialect.found ? ' (found from the file)' : ''}.`];
   return { header, columns, dateColumn: dateIndex >= 0 ? header[dateIndex] : null, dateIndex, lines: dataLines, dialect, notices };
+}
+
+/**
+ * The common case read straight into columns, without a record object per line: no double quote
+ * anywhere, at least two columns, every line with the header's number of fields, no empty line
+ * (a trailing line break ends the last record). Anything else returns null and the full parser
+ * reads the file, so every refusal and its message stays that parser's.
+ */
+function plainColumns(text: string, separator: number): { header: string[]; columns: string[][]; lines: number[] } | null {
+  if (text.indexOf('"') >= 0) return null;
+  const n = text.length;
+  let end = 0;
+  while (end < n && text.charCodeAt(end) !== LF && text.charCodeAt(end) !== CR) end++;
+  const header = text.slice(0, end).split(String.fromCharCode(separator)).map((h, j) => h.replace(/[\u2028\u2029]+/g, ' ').trim() || `column ${j + 1}`);
+  const width = header.length;
+  if (width < 2) return null;
+  const columns: string[][] = header.map(() => []);
+  const lines: number[] = [];
+  let i = end;
+  let line = 1;
+  for (;;) {
+    // the record break: CRLF, LF or CR
+    if (i >= n) break;
+    if (text.charCodeAt(i) === CR && text.charCodeAt(i + 1) === LF) i += 2;
+    else i++;
+    line++;
+    if (i >= n) break;
+    lines.push(line);
+    for (let j = 0; j < width; j++) {
+      const from = i;
+      let c = 0;
+      while (i < n) {
+        c = text.charCodeAt(i);
+        if (c === separator || c === LF || c === CR) break;
+        i++;
+      }
+      const last = j === width - 1;
+      // A field count other than the header's (or an empty line) is left to the full parser.
+      if (last ? i < n && c === separator : i >= n || c !== separator) return null;
+      columns[j].push(text.slice(from, i));
+      if (!last) i++;
+    }
+  }
+  if (lines.length === 0) return null;
+  return { header, columns, lines };
 }
 
 function isBlankRecord(rec: string[]): boolean {
