@@ -5,6 +5,8 @@
  * levels block, one more in the short-run block) is timed beside it for comparison.
  */
 import { johansenTest } from '../johansen/johansen';
+import { betaRestrictionTest, exogeneityTests } from '../johansen/restrictions';
+import { benchPair } from './cointegration-bench';
 import { SeededRandom, autoregressive1, randomWalk } from '../random';
 import { timeIt, type Timing } from './timing';
 
@@ -25,6 +27,23 @@ export function benchJohansen(): (Timing & { ms: number })[] {
   const runs = [
     timeIt("Johansen, 6 series x 2,500 rows, K = 2, 'constant'", () => johansenTest(block, { case: 'constant', lags: 2 }), { runs: 41, warmup: 10, targetMs: 5 }),
     timeIt("Johansen, 6 series x 2,500 rows, K = 2, 'restricted-trend'", () => johansenTest(block, { case: 'restricted-trend', lags: 2 }), { runs: 41, warmup: 10 }),
+  ];
+  return runs.map((t) => ({ ...t, ms: t.medianMs }));
+}
+
+/**
+ * Timings of the tests on the Johansen relation (`mooring johansen --beta-test`, `--exogeneity`)
+ * on the 2,500-row pair of the cointegration benchmark with K = 2, 'constant': the relation is
+ * 1 : -1.2 up to scale, and each series' adjustment is zero (one relation). Target 5 ms each;
+ * the reference library has neither test, so there is no ratio.
+ */
+export function benchJohansenRestrictions(): (Timing & { ms: number })[] {
+  const { y, x } = benchPair();
+  const block = [y, x];
+  const options = { case: 'constant' as const, lags: 2 };
+  const runs = [
+    timeIt("Johansen relation restriction (--beta-test 1,-1.2), 2 series x 2,500 rows, K = 2, 'constant'", () => betaRestrictionTest(block, [1, -1.2], options), { runs: 101, warmup: 20, targetMs: 5 }),
+    timeIt("Johansen adjustment tests (--exogeneity, one relation), 2 series x 2,500 rows, K = 2, 'constant'", () => exogeneityTests(block, { ...options, rank: 1 }), { runs: 101, warmup: 20, targetMs: 5 }),
   ];
   return runs.map((t) => ({ ...t, ms: t.medianMs }));
 }

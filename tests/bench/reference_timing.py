@@ -3,7 +3,7 @@ benchmark hands it, so `npm run bench` can print the ratio of our time to its ti
 
 Input: a JSON file {"adf": [[...series...]], "coint": [[y, x], ...], "johansen": [[[...], ...]],
 "kalman": [[y, x]], "vecm": [[[...], ...]], "kpss": [[...]], "granger": [[cause, effect]],
-"zivotAndrews": [[...]]}.
+"zivotAndrews": [[...]], "ardl": [[y, x]]}.
 Output: one JSON object on stdout with the median milliseconds per call of each routine.
 Only the benchmark runs this; tests and CI never do.
 """
@@ -14,6 +14,7 @@ import warnings
 
 import numpy as np
 from statsmodels.tsa.api import VAR
+from statsmodels.tsa.ardl import UECM
 from statsmodels.tsa.stattools import adfuller, coint, grangercausalitytests, kpss, zivot_andrews
 from statsmodels.tsa.statespace.mlemodel import MLEModel
 from statsmodels.tsa.vector_ar.vecm import VECM, coint_johansen
@@ -94,6 +95,12 @@ def main():
     if spec.get("zivotAndrews"):
         x = np.asarray(spec["zivotAndrews"][0])
         out["zivotAndrewsMs"] = median_ms(lambda: zivot_andrews(x, trim=0.15, regression="c", autolag="AIC"), 3)
+    if spec.get("ardl"):
+        y, x = (np.asarray(v) for v in spec["ardl"][0])
+        exog = x.reshape(-1, 1)
+        # ARDL(2, 2) in levels, case 3 (a free constant): the fit and the bounds test, as
+        # Mooring's ardlBoundsTest with --lags 2 --order 2 --case 3 does.
+        out["uecmBoundsMs"] = median_ms(lambda: UECM(y, 2, exog, 2, trend="c").fit().bounds_test(3), 10)
     print(json.dumps(out))
 
 
