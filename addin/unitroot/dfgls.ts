@@ -20,7 +20,7 @@ import { unitRootHypotheses } from './hypotheses';
 export const GLS_DEFAULT_LAG_RULE: GlsLagRule = 'maic';
 
 export function dfglsTest(series: ArrayLike<number>, options: GlsTestOptions = {}, name = 'the series'): TestResult {
-  const core = glsCore(series, options, GLS_DEFAULT_LAG_RULE);
+  const core = glsCore(series, options, GLS_DEFAULT_LAG_RULE, 'tau');
   const { deterministic, regression, choice } = core;
   const T = series.length;
   const p = glsPValue('tau', deterministic, regression.tau, T);
