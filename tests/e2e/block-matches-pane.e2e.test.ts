@@ -13,6 +13,8 @@ import { openPreview, shot, type PreviewSession } from './browser';
 // "append rows" control adds the demo's next 12 days and the comparison runs again on the
 // refreshed pane and block. Expected values come from the other surface (agreement is the
 // check), the committed demo CSV and the demo's own continuation (addin/demo); all invented.
+// Last, two price histories on two calendars in a sheet of their own: joined on their dates by
+// the pane and by the block's MOOR.COMMONDATES formula, with DF-GLS chosen to decide the orders.
 // Screenshots go to test-artifacts/e2e/sheet-*.png.
 
 let session: PreviewSession;
@@ -34,7 +36,7 @@ interface BlockNumber {
 const paneReport = () => page.evaluate(() => window.__mooringPane!.state().report as unknown) as Promise<DiagnosticReport>;
 
 /** Every number the block shows in its value column, read from the in-memory workbook. */
-async function blockNumbers(): Promise<{ sheet: string; numbers: BlockNumber[] }> {
+async function blockNumbers(block = BLOCK): Promise<{ sheet: string; numbers: BlockNumber[] }> {
   return page.evaluate(async (name) => {
     const wb = window.__mooringWorkbook!;
     const found = await wb.findBlock(name);
@@ -52,7 +54,7 @@ async function blockNumbers(): Promise<{ sheet: string; numbers: BlockNumber[] }
       if (typeof label === 'string' && typeof value === 'number') numbers.push({ label, cell: `${valueCol}${r}`, value });
     }
     return { sheet: found.sheet, numbers };
-  }, BLOCK);
+  }, block);
 }
 
 /** What the pane says for each labelled number of the block (label prefix -> number), from its report. */
@@ -96,8 +98,8 @@ function paneNumbers(report: DiagnosticReport, tableRows: number): Record<string
 }
 
 /** Checks every number of the block against the pane's report (1e-12 relative); every block number must be matched. */
-async function expectBlockMatchesReport(tableRows: number): Promise<BlockNumber[]> {
-  const { numbers } = await blockNumbers();
+async function expectBlockMatchesReport(tableRows: number, block = BLOCK): Promise<BlockNumber[]> {
+  const { numbers } = await blockNumbers(block);
   const report = await paneReport();
   const pane = paneNumbers(report, tableRows);
   const unmatched = numbers.filter((n) => !Object.keys(pane).some((label) => n.label.startsWith(label)));
@@ -311,6 +313,77 @@ describe('the preview shows the sheet, and the block it gets matches the pane', 
     await shot(page, 'sheet-06-new-sheet-tab');
     await page.locator('#sheet [data-sheet="Prices"]').click();
     expect(await cellText('A1')).toBe('Date');
+  });
+
+  it('two price histories on two calendars: the pane joins them on their dates, DF-GLS decides the orders, and the block (joined by MOOR.COMMONDATES) shows the pane\'s numbers', async () => {
+    // The demo's GateGasoil without every 7th date, its DockDiesel without every 11th, side by side.
+    const rows = DEMO_CSV.slice(1).map((l) => l.split(','));
+    const a = rows.filter((_, i) => i % 7 !== 3).map((f) => [f[0], Number(f[1])]);
+    const b = rows.filter((_, i) => i % 11 !== 5).map((f) => [f[0], Number(f[2])]);
+    const inB = new Set(b.map((r) => r[0]));
+    const shared = a.filter((r) => inB.has(r[0])).length;
+    const grid: (string | number | null)[][] = [['Date A', 'GateGasoil', 'Date B', 'DockDiesel']];
+    const height = Math.max(a.length, b.length);
+    for (let i = 0; i < height; i++) grid.push([...(a[i] ?? [null, null]), ...(b[i] ?? [null, null])] as (string | number | null)[]);
+    await page.evaluate((cells) => {
+      const wb = window.__mooringWorkbook!;
+      void wb.addSheet('Two');
+      wb.setValues('Two', 'A1', cells);
+      wb.select('Two', 'B2');
+    }, grid);
+    await page.locator('[data-step="data"]').click();
+    await page.locator('[data-role="detect"]').click();
+    await page.waitForSelector('[data-role="found"]:has-text("Two")');
+    // The From date typed for the demo table stays in the field: clear it to use every shared date.
+    await page.locator('fluent-text-input[data-role="from"] input').fill('');
+    await page.keyboard.press('Tab');
+    await expect.poll(() => page.locator('[data-role="rows-used"]').textContent()).toContain(`${shared} of ${shared} rows used, shared date`);
+    await shot(page, 'sheet-07-two-calendars');
+    await page.locator('[data-role="run"]').click();
+    await page.waitForSelector('[data-series="DockDiesel"], [data-role="run-problem"]', { timeout: 60_000 });
+    await shot(page, 'sheet-07b-two-calendars-run');
+    expect(await page.locator('[data-role="run-problem"]').count(), await page.locator('[data-role="run-problem"]').first().textContent({ timeout: 100 }).catch(() => '')).toBe(0);
+    let report = await paneReport();
+    expect(report.warnings[0]).toBe(`Joined on dates: the prices dated by 'Date A' and 'Date B' share ${shared} dates, ${report.data.first.date} to ${report.data.last.date}; GateGasoil lost ${a.length - shared} of its rows, DockDiesel lost ${b.length - shared} of its rows. Every test uses the shared dates only.`);
+    expect(await page.locator('.warnings', { hasText: 'Joined on dates' }).count()).toBe(1);
+    // The order step: DF-GLS beside ADF and KPSS, then chosen to decide.
+    await page.locator('[data-series="GateGasoil"] details > summary').click();
+    expect(await page.locator('[data-series="GateGasoil"] table.tests th', { hasText: 'DF-GLS' }).count()).toBe(1);
+    expect(await page.locator('[data-series="GateGasoil"] table.tests tr.note-row').first().textContent()).toMatch(/^Rejects below -\d\.\d+ at 5%/);
+    await page.locator('fluent-radio[value="dfgls"]').click();
+    await page.waitForSelector('[data-role="progress"]', { state: 'detached', timeout: 60_000 });
+    report = await paneReport();
+    expect(report.settings.unitRootTest).toBe('dfgls');
+    expect(report.series.every((s) => s.decidedBy === 'dfgls')).toBe(true);
+    await page.locator('[data-series="GateGasoil"] details > summary').click();
+    expect(await page.locator('[data-series="GateGasoil"] [data-role="decided-by"]').textContent()).toMatch(/^Decided on the levels by the test with more power/);
+    await shot(page, 'sheet-08-two-calendars-dfgls');
+
+    await page.locator('[data-step="write"]').click();
+    await page.locator('fluent-radio[value="beside"]').click();
+    await page.locator('[data-role="write"]').click();
+    await page.waitForSelector('[data-role="written"]', { timeout: 60_000 });
+    const written = (await page.locator('[data-role="written"] li').first().textContent()) ?? '';
+    const name = /named (\S+)\.$/.exec(written)?.[1] ?? '';
+    expect(written).toMatch(/^Wrote \d+ cells to Two!/);
+    const formulas = await page.evaluate(async (n) => {
+      const wb = window.__mooringWorkbook!;
+      const found = (await wb.findBlock(n))!;
+      const out: string[] = [];
+      for (let r = 1; r <= 60; r++) for (let c = 0; c < 26; c++) {
+        const f = wb.cellAt(found.sheet, `${String.fromCharCode(65 + c)}${r}`).stored?.formula;
+        if (f) out.push(f);
+      }
+      return out;
+    }, name);
+    // One join over both calendars, each from its date column to its prices (the pane makes the data a table before writing, as it offers).
+    const joins = formulas.filter((f) => f.includes('MOOR.COMMONDATES'));
+    expect(joins).toHaveLength(1);
+    expect(joins[0]).toMatch(new RegExp(`^=MOOR\\.COMMONDATES\\((\\w+\\[\\[Date A\\]:\\[GateGasoil\\]\\]|Two!\\$A\\$2:\\$B\\$${height + 1}),(\\w+\\[\\[Date B\\]:\\[DockDiesel\\]\\]|Two!\\$C\\$2:\\$D\\$${height + 1})\\)$`));
+    expect(formulas.find((f) => f.includes('MOOR.ORDER'))).toContain('"dfgls"');
+    await expectBlockMatchesReport(shared, name);
+    await page.locator('#sheet [data-sheet="Two"]').click();
+    await shot(page, 'sheet-09-two-calendars-block');
   });
 
   it('made no request outside the page and broke no content security rule', () => {
