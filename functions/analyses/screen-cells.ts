@@ -13,12 +13,17 @@
  * row is read as a blank row rather than cut off, so every row keeps its position in the range
  * handed over and a message still names the cell where the user sees it.
  */
-import { screenPairs } from '../../addin/screen/screen-pairs';
+import { screenUniverseInWorkers, type ScreenPort } from '../../addin/screen/screen-in-workers';
+import { resolveScreenOptions } from '../../addin/screen/screen-options';
+import { screenPairs, type NamedSeries, type ScreenResult } from '../../addin/screen/screen-pairs';
+import { screenUniverse, unorderedPairCount } from '../../addin/screen/screen-universe';
+import { threadsWorth } from '../../addin/screen/thread-work';
 import { cellKind } from '../../addin/series/cell-kinds';
 import { readBlock } from '../cells/range-input';
 import { levelValue, optionWord, prepValue } from '../options/option-values';
 import { SCREEN_SHOW_WORDS } from '../options/option-words';
 import { screenGrid, screenList } from '../render/screen-table';
+import { availableCores, closeScreenWorkers, screenWorkers, workersAvailable } from '../workers/screen-worker-pool';
 
 /** A block with its header row, if any, taken out: the names it gives (null where a column has none) and the block with that row blank. */
 export function blockHeader(block: unknown): { names: (string | null)[] | null; body: unknown } {
@@ -30,11 +35,65 @@ export function blockHeader(block: unknown): { names: (string | null)[] | null; 
   return { names, body: [first.map(() => null), ...block.slice(1)] };
 }
 
-export function screenCell(block: unknown, alpha: unknown, show: unknown, prep?: unknown): (number | string)[][] {
+/** The screen's input read from the cells: its series, level and choice of view (refusals thrown here, naming the cell). */
+function screenInput(block: unknown, alpha: unknown, show: unknown, prep?: unknown): { series: NamedSeries[]; level: number; choice: string } {
   const level = levelValue('alpha', alpha, 0.05);
   const choice = optionWord('show', show, SCREEN_SHOW_WORDS, 'list');
   const { names, body } = blockHeader(block);
   const series = readBlock(body, 'the block', prepValue(prep));
-  const result = screenPairs(series.map((s, j) => ({ name: names?.[j] ?? s.name, values: s.values })), { alpha: level });
+  return { series: series.map((s, j) => ({ name: names?.[j] ?? s.name, values: s.values })), level, choice };
+}
+
+function screenCells(result: ScreenResult, choice: string): (number | string)[][] {
   return choice === 'list' ? screenList(result) : screenGrid(result, choice === 'adjusted');
+}
+
+/** MOOR.SCREEN on this thread. */
+export function screenCell(block: unknown, alpha: unknown, show: unknown, prep?: unknown): (number | string)[][] {
+  const { series, level, choice } = screenInput(block, alpha, show, prep);
+  return screenCells(screenPairs(series, { alpha: level }), choice);
+}
+
+/** Where MOOR.SCREEN finds workers: how many cores, how to start `count` of them, how to end them after a failure. */
+export interface ScreenWorkerSource {
+  cores(): number;
+  start(count: number): ScreenPort[];
+  close(): void;
+}
+
+/** The runtime's Web Workers (screen-worker-pool.ts), or null where it has none (the JavaScript-only runtime, Node). */
+export function webWorkerSource(): ScreenWorkerSource | null {
+  return workersAvailable() ? { cores: availableCores, start: screenWorkers, close: closeScreenWorkers } : null;
+}
+
+/**
+ * MOOR.SCREEN as Excel calls it. Where the runtime has workers and the screen earns two or more
+ * (thread-work.ts: the work that pays for a thread), the orders and the pairs run on them
+ * (addin/screen/screen-in-workers.ts) and the answer is a Promise of the cells, which Excel
+ * awaits; otherwise, or if a worker fails, the screen runs on this thread as screenCell does.
+ * The cells are the same either way. A refusal of the input is thrown at once, before any worker
+ * starts, so it names the cell exactly as on one thread.
+ */
+export function screenCellOrLater(
+  block: unknown, alpha: unknown, show: unknown, prep?: unknown, workers: ScreenWorkerSource | null = webWorkerSource(),
+): (number | string)[][] | Promise<(number | string)[][]> {
+  const { series, level, choice } = screenInput(block, alpha, show, prep);
+  const settings = resolveScreenOptions({ alpha: level });
+  const universe = screenUniverse(series);
+  const count = workers ? threadsWorth(unorderedPairCount(universe.names.length), universe.rows, workers.cores()) : 1;
+  if (!workers || count < 2) return screenCells(screenPairs(series, { alpha: level }), choice);
+  let ports: ScreenPort[];
+  try {
+    ports = workers.start(count);
+  } catch {
+    workers.close();
+    return screenCells(screenPairs(series, { alpha: level }), choice);
+  }
+  return screenUniverseInWorkers(universe, settings, ports).then(
+    (result) => screenCells(result, choice),
+    () => {
+      workers.close();
+      return screenCells(screenPairs(series, { alpha: level }), choice);
+    },
+  );
 }

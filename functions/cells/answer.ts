@@ -28,3 +28,12 @@ export function answer<T>(work: () => T): T {
     throw toCellError(e);
   }
 }
+
+/**
+ * As answer, for work that may answer later: a value is returned as it is, and a Promise's
+ * refusal becomes the same cell error answer() would give (Excel awaits a Promise a custom
+ * function returns). Refusals thrown before the Promise exists are answer()'s to map.
+ */
+export function answerLater<T>(value: T | Promise<T>): T | Promise<T> {
+  return value instanceof Promise ? value.catch((e: unknown) => { throw toCellError(e); }) : value;
+}
