@@ -1,11 +1,10 @@
 // Every custom function the add-in registers: the build's metadata plugin turns each `@customfunction`
 // JSDoc below into an entry of functions.json (types from the signature) and appends the associate calls.
 // Each wrapper is thin, its work in ./analyses or ./version.ts. Ranges are `any[][]` and options `any`, so
-// blanks, text and errors reach the shared cleaner untouched (cells/range-input.ts); answer() maps every
-// refusal to a cell error once.
+// blanks, text and errors reach the shared cleaner untouched (cells/range-input.ts); answer() maps refusals.
 /// <reference types="custom-functions-runtime" />
 
-import { answer, answerLater } from './cells/answer';
+import { answer } from './cells/answer';
 import { egCell, poCell } from './analyses/cointegration-cells';
 import { critCell } from './analyses/critical-value-cells';
 import { commonDatesCell } from './analyses/dates-cells';
@@ -13,7 +12,7 @@ import { ecmCell } from './analyses/ecm-cells';
 import { johansenCell, rankCell } from './analyses/johansen-cells';
 import { grangerCell, varLagsCell } from './analyses/lead-lag-cells';
 import { rollingCell } from './analyses/rolling-cells';
-import { screenCellOrLater } from './analyses/screen-cells';
+import { screenLaterCell } from './analyses/screen-cells';
 import { halfLifeCell, hedgeCell, spreadCell, zScoreCell } from './analyses/spread-cells';
 import { adfCell, kpssCell, orderCell, ppCell } from './analyses/unit-root-cells';
 import { addinVersion } from './version';
@@ -76,7 +75,7 @@ export function phillipsperron(series: any[][], deterministic?: any, bandwidth?:
  * @param series Prices: one column or one row; or several columns, one series each, for one order per column on the rows they share.
  * @param [alpha] Significance level of each step, such as 0.05 or 5%. Default 0.05.
  * @param [deterministic] Terms in the level tests: none, const or trend. Default const.
- * @param [test] The test that decides whether the levels wander: adf, or dfgls (more power against slow return to a mean; needs const or trend). The changes always take adf. Default adf.
+ * @param [test] Test that decides if the levels wander: adf, or dfgls (more power; const or trend). Changes use adf. Default adf.
  * @param [prep] How to prepare the prices: log, skip gaps, from row N, to row N, last N, separated by commas. Default: as they are, every row.
  * @returns 0, 1 or 2, or the text "above 2"; a row of them for several columns.
  */
@@ -247,9 +246,7 @@ export function varlags(block: any[][], criterion?: any, maxlags?: any, prep?: a
  * @returns The ranked pairs (then those set aside, with why), ending with how many would pass by chance alone.
  */
 export function screen(block: any[][], alpha?: any, show?: any, prep?: any): any[][] {
-  // On Web Workers the answer is a Promise of these cells, which Excel awaits; the declared type
-  // stays the cells' so the metadata keeps the result a matrix (screenCellOrLater).
-  return answer(() => answerLater(screenCellOrLater(block, alpha, show, prep))) as any[][];
+  return answer(() => screenLaterCell(block, alpha, show, prep));
 }
 /**
  * Rolling relation: the Engle-Granger p-value, hedge ratio and half-life of y on x in each window of rows.

@@ -19,6 +19,7 @@ import { screenPairs, type NamedSeries, type ScreenResult } from '../../addin/sc
 import { screenUniverse, unorderedPairCount } from '../../addin/screen/screen-universe';
 import { threadsWorth } from '../../addin/screen/thread-work';
 import { cellKind } from '../../addin/series/cell-kinds';
+import { answerLater } from '../cells/answer';
 import { readBlock } from '../cells/range-input';
 import { levelValue, optionWord, prepValue } from '../options/option-values';
 import { SCREEN_SHOW_WORDS } from '../options/option-words';
@@ -96,4 +97,13 @@ export function screenCellOrLater(
       return screenCells(screenPairs(series, { alpha: level }), choice);
     },
   );
+}
+
+/**
+ * MOOR.SCREEN's body: screenCellOrLater with a late refusal mapped to the cell error answer()
+ * gives. On Web Workers the answer is a Promise of the cells, which Excel awaits; the declared
+ * type stays the cells' so the metadata keeps the result a matrix.
+ */
+export function screenLaterCell(block: unknown, alpha: unknown, show: unknown, prep?: unknown): (number | string)[][] {
+  return answerLater(screenCellOrLater(block, alpha, show, prep)) as (number | string)[][];
 }

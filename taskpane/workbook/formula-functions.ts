@@ -5,6 +5,8 @@
  * built-ins the results block uses (IF, ISNUMBER, NA, ABS, AVERAGE, STDEV.S, COUNT, ROWS,
  * ROW, INDEX, HSTACK, CHOOSECOLS, ISNA, MATCH). Any other name is #NAME?, as in Excel for an unknown function.
  */
+import { screenCell } from '../../functions/analyses/screen-cells';
+import { answer } from '../../functions/cells/answer';
 import * as registered from '../../functions/functions';
 import {
   FormulaError,
@@ -57,6 +59,10 @@ const MOOR_FUNCTIONS: Record<string, (...args: unknown[]) => unknown> = Object.f
     .filter(([, f]) => typeof f === 'function')
     .map(([name, f]) => [`MOOR.${name.toUpperCase()}`, f as (...args: unknown[]) => unknown]),
 );
+// This evaluator is synchronous, so MOOR.SCREEN runs on this thread here even where the browser has
+// Web Workers (the registered function would answer with a Promise); the cells are the same either
+// way (tests/screen/screen-in-workers.test.ts, tests/e2e/screen-workers.e2e.test.ts).
+MOOR_FUNCTIONS['MOOR.SCREEN'] = (block, alpha, show, prep) => answer(() => screenCell(block, alpha, show, prep));
 
 function callMoor(name: string, call: CallContext): Evaluated {
   const f = MOOR_FUNCTIONS[name];

@@ -342,7 +342,7 @@ describe('the preview shows the sheet, and the block it gets matches the pane', 
     await page.locator('[data-role="run"]').click();
     await page.waitForSelector('[data-series="DockDiesel"], [data-role="run-problem"]', { timeout: 60_000 });
     await shot(page, 'sheet-07b-two-calendars-run');
-    expect(await page.locator('[data-role="run-problem"]').count(), await page.locator('[data-role="run-problem"]').first().textContent({ timeout: 100 }).catch(() => '')).toBe(0);
+    expect(await page.locator('[data-role="run-problem"]').count(), await page.locator('[data-role="run-problem"]').first().textContent({ timeout: 100 }).catch(() => '') ?? '').toBe(0);
     let report = await paneReport();
     expect(report.warnings[0]).toBe(`Joined on dates: the prices dated by 'Date A' and 'Date B' share ${shared} dates, ${report.data.first.date} to ${report.data.last.date}; GateGasoil lost ${a.length - shared} of its rows, DockDiesel lost ${b.length - shared} of its rows. Every test uses the shared dates only.`);
     expect(await page.locator('.warnings', { hasText: 'Joined on dates' }).count()).toBe(1);

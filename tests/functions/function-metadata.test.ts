@@ -40,7 +40,7 @@ const SURFACE: Record<string, { args: string[]; spills: boolean }> = {
   ADF: { args: ['series[]', 'deterministic?', 'lags?', 'show?', 'prep?'], spills: true },
   KPSS: { args: ['series[]', 'deterministic?', 'bandwidth?', 'show?', 'prep?'], spills: true },
   PHILLIPSPERRON: { args: ['series[]', 'deterministic?', 'bandwidth?', 'show?', 'prep?'], spills: true },
-  ORDER: { args: ['series[]', 'alpha?', 'deterministic?', 'prep?'], spills: true },
+  ORDER: { args: ['series[]', 'alpha?', 'deterministic?', 'test?', 'prep?'], spills: true },
   GLSROOT: { args: ['series[]', 'deterministic?', 'lags?', 'show?', 'prep?'], spills: true },
   MSTATS: { args: ['series[]', 'deterministic?', 'lags?', 'show?', 'prep?'], spills: true },
   ENGLEGRANGER: { args: ['y[]', 'x[]', 'deterministic?', 'lags?', 'show?', 'prep?'], spills: true },

@@ -85,3 +85,29 @@ describe('text from cells stays text', () => {
     expect(wb.shownValue('Prices', `K${row}`)).toMatch(/^(yes|no): /);
   });
 });
+
+describe('MOOR.SCREEN in the in-memory workbook', () => {
+  it('spills the cells the one-thread screen gives, even where the page has Web Workers (this evaluator does not wait)', async () => {
+    const { screenCell } = await import('../../functions/analyses/screen-cells');
+    const wb = loadCsvTable(DEMO_CSV);
+    const sheet = [...wb.cells.sheets.keys()][0];
+    const started: unknown[] = [];
+    const had = (globalThis as { Worker?: unknown }).Worker;
+    (globalThis as { Worker?: unknown }).Worker = class {
+      constructor(url: unknown) {
+        started.push(url);
+      }
+    };
+    try {
+      wb.setFormula(sheet, 'Z1', '=MOOR.SCREEN(B1:E781)');
+      const block = wb.shownValues(sheet, 'B1:E781');
+      const expected = screenCell(block, undefined, undefined);
+      expect(expected[0].length).toBe(8);
+      const shown = wb.shownValues(sheet, `Z1:AG${expected.length}`);
+      expect(shown.map((r) => r.map((c) => c ?? ''))).toEqual(expected.map((r) => [...r, ...Array(8 - r.length).fill('')]));
+      expect(started).toEqual([]);
+    } finally {
+      (globalThis as { Worker?: unknown }).Worker = had;
+    }
+  });
+});
