@@ -1,5 +1,5 @@
 /**
- * Options shared by the test commands (deterministic terms, lags, bandwidth) with their
+ * Options shared by the test commands (deterministic terms, lags, bandwidth, the unit-root test) with their
  * help lines and readers, so each command declares them the same way.
  */
 import { MooringInputError } from '../errors';
@@ -38,6 +38,20 @@ export const BANDWIDTH_OPTION: OptionSpec = {
   name: 'bandwidth', value: 'N|auto',
   help: 'exactly N lags in the Bartlett kernel, or auto (Newey-West automatic choice; the default)',
 };
+
+/** The tests a user may name to decide whether a series' levels wander. */
+export const UNIT_ROOT_WORDS = ['adf', 'dfgls'] as const;
+
+/** The --unit-root option of `order` and `report`: which test decides the levels step of each order. */
+export const UNIT_ROOT_OPTION: OptionSpec = {
+  name: 'unit-root', value: UNIT_ROOT_WORDS.join('|'),
+  help: 'the test that decides whether the levels wander: adf (the default) or dfgls (more power against a slow return to a mean); the changes are always tested by adf',
+};
+
+/** Reads --unit-root; 'adf' when absent. */
+export function readUnitRootTest(args: ParsedArguments): (typeof UNIT_ROOT_WORDS)[number] {
+  return choiceValue(UNIT_ROOT_OPTION.name, args.values.get(UNIT_ROOT_OPTION.name), UNIT_ROOT_WORDS) ?? 'adf';
+}
 
 /** Reads --deterministic against the allowed words; `fallback` when absent. */
 export function readDeterministic<T extends Deterministic>(args: ParsedArguments, allowed: readonly T[], fallback: T): T {

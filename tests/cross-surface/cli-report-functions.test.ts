@@ -2,12 +2,19 @@
  * One analysis, one set of numbers, across the command line's single commands, `report
  * --json` and the MOOR functions called directly on the same cells: for logs on and off, a
  * skipped gap and each lag rule, every quantity the surfaces share is the same number (1e-12
- * relative). Source of the expected values: the other surfaces (the check is agreement); the
- * data are the demo's, made by our own seeded generator (addin/demo).
+ * relative). With DF-GLS deciding the orders (`report --unit-root dfgls`, the pane's choice, the
+ * test argument of MOOR.ORDER), the orders and every unit-root statistic are the same too.
+ * Source of the expected values: the other surfaces (the check is agreement); the data are the
+ * demo's, made by our own seeded generator (addin/demo).
  */
 import { describe, expect, it } from 'vitest';
 import { MOORING_COMMANDS } from '../../addin/cli/commands';
+import type { DiagnosticOptions } from '../../addin/report/check-input';
+import { diagnose } from '../../addin/report/pairwise-diagnostic';
 import * as moor from '../../functions/functions';
+import { prepareData } from '../../taskpane/ui/data/prepare-data';
+import { DEFAULT_CHOICES } from '../../taskpane/ui/views/choices';
+import { loadCsvTable } from '../../taskpane/workbook/demo-workbook';
 import { runWith } from '../cli/cli-harness';
 import { DEMO_CSV } from '../pane-workbook/demo-block';
 
@@ -155,4 +162,60 @@ describe('the command line, the report and the formulas agree on one analysis', 
       }
     }, 60_000);
   }
+});
+
+describe('DF-GLS deciding the orders: report --unit-root dfgls, the pane and MOOR.ORDER agree', () => {
+  it('the same orders and unit-root statistics, and the choice recorded in the settings', async () => {
+    const cli = json(DEMO_CSV, ['report', '--series', `${A},${B}`, '--log', '--skip-gaps', '--unit-root', 'dfgls']).report;
+    expect(cli.settings.unitRootTest).toBe('dfgls');
+    expect(cli.series.map((s: { decidedBy: string }) => s.decidedBy)).toEqual(['dfgls', 'dfgls']);
+
+    // The pane's run: its data step, then the engine with the options pane.ts passes (its stage choices spread in).
+    const region = await loadCsvTable(DEMO_CSV).readTable('QuennelPrices');
+    const prepared = prepareData(region, { columns: [A, B].map((n) => region.headers.indexOf(n)), log: true, skipGaps: true, from: null, to: null, alpha: 0.05 });
+    const options: DiagnosticOptions = { log: true, alpha: 0.05, window: prepared.window, preparation: prepared.prepText, ...DEFAULT_CHOICES, unitRootTest: 'dfgls' };
+    const pane = diagnose(prepared.input, options);
+    expect(pane.settings.unitRootTest).toBe('dfgls');
+    expect(cli.settings.preparation).toBe(pane.settings.preparation);
+
+    const cells: Record<string, (number | null)[][]> = { [A]: columnCells(DEMO_CSV, A), [B]: columnCells(DEMO_CSV, B) };
+    const both = moor.order(cells[A].map((r, i) => [r[0], cells[B][i][0]]), null, null, 'dfgls', pane.settings.preparation) as unknown as number[][];
+
+    [A, B].forEach((name, j) => {
+      const fromCli = cli.series[j];
+      const fromPane = pane.series[j];
+      expect([fromCli.name, fromPane.name]).toEqual([name, name]);
+      const order = json(DEMO_CSV, ['order', '--series', name, '--log', '--unit-root', 'dfgls']);
+      expect([fromPane.order, order.order, both[0][j]], `order of ${name}`).toEqual([fromCli.order, fromCli.order, fromCli.order]);
+      expect(fromPane.agree).toBe(fromCli.agree);
+      expect(order.agree).toBe(fromCli.agree);
+      for (const step of fromCli.steps) {
+        const paneStep = fromPane.steps.find((x) => x.differences === step.differences);
+        for (const test of ['adf', 'kpss', 'gls'] as const) {
+          if (step[test] === null) {
+            expect(paneStep?.[test], `${name} ${test} after ${step.differences} differences`).toBeNull();
+            continue;
+          }
+          same(`${name} ${test} statistic after ${step.differences} differences`, [step[test].statistic, paneStep?.[test]?.statistic]);
+          same(`${name} ${test} p-value after ${step.differences} differences`, [step[test].pValue, paneStep?.[test]?.pValue]);
+        }
+        // \`order --unit-root dfgls\` ran the test that decided each step: DF-GLS on the levels, ADF on the changes.
+        const ran = order.steps.find((x: { differences: number }) => x.differences === step.differences);
+        if (ran === undefined) continue;
+        const decider = step.differences === 0 ? step.gls : step.adf;
+        expect(ran.adf.test).toBe(decider.test);
+        same(`${name} deciding statistic after ${step.differences} differences (order)`, [decider.statistic, ran.adf.statistic]);
+        same(`${name} KPSS after ${step.differences} differences (order)`, [step.kpss.statistic, ran.kpss.statistic]);
+      }
+      expect(fromCli.steps.find((x: { differences: number }) => x.differences === 0).gls.test).toBe('DF-GLS');
+    });
+  }, 60_000);
+
+  it('--unit-root is refused with the words that would work, as order refuses it', () => {
+    for (const command of ['report', 'order']) {
+      const run = runWith(MOORING_COMMANDS, [command, FILE, '--series', command === 'report' ? `${A},${B}` : A, '--unit-root', 'pp'], { [FILE]: DEMO_CSV });
+      expect(run.code).toBe(2);
+      expect(run.stderr).toMatch(/--unit-root must be one of adf, dfgls, not 'pp'/);
+    }
+  });
 });

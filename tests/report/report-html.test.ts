@@ -54,6 +54,28 @@ describe('the HTML report of the demo (--out)', () => {
   });
 });
 
+describe('the HTML report with DF-GLS deciding the orders (--unit-root dfgls)', () => {
+  it('says which test decided, shows its column, and stays well formed', () => {
+    const out = join(ARTIFACTS, 'demo-report-dfgls.html');
+    const run = runMooring(['report', DEMO_CSV, '--series', 'GateGasoil,DockDiesel', '--log', '--unit-root', 'dfgls', '--out', out, '--force']);
+    expect(run.code, run.stderr).toBe(0);
+    const page = readFileSync(out, 'utf8');
+    expect(htmlProblems(page)).toEqual([]);
+    expect(page).toContain('<li>Orders of integration decided by DF-GLS on the levels, ADF on the changes.</li>');
+    expect(page).toContain('DF-GLS p, levels');
+    expect(page).toContain('DF-GLS and KPSS');
+  });
+
+  it('and by ADF when nothing else is asked', () => {
+    const out = join(ARTIFACTS, 'demo-report-adf.html');
+    const run = runMooring(['report', DEMO_CSV, '--series', 'GateGasoil,DockDiesel', '--log', '--out', out, '--force']);
+    expect(run.code, run.stderr).toBe(0);
+    const page = readFileSync(out, 'utf8');
+    expect(page).toContain('<li>Orders of integration decided by ADF.</li>');
+    expect(page).not.toContain('DF-GLS p, levels');
+  });
+});
+
 describe('a hostile column header', () => {
   const hostile = '<script>alert("x")</script>';
   const other = 'B&"\'<b>';

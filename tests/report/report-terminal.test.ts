@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { formatPValue } from '../../addin/cli/render/format';
 import { DEMO_CSV, runMooring } from './report-run';
 
 describe('the readable terminal report of the demo', () => {
@@ -22,8 +23,33 @@ describe('the readable terminal report of the demo', () => {
     expect(text).toMatch(/Toda-Yamamoto\s+does GateGasoil lead DockDiesel\?\s+[0-9.]+\s+< 0\.0001\s+rejects/);
   });
 
+  it('says that ADF decided the orders when nothing else was asked', () => {
+    expect(text).toMatch(/Orders decided by\s+ADF\n/);
+    expect(text).toMatch(/ADF and KPSS\n/);
+    expect(text).not.toContain('DF-GLS p, levels');
+  });
+
   it('closes with the cautions and the screening count of this report', () => {
     expect(text).toContain('statistical evidence, not advice to trade');
     expect(text).toMatch(/This report tested 15 pairs and 30 lead-lag\s+directions/);
+  });
+});
+
+describe('the terminal report with DF-GLS deciding the orders (--unit-root dfgls)', () => {
+  const run = runMooring(['report', DEMO_CSV, '--series', 'GateGasoil,DockDiesel', '--log', '--unit-root', 'dfgls']);
+  const json = JSON.parse(runMooring(['report', DEMO_CSV, '--series', 'GateGasoil,DockDiesel', '--log', '--unit-root', 'dfgls', '--json']).stdout).report;
+
+  it('names the test that decided and shows its p-value on the levels beside ADF and KPSS', () => {
+    expect(run.code, run.stderr).toBe(0);
+    expect(run.stdout).toMatch(/Orders decided by\s+DF-GLS on the levels, ADF on the changes/);
+    expect(run.stdout).toMatch(/series\s+order\s+DF-GLS p, levels\s+ADF p, levels\s+ADF p, changes\s+KPSS p, levels\s+KPSS p, changes\s+DF-GLS and KPSS/);
+    // Each series' row carries the DF-GLS p-value of its levels step, as the JSON report holds it.
+    for (const s of json.series) {
+      const gls = s.steps.find((x: { differences: number }) => x.differences === 0).gls;
+      expect(gls.test).toBe('DF-GLS');
+      const row = run.stdout.split('\n').find((l) => l.trim().startsWith(`${s.name} `) && l.includes(s.orderText));
+      expect(row, s.name).toBeDefined();
+      expect(row?.trim().split(/\s{2,}/)[2]).toBe(formatPValue(gls.pValue, gls.pValueBound));
+    }
   });
 });

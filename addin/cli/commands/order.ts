@@ -1,12 +1,12 @@
 /** `mooring order`: the order of integration of one series, from ADF and KPSS together. */
 import { integrationOrder } from '../../unitroot/integration-order';
 import type { Command } from '../command';
-import { choiceValue, levelValue } from '../option-values';
+import { levelValue } from '../option-values';
 import { orderResultJson } from '../render/order-json';
 import { renderOrderTerminal } from '../render/order-terminal';
 import { renderSampleTerminal, sampleJson } from '../render/sample';
 import { seriesFromContext } from '../series-input';
-import { ALL_DETERMINISTIC, deterministicOption, readDeterministic } from '../test-options';
+import { ALL_DETERMINISTIC, deterministicOption, readDeterministic, readUnitRootTest, UNIT_ROOT_OPTION } from '../test-options';
 
 /** The order command. */
 export const orderCommand: Command = {
@@ -21,13 +21,13 @@ export const orderCommand: Command = {
   options: [
     deterministicOption(ALL_DETERMINISTIC),
     { name: 'alpha', value: 'LEVEL', help: 'significance level of each test, such as 0.05 (the default) or 1%' },
-    { name: 'unit-root', value: 'adf|dfgls', help: 'the unit-root test on the levels: adf (the default) or dfgls (more power against slow reversion; differences keep adf)' },
+    UNIT_ROOT_OPTION,
   ],
   examples: ['mooring order prices.csv --series Crude --log'],
   run(context) {
     const deterministic = readDeterministic(context.args, ALL_DETERMINISTIC, 'const');
     const alpha = levelValue('alpha', context.args.values.get('alpha')) ?? 0.05;
-    const unitRootTest = choiceValue('unit-root', context.args.values.get('unit-root'), ['adf', 'dfgls'] as const) ?? 'adf';
+    const unitRootTest = readUnitRootTest(context.args);
     const input = seriesFromContext(context);
     const result = integrationOrder(input.series.values, { deterministic, alpha, unitRootTest }, input.label);
     return {

@@ -20,6 +20,7 @@ import { choiceValue, levelValue, wholeNumberValue } from '../option-values';
 import { renderDiagnosticHtml } from '../render/diagnostic-html';
 import { renderDiagnosticTerminal } from '../render/diagnostic-terminal';
 import { checkReportPath, writeReportFile } from '../report-file';
+import { readUnitRootTest, UNIT_ROOT_OPTION } from '../test-options';
 
 /** A column counts as numbers when more than half of its filled fields read as plain decimals. */
 function isNumericColumn(fields: readonly string[]): boolean {
@@ -62,6 +63,7 @@ function runReport(context: CommandContext): { terminal: string; json: Record<st
   const lagRule = choiceValue('lag-rule', args.values.get('lag-rule'), ['aic', 'bic'] as const);
   const johansenCase = choiceValue('johansen-case', args.values.get('johansen-case'), ['auto', ...JOHANSEN_CASES] as readonly (JohansenCase | 'auto')[]);
   const deterministic = choiceValue('deterministic', args.values.get('deterministic'), ['const', 'trend'] as const);
+  const unitRootTest = readUnitRootTest(args);
   const rollingWindow = wholeNumberValue('rolling-window', args.values.get('rolling-window'), 'rows');
   const period = args.values.get('period')?.trim() || undefined;
   const out = args.values.get('out');
@@ -75,7 +77,7 @@ function runReport(context: CommandContext): { terminal: string; json: Record<st
   const dates = table.dateIndex >= 0 ? table.columns[table.dateIndex] : null;
   const input = prepareDiagnosticInput(block, { dateOf: (i) => dates?.[i]?.trim() || null, source: file === '-' ? 'standard input' : file });
   const preparation = [describePreparation({ ...AS_GIVEN, log: context.common.log, skipGaps: context.common.skipGaps }), context.window ?? ''].filter((w) => w !== '').join(', ');
-  const report = diagnose(input, { log: context.common.log, alpha, lagRule, johansenCase, deterministic, rollingWindow, period, preparation });
+  const report = diagnose(input, { log: context.common.log, alpha, lagRule, johansenCase, deterministic, rollingWindow, period, preparation, unitRootTest });
   // What was done to the rows before the diagnostic (order, join, window) is part of its warnings.
   if (context.notices && context.notices.length > 0) report.warnings = [...context.notices, ...report.warnings];
   if (out !== undefined) writeReportFile(out, renderDiagnosticHtml(report));
@@ -108,12 +110,14 @@ export const reportCommand: Command = {
     { name: 'lag-rule', value: 'aic|bic', help: 'criterion for the lag orders (default aic)' },
     { name: 'johansen-case', value: 'auto|CASE', help: `Johansen deterministic case: auto (chosen from the drift; the default) or one of ${JOHANSEN_CASES.join(', ')}` },
     { name: 'deterministic', value: 'const|trend', help: 'terms in the unit-root and residual tests (default const)' },
+    UNIT_ROOT_OPTION,
     { name: 'rolling-window', value: 'N', help: 'rows in the trailing window of the rolling z-score (default 60)' },
   ],
   examples: [
     'mooring report prices.csv --log',
     'mooring report prices.csv --series Diesel,Gasoil --log --out diesel-gasoil.html',
     'mooring report prices.csv --series Diesel,Gasoil,Freight --alpha 0.01 --json',
+    'mooring report prices.csv --series Diesel,Gasoil --log --unit-root dfgls',
   ],
   run: runReport,
 };

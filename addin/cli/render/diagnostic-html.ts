@@ -8,6 +8,7 @@
 import type { DiagnosticReport } from '../../report/report-types';
 import { formatPValue } from './format';
 import { el, escapeHtml, htmlTable } from './html-text';
+import { orderDecidedBy, orderTable } from './order-table';
 import { renderPairHtml } from './pair-html';
 import { PAGE_STYLE } from './report-style';
 import { lineChart } from './svg-chart';
@@ -33,6 +34,7 @@ function dataSummary(report: DiagnosticReport): string {
     d.window ? `Window: rows ${d.window.start + 1} to ${d.window.end} of the cleaned series.` : '',
     d.dropped.length === 0 ? 'No rows were dropped.' : `${d.dropped.length} cell${d.dropped.length === 1 ? ' was' : 's were'} dropped as gaps (listed below).`,
     `Level of every decision: ${Number((report.settings.alpha * 100).toPrecision(6))}%; lag orders by ${report.settings.lagRule.toUpperCase()}.`,
+    `Orders of integration decided by ${orderDecidedBy(report)}.`,
   ].filter((s) => s !== '');
   return `<ul class="data">${items.map((s) => el('li', s)).join('')}</ul>`;
 }
@@ -53,20 +55,13 @@ function seriesPart(report: DiagnosticReport): string {
     xLabels: report.data.dates ?? report.data.rowLabels,
     lines: report.series.map((s, i) => ({ values: s.chart.values, colour: SERIES_COLOURS[i % SERIES_COLOURS.length], label: s.name })),
   });
-  const step = (s: DiagnosticReport['series'][number], d: number, t: 'adf' | 'kpss'): string => {
-    const found = s.steps.find((x) => x.differences === d);
-    return found ? formatPValue(found[t].pValue, found[t].pValueBound) : '-';
-  };
-  const table = htmlTable(
-    ['series', 'order', 'ADF p, levels', 'ADF p, changes', 'KPSS p, levels', 'KPSS p, changes', 'ADF and KPSS'],
-    report.series.map((s) => [s.name, s.orderText, step(s, 0, 'adf'), step(s, 1, 'adf'), step(s, 0, 'kpss'), step(s, 1, 'kpss'), s.agree ? 'agree' : 'disagree']),
-    [0, 1, 6],
-  );
+  const orders = orderTable(report);
+  const table = htmlTable(orders.header, orders.rows, orders.textColumns);
   const caption = rebased
     ? 'Each series as 100 times its value over its first value (for logs, the price ratio), so series in different units share one axis.'
     : 'Each series minus its mean, over its standard deviation (some values are zero or negative, so they cannot be rebased).';
   return `<figure>${chart}${el('figcaption', caption)}</figure>\n${table}\n` +
-    el('p', 'ADF tests the null of a unit root (the level wanders); KPSS the null of stationarity. An I(1) series wanders in levels and is stationary in changes.', 'note');
+    el('p', `ADF${report.settings.unitRootTest === 'dfgls' ? ' and DF-GLS test' : ' tests'} the null of a unit root (the level wanders); KPSS the null of stationarity. An I(1) series wanders in levels and is stationary in changes.`, 'note');
 }
 
 function systemPart(report: DiagnosticReport): string {

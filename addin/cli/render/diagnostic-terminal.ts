@@ -4,9 +4,10 @@
  * and the warnings. It lays out the report's fields and computes nothing; the runner adds
  * the closing cautions, and this adds the report's own screening count beside them.
  */
-import type { DiagnosticReport, SeriesReport } from '../../report/report-types';
-import { bullet, formatPValue, formatStatistic, heading, labelled } from './format';
+import type { DiagnosticReport } from '../../report/report-types';
+import { bullet, formatStatistic, heading, labelled } from './format';
 import { renderOtherPairsTerminal, renderPairTerminal, testRow } from './pair-terminal';
+import { orderDecidedBy, orderTable } from './order-table';
 import { textTable } from './text-table';
 
 /** Where and when: "780 rows, 2022-01-03 to 2024-12-27 (line 2 to line 781), natural logs". */
@@ -14,18 +15,6 @@ export function dataLine(report: DiagnosticReport): string {
   const d = report.data;
   const span = d.first.date && d.last.date ? `${d.first.date} to ${d.last.date}` : `${d.first.label} to ${d.last.label}`;
   return `${d.observations} rows, ${span}${d.logged ? ', natural logs' : ''}`;
-}
-
-function seriesTable(series: readonly SeriesReport[]): string[] {
-  const cell = (s: SeriesReport, d: number, test: 'adf' | 'kpss'): string => {
-    const step = s.steps.find((x) => x.differences === d);
-    return step ? formatPValue(step[test].pValue, step[test].pValueBound) : '-';
-  };
-  return textTable(
-    ['series', 'order', 'ADF p, levels', 'ADF p, changes', 'KPSS p, levels', 'KPSS p, changes', 'ADF and KPSS'],
-    series.map((s) => [s.name, s.orderText, cell(s, 0, 'adf'), cell(s, 1, 'adf'), cell(s, 0, 'kpss'), cell(s, 1, 'kpss'), s.agree ? 'agree' : 'disagree']),
-    [0, 1, 6],
-  );
 }
 
 /** Renders the whole report for the terminal (the runner appends the general cautions). */
@@ -42,7 +31,10 @@ export function renderDiagnosticTerminal(report: DiagnosticReport, extra: { sour
   out.push('', `Findings at the ${formatLevel(s.alpha)} level`, '');
   for (const f of report.findings) out.push(bullet(f.text, 2, '*'));
 
-  out.push('', 'Order of integration (p-values; ADF null: unit root, KPSS null: stationary)', '', ...seriesTable(report.series));
+  const orders = orderTable(report);
+  const nulls = s.unitRootTest === 'dfgls' ? 'DF-GLS and ADF null: unit root' : 'ADF null: unit root';
+  out.push('', `Order of integration (p-values; ${nulls}, KPSS null: stationary)`, '', ...textTable(orders.header, orders.rows, orders.textColumns));
+  out.push('', labelled('Orders decided by', orderDecidedBy(report)));
 
   const related = report.pairs.filter((p) => p.cointegration.cointegrated);
   const others = report.pairs.filter((p) => !p.cointegration.cointegrated);
