@@ -104,20 +104,24 @@ export function movingHedge(y: ArrayLike<number>, x: ArrayLike<number>, names: {
   // A filtered value has a finite variance from the last row of the diffuse period on.
   const filtered = (t: number): boolean => t >= d - 1;
   const root = (v: number): number => Math.sqrt(Math.max(v, 0));
-  const beta = Array.from(path.filteredB, (v, t) => (filtered(t) ? v : null));
-  const intercept = Array.from(path.filteredA, (v, t) => (filtered(t) ? v : null));
-  const betaStd = Array.from({ length: n }, (_, t) => (filtered(t) ? root(path.filteredStar[3 * t + 2]) : null));
-  const interceptStd = Array.from({ length: n }, (_, t) => (filtered(t) ? root(path.filteredStar[3 * t]) : null));
-  const spread = Array.from(path.v, (v, t) => (t >= d ? v : null));
-  const spreadStandardised = Array.from(path.v, (v, t) => (t >= d ? v / Math.sqrt(path.F[t]) : null));
-  const betaSmoothed = Array.from(smooth.slope);
-  const betaSmoothedStd = Array.from(smooth.slopeVar, root);
-  const interceptSmoothed = Array.from(smooth.intercept);
-  const interceptSmoothedStd = Array.from(smooth.interceptVar, root);
+  // Each per-row array is made from its length (Array.from on an array-like allocates it once)
+  // rather than from the typed array's iterator, which grows it step by step: on a million rows
+  // that left a few hundred megabytes of discarded copies at the report's peak.
+  const perRow = <T>(value: (t: number) => T): T[] => Array.from({ length: n }, (_, t) => value(t));
+  const beta = perRow((t) => (filtered(t) ? path.filteredB[t] : null));
+  const intercept = perRow((t) => (filtered(t) ? path.filteredA[t] : null));
+  const betaStd = perRow((t) => (filtered(t) ? root(path.filteredStar[3 * t + 2]) : null));
+  const interceptStd = perRow((t) => (filtered(t) ? root(path.filteredStar[3 * t]) : null));
+  const spread = perRow((t) => (t >= d ? path.v[t] : null));
+  const spreadStandardised = perRow((t) => (t >= d ? path.v[t] / Math.sqrt(path.F[t]) : null));
+  const betaSmoothed = perRow((t) => smooth.slope[t]);
+  const betaSmoothedStd = perRow((t) => root(smooth.slopeVar[t]));
+  const interceptSmoothed = perRow((t) => smooth.intercept[t]);
+  const interceptSmoothedStd = perRow((t) => root(smooth.interceptVar[t]));
 
   const z = normalQuantile(0.975);
-  const betaSmoothedLow = betaSmoothed.map((b, t) => b - z * betaSmoothedStd[t]);
-  const betaSmoothedHigh = betaSmoothed.map((b, t) => b + z * betaSmoothedStd[t]);
+  const betaSmoothedLow = perRow((t) => betaSmoothed[t] - z * betaSmoothedStd[t]);
+  const betaSmoothedHigh = perRow((t) => betaSmoothed[t] + z * betaSmoothedStd[t]);
   const last = n - 1;
   const latestBeta = path.filteredB[last];
   const latestStd = betaStd[last] as number;
