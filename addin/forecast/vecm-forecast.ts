@@ -149,17 +149,20 @@ export function vecmForecast(block: ArrayLike<number>[], names: string[], option
   const trendAt = (t: number) => t - K;
   const dAt = (t: number) => (inRelation === 'trend' ? trendAt(t) : 1);
 
-  const levels: number[][] = Array.from({ length: T }, (_, t) => Array.from({ length: m }, (__, k) => block[k][t]));
+  // The recursion reads only the last K + 2 rows of data, so only those are copied into rows
+  // (a row array per data row cost some 100 MB at a million rows); levels[t - first] is row t.
+  const first = Math.max(0, T - K - 2);
+  const levels: number[][] = Array.from({ length: T - first }, (_, r) => Array.from({ length: m }, (__, k) => block[k][first + r]));
   for (let h = 1; h <= horizon; h++) {
     const t = T - 1 + h;
-    const prev = levels[t - 1];
+    const prev = levels[t - 1 - first];
     const next = prev.slice();
     for (let s = 0; s < m; s++) {
       let change = mu0[s] + mu1[s] * trendAt(t) + restricted[s] * (inRelation ? dAt(t) : 0);
       for (let q = 0; q < m; q++) change += pi[s][q] * prev[q];
       for (let lag = 1; lag <= K; lag++) {
-        const a = levels[t - lag];
-        const b = levels[t - lag - 1];
+        const a = levels[t - lag - first];
+        const b = levels[t - lag - 1 - first];
         for (let q = 0; q < m; q++) change += gamma[lag - 1][s][q] * (a[q] - b[q]);
       }
       next[s] = prev[s] + change;
@@ -185,7 +188,7 @@ export function vecmForecast(block: ArrayLike<number>[], names: string[], option
     mse.push(acc);
   }
   const z = normalQuantile(0.975);
-  const forecast = levels.slice(T);
+  const forecast = levels.slice(T - first);
   const standardError = mse.map((M) => M.map((row, i) => Math.sqrt(Math.max(row[i], 0))));
   const lower = forecast.map((row, h) => row.map((v, i) => v - z * standardError[h][i]));
   const upper = forecast.map((row, h) => row.map((v, i) => v + z * standardError[h][i]));
@@ -194,8 +197,13 @@ export function vecmForecast(block: ArrayLike<number>[], names: string[], option
   if (rank > 0) {
     const w = betaR.map((row) => row[0]);
     const dw = inRelation ? detInRelation[0] : null;
-    const value = (x: number[], t: number) => w.reduce((s, wi, i) => s + wi * x[i], 0) + (dw === null ? 0 : dw * dAt(t + 1));
-    const history = levels.slice(0, T).map((x, t) => value(x, t));
+    const value = (x: ArrayLike<number>, t: number) => w.reduce((s, wi, i) => s + wi * x[i], 0) + (dw === null ? 0 : dw * dAt(t + 1));
+    // Each data row's value read from the columns directly (the same sum in the same order).
+    const row = new Float64Array(m);
+    const history = Array.from({ length: T }, (_, t) => {
+      for (let k = 0; k < m; k++) row[k] = block[k][t];
+      return value(row, t);
+    });
     const fitted = history.slice(K, K + n);
     const mean = fitted.reduce((a, b) => a + b, 0) / fitted.length;
     const path = forecast.map((x, h) => value(x, T + h));
