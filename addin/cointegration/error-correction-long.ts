@@ -9,9 +9,10 @@
  * model on the first j columns are Δy'Δy - sum_{i<j} z_y,i^2, Δx'Δx - sum z_x,i^2 and
  * Δy'Δx - sum z_y,i z_x,i (the tails of Q'Δy and Q'Δx in the QR route). The changes are first
  * freed of their means (a shift in the span of the constant, so these sums do not change).
- * Only the choice is made here; the chosen model is fitted by QR (error-correction.ts).
+ * The chosen model is fitted here too where its design would be large (errorCorrectionFitByGram),
+ * else by QR (error-correction.ts).
  */
-import { choleskyFactor, forwardSolve } from '../regression/refined-least-squares';
+import { choleskyFactor, forwardSolve, refinedLeastSquares } from '../regression/refined-least-squares';
 import { WindowDesign, type WindowColumn } from '../regression/window-design';
 
 /** Rows times columns squared above which the cross-product route pays for itself (as the ADF's). */
@@ -76,4 +77,79 @@ export function chooseEcmLagsByGram(y: ArrayLike<number>, x: ArrayLike<number>, 
     }
   }
   return best;
+}
+
+/** Smallest share of its column's sum of squares each pivot must keep for the standard errors to be read from the factor. */
+const FIT_PIVOT_FLOOR = 1e-2;
+/** The last refinement step may move each coefficient by at most this share of its standard error (or of itself, if larger). */
+const FIT_TOLERANCE = 1e-12;
+
+/** What the report reads of each equation's fit (the fields of LeastSquaresFit it uses). */
+export interface EcmEquationFit {
+  coefficients: Float64Array;
+  standardErrors: Float64Array;
+  tValues: Float64Array;
+  dfResid: number;
+  rSquared: number;
+  nobs: number;
+}
+
+/**
+ * Both equations with p lags on rows p + 1 .. T - 1, columns [u_{t-1}, 1, Δy_{t-1}, Δx_{t-1}, ...],
+ * from the cross products of the design as it stands (not centred, so every coefficient and
+ * standard error is the QR route's own): one Cholesky, each equation refined from its true
+ * residuals, standard errors from sigma^2 (L L')^{-1}. Null where a pivot keeps less than
+ * FIT_PIVOT_FLOOR of its column or a refinement does not settle (the caller fits by QR).
+ */
+export function errorCorrectionFitByGram(y: ArrayLike<number>, x: ArrayLike<number>, u: ArrayLike<number>, p: number): { y: EcmEquationFit; x: EcmEquationFit } | null {
+  const T = y.length;
+  const from = p + 1;
+  const n = T - from;
+  const changes = (v: ArrayLike<number>): Float64Array => {
+    const out = new Float64Array(T);
+    for (let t = 1; t < T; t++) out[t] = v[t] - v[t - 1];
+    return out;
+  };
+  const dy = changes(y);
+  const dx = changes(x);
+  const columns: WindowColumn[] = [{ source: 0, offset: from - 1 }, { source: -1, offset: 0 }];
+  for (let i = 1; i <= p; i++) columns.push({ source: 1, offset: from - i }, { source: 2, offset: from - i });
+  const k = columns.length;
+  if (n - k < 1) return null;
+  const design = new WindowDesign([Float64Array.from(u), dy, dx], columns, n);
+  const { xtx } = design.gram();
+  const L = choleskyFactor(xtx, k, k, FIT_PIVOT_FLOOR);
+  if (L === null) return null;
+  // Diagonal of (L L')^{-1} = L^{-T} L^{-1}: entry j is the sum of squares of column j of L^{-1}.
+  const inverseDiagonal = new Float64Array(k);
+  const e = new Float64Array(k);
+  for (let j = 0; j < k; j++) {
+    e.fill(0);
+    e[j] = 1;
+    forwardSolve(L, k, k, e); // column j of L^{-1}
+    for (let i = 0; i < k; i++) inverseDiagonal[j] += e[i] * e[i];
+  }
+  const equation = (response: Float64Array): EcmEquationFit | null => {
+    const window = response.subarray(from, from + n);
+    const fit = refinedLeastSquares(design, L, k, window);
+    if (fit === null || !(fit.ssr > 0)) return null;
+    const dfResid = n - k;
+    const sigma2 = fit.ssr / dfResid;
+    const standardErrors = new Float64Array(k);
+    const tValues = new Float64Array(k);
+    for (let j = 0; j < k; j++) {
+      standardErrors[j] = Math.sqrt(sigma2 * inverseDiagonal[j]);
+      tValues[j] = fit.coefficients[j] / standardErrors[j];
+      if (!(Math.abs(fit.lastCorrection[j]) <= FIT_TOLERANCE * Math.max(Math.abs(fit.coefficients[j]), standardErrors[j]))) return null;
+    }
+    let mean = 0;
+    for (let t = 0; t < n; t++) mean += window[t];
+    mean /= n;
+    let tss = 0;
+    for (let t = 0; t < n; t++) tss += (window[t] - mean) ** 2;
+    return { coefficients: fit.coefficients, standardErrors, tValues, dfResid, rSquared: tss > 0 ? 1 - fit.ssr / tss : 0, nobs: n };
+  };
+  const fitY = equation(dy);
+  const fitX = fitY === null ? null : equation(dx);
+  return fitY === null || fitX === null ? null : { y: fitY, x: fitX };
 }

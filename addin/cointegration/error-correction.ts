@@ -32,7 +32,7 @@ import { leastSquares, type LeastSquaresFit } from '../regression/least-squares'
 import { schwertMaxLag } from '../unitroot/max-lag';
 import { halfLifeFromSpeed } from '../spread/half-life';
 import { cointegratingRegression, relationText } from './cointegrating-regression';
-import { ECM_GRAM_WORK, chooseEcmLagsByGram } from './error-correction-long';
+import { ECM_GRAM_WORK, chooseEcmLagsByGram, errorCorrectionFitByGram, type EcmEquationFit } from './error-correction-long';
 import { formatCoefficient, formatPeriods, formatPValue, formatShareClosed } from './wording';
 
 export interface ErrorCorrectionOptions {
@@ -186,7 +186,7 @@ function resolveLags(y: ArrayLike<number>, x: ArrayLike<number>, u: ArrayLike<nu
   return { p: chooseEcmLags(y, x, u, pmax), rule: 'aic', pmax };
 }
 
-function adjustmentEquation(series: string, fit: LeastSquaresFit, names: string[], gapSpeed: number): AdjustmentEquation {
+function adjustmentEquation(series: string, fit: EcmEquationFit, names: string[], gapSpeed: number): AdjustmentEquation {
   const df = fit.dfResid;
   const coefficients = names.map((name, j) => ({
     name,
@@ -226,11 +226,9 @@ export function errorCorrectionModel(
   const u = step1.residuals;
   const beta = step1.beta[0];
   const { p, rule, pmax } = resolveLags(y, x, u, options);
-  const d = ecmDesign(y, x, u, p, p + 1, resolved);
-  const fitY = leastSquares(d.dy, d.columns, { names: d.names });
-  const fitX = leastSquares(d.dx, d.columns, { names: d.names });
-  const eqY = adjustmentEquation(resolved.y, fitY, d.names, fitY.coefficients[0]);
-  const eqX = adjustmentEquation(resolved.x, fitX, d.names, -beta * fitX.coefficients[0]);
+  const { fitY, fitX, names: columnNames } = chosenFits(y, x, u, p, resolved);
+  const eqY = adjustmentEquation(resolved.y, fitY, columnNames, fitY.coefficients[0]);
+  const eqX = adjustmentEquation(resolved.x, fitX, columnNames, -beta * fitX.coefficients[0]);
   const combinedSpeed = eqY.gapSpeed + eqX.gapSpeed;
   const combined = halfLifeFromSpeed(combinedSpeed);
 
@@ -260,6 +258,22 @@ export function errorCorrectionModel(
     verdict: ecmVerdict(eqY, eqX, options.period ?? 'period'),
     warnings,
   };
+}
+
+/**
+ * Both equations with p lags on every row they can use: by QR, or where the design would be
+ * large (rows x columns^2 past ECM_GRAM_WORK) from its cross products with refinement
+ * (error-correction-long.ts), which declines to QR where it cannot vouch for its answer.
+ */
+function chosenFits(y: ArrayLike<number>, x: ArrayLike<number>, u: ArrayLike<number>, p: number, names: { y: string; x: string }): { fitY: EcmEquationFit; fitX: EcmEquationFit; names: string[] } {
+  const labels = ['equilibrium error (lag 1)', 'constant'];
+  for (let i = 1; i <= p; i++) labels.push(`change in ${names.y}, lag ${i}`, `change in ${names.x}, lag ${i}`);
+  if ((y.length - 1 - p) * (2 + 2 * p) ** 2 > ECM_GRAM_WORK) {
+    const byGram = errorCorrectionFitByGram(y, x, u, p);
+    if (byGram !== null) return { fitY: byGram.y, fitX: byGram.x, names: labels };
+  }
+  const d = ecmDesign(y, x, u, p, p + 1, names);
+  return { fitY: leastSquares(d.dy, d.columns, { names: d.names }), fitX: leastSquares(d.dx, d.columns, { names: d.names }), names: d.names };
 }
 
 /** "Crude closes about 6% of a gap to its long-run relation each day (alone, that would halve the gap in about 11 days)." plus the other side. */

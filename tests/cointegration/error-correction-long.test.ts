@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { chooseEcmLagsByGram } from '../../addin/cointegration/error-correction-long';
+import { chooseEcmLagsByGram, errorCorrectionFitByGram } from '../../addin/cointegration/error-correction-long';
 import { cointegratingRegression } from '../../addin/cointegration/cointegrating-regression';
 import { HouseholderQr } from '../../addin/linalg/householder-qr';
 import { SeededRandom, autoregressive1, randomWalk } from '../../addin/random';
+import { leastSquares } from '../../addin/regression/least-squares';
 
 /**
  * The error-correction model's lag choice from cross products (used on long series) against
@@ -74,6 +75,34 @@ describe('error-correction lag choice from cross products equals the QR route', 
       it(`chooses the same p as QR with pmax = ${pmax} (${c.name})`, () => {
         const u = cointegratingRegression(c.y, [c.x], 'const', { y: 'y', xs: ['x'] }).residuals;
         expect(chooseEcmLagsByGram(c.y, c.x, u, pmax)).toBe(qrChoice(c.y, c.x, u, pmax));
+      });
+    }
+  }
+
+  for (const c of cases) {
+    for (const p of [0, 3, 6]) {
+      it(`fits both equations as QR does with p = ${p}: coefficients, standard errors, t-values and R² within 1e-10 (${c.name})`, () => {
+        const u = cointegratingRegression(c.y, [c.x], 'const', { y: 'y', xs: ['x'] }).residuals;
+        const T = c.y.length;
+        const from = p + 1;
+        const n = T - from;
+        const change = (v: Float64Array, lag: number) => Float64Array.from({ length: n }, (_, r) => v[from + r - lag] - v[from + r - lag - 1]);
+        const columns = [Float64Array.from({ length: n }, (_, r) => u[from + r - 1]), new Float64Array(n).fill(1)];
+        for (let i = 1; i <= p; i++) columns.push(change(c.y, i), change(c.x, i));
+        const fit = errorCorrectionFitByGram(c.y, c.x, u, p);
+        expect(fit).not.toBeNull();
+        if (fit === null) return;
+        for (const [mine, response] of [[fit.y, change(c.y, 0)], [fit.x, change(c.x, 0)]] as const) {
+          const qr = leastSquares(response, columns);
+          expect(mine.nobs).toBe(qr.nobs);
+          expect(mine.dfResid).toBe(qr.dfResid);
+          for (let j = 0; j < columns.length; j++) {
+            expect(Math.abs(mine.coefficients[j] - qr.coefficients[j]) / qr.standardErrors[j]).toBeLessThan(1e-10);
+            expect(Math.abs(mine.standardErrors[j] - qr.standardErrors[j]) / qr.standardErrors[j]).toBeLessThan(1e-10);
+            expect(Math.abs(mine.tValues[j] - qr.tValues[j])).toBeLessThan(1e-10 * Math.max(1, Math.abs(qr.tValues[j])));
+          }
+          expect(Math.abs(mine.rSquared - qr.rSquared)).toBeLessThan(1e-10);
+        }
       });
     }
   }
