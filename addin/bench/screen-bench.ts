@@ -35,6 +35,7 @@ export interface ScreenTiming extends Timing {
   threads?: ThreadReport;
   peakRssMb?: number;
   targetPeakRssMb?: number;
+  benchProcessPeakRssMb?: number;
   heapUsedMb?: number;
   reference?: Record<string, unknown>;
   /** Microseconds per directed pair per core (pair timings). */
@@ -201,11 +202,11 @@ export function benchScreen(): ScreenTiming[] {
 
   const big = () => (report = screenPairsInThreads(hundred, {}, { threads: cores }).report);
   const t100 = timeIt(`Pair screen, 100 series x 2,520 rows (9,900 directed pairs), ${cores} threads`, big, { runs: 3, warmup: 1, targetMs: 5000 });
-  const peakRssMb = Math.round(process.resourceUsage().maxRSS / 1024);
+  // The memory targets are checked in a process of its own (screen-scale-bench.ts): this process's
+  // peak holds every benchmark run before this one, so it is shown here without a target.
   out.push({
     ...t100, ms: t100.medianMs, cpuMs: cpuPerRun(big, 1), threads: report,
-    peakRssMb, targetPeakRssMb: 300, heapUsedMb: Math.round(process.memoryUsage().heapUsed / 2 ** 20),
-    withinTarget: t100.withinTarget === true && peakRssMb < 300,
+    benchProcessPeakRssMb: Math.round(process.resourceUsage().maxRSS / 1024), heapUsedMb: Math.round(process.memoryUsage().heapUsed / 2 ** 20),
   });
 
   for (const entry of benchPairKernel(hundred, cores)) out.push(entry);

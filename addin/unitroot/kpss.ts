@@ -39,7 +39,18 @@ export function detrendedResiduals(series: ArrayLike<number>, deterministic: 'co
 }
 
 /**
- * series * factor minus its mean, in one new array: the same doubles as scaling a copy and then
+ * Room for n residuals, reused from call to call: a new Float64Array of 10,000 doubles costs
+ * about 0.2 ms on Node 20 (its memory is set up outside the heap), twice the rest of the test.
+ * The residuals never leave kpssTest, and a call runs to its end before the next begins.
+ */
+let residualStore = new Float64Array(0);
+function residualRoom(n: number): Float64Array {
+  if (residualStore.length < n) residualStore = new Float64Array(Math.max(n, 2 * residualStore.length));
+  return residualStore.subarray(0, n);
+}
+
+/**
+ * series * factor minus its mean, in one array: the same doubles as scaling a copy and then
  * subtracting the mean (detrendedResiduals), without the intermediate copy.
  */
 function scaledDeviationsFromMean(series: ArrayLike<number>, factor: number): Float64Array {
@@ -47,7 +58,7 @@ function scaledDeviationsFromMean(series: ArrayLike<number>, factor: number): Fl
   let m = 0;
   for (let i = 0; i < n; i++) m += series[i] * factor;
   m /= n;
-  const out = new Float64Array(n);
+  const out = residualRoom(n);
   for (let i = 0; i < n; i++) out[i] = series[i] * factor - m;
   return out;
 }

@@ -6,7 +6,7 @@
  * the two series 60 s, each under 1 GB; rolling over 250-row windows must finish (no target).
  */
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync } from 'node:fs';
+import { closeSync, existsSync, mkdirSync, openSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Timing } from '../../addin/bench/timing';
 import { writeLargePairCsv } from './large-pair-csv';
@@ -21,16 +21,20 @@ export interface LargeTiming extends Timing {
 }
 
 function runCli(cli: string, args: string[], name: string, targetMs?: number, targetMb?: number): LargeTiming {
+  // The answer goes to a file, not a pipe: a million-row report's JSON passes any pipe buffer
+  // spawnSync would hold (the child was killed at 256 MB before, with no exit code).
+  const answer = openSync(join(process.cwd(), 'test-artifacts', 'bench-large-answer.json'), 'w');
   const start = performance.now();
-  const r = spawnSync(process.execPath, ['--import', PEAK_HOOK, cli, ...args], { encoding: 'utf8', maxBuffer: 1 << 28, stdio: ['ignore', 'pipe', 'pipe'] });
+  const r = spawnSync(process.execPath, ['--import', PEAK_HOOK, cli, ...args], { encoding: 'utf8', maxBuffer: 1 << 24, stdio: ['ignore', answer, 'pipe'] });
   const ms = Math.round(performance.now() - start);
+  closeSync(answer);
   const peak = /peak-rss-kb (\d+)/.exec(r.stderr ?? '');
   const peakRssMb = peak ? Math.round(Number(peak[1]) / 1024) : undefined;
   const out: LargeTiming = { name, medianMs: ms, minMs: ms, runs: 1, exitCode: r.status, peakRssMb };
   if (targetMs !== undefined) out.targetMs = targetMs;
   if (targetMb !== undefined) out.targetPeakRssMb = targetMb;
   out.withinTarget = r.status === 0 && (targetMs === undefined || ms <= targetMs) && (targetMb === undefined || (peakRssMb !== undefined && peakRssMb <= targetMb));
-  if (r.status !== 0) out.error = (r.stderr ?? '').trim().split('\n').slice(0, 2).join(' ');
+  if (r.status !== 0) out.error = r.error ? String(r.error) : (r.stderr ?? '').trim().split('\n').slice(0, 2).join(' ');
   return out;
 }
 
