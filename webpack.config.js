@@ -199,6 +199,8 @@ async function addinConfig(mode, serving, base = DEV_BASE, out = DIST) {
       taskpane: './taskpane/taskpane.ts',
       // The pane over the in-memory workbook with the demo data (npm run preview, end-to-end tests).
       preview: './taskpane/preview/preview.ts',
+      // MOOR.SCREEN's Web Worker (functions/workers/screen-worker-pool.ts starts it by this name).
+      'screen-cells-worker': './functions/workers/screen-cells-worker.ts',
     },
     output: {
       path: out,

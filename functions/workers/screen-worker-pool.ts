@@ -4,9 +4,10 @@
  * screen that earns them and kept for the next, so recalculating a sheet starts no worker twice;
  * a pool whose worker failed is closed and the next screen starts afresh.
  *
- * The `new Worker(new URL(...), import.meta.url)` form lets the bundler emit the worker as its
- * own file (screen-cells-worker.js), served from the add-in's origin as its content security
- * policy requires.
+ * The worker is its own entry of the add-in build (dist/screen-cells-worker.js, webpack.config.js),
+ * served from the add-in's origin beside the page, as its content security policy requires. Its
+ * address is worked out only when a worker starts, so functions.js itself loads anywhere, even
+ * where there is no page address (tests/build/dist.test.ts).
  */
 import type { ScreenPort } from '../../addin/screen/screen-in-workers';
 import type { ScreenReply } from '../../addin/screen/screen-messages';
@@ -42,7 +43,7 @@ function portOf(worker: Worker): ScreenPort {
 /** `count` pooled workers, started as needed; throws when one cannot be started. */
 export function screenWorkers(count: number): ScreenPort[] {
   while (pool.length < count) {
-    pool.push(new Worker(new URL(/* webpackChunkName: "screen-cells-worker" */ './screen-cells-worker.ts', import.meta.url), { name: 'mooring-screen' }));
+    pool.push(new Worker(new URL('screen-cells-worker.js', self.location.href), { name: 'mooring-screen' }));
   }
   return pool.slice(0, count).map(portOf);
 }

@@ -24,11 +24,7 @@ function loadBundle(): Map<string, (...args: unknown[]) => unknown> {
     Error: RuntimeError,
     ErrorCode: { invalidValue: '#VALUE!', notAvailable: '#N/A' },
   };
-  // The functions run in the pane's page (the manifest's shared runtime), whose address the bundle
-  // reads when it loads, to find MOOR.SCREEN's worker script; this context has no Worker, so the
-  // screen answers on this thread.
-  const self = { location: { href: 'https://localhost:3000/taskpane.html' } };
-  runInNewContext(readFileSync(new URL('../../dist/functions.js', import.meta.url), 'utf8'), { CustomFunctions, performance, console, self });
+  runInNewContext(readFileSync(new URL('../../dist/functions.js', import.meta.url), 'utf8'), { CustomFunctions, performance, console });
   return registered;
 }
 
