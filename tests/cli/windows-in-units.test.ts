@@ -41,7 +41,7 @@ describe('rolling: windows and half-lives counted in the spacing of the dates', 
 
   it('weekly dates: the words say weeks, never rows, and JSON puts a unit beside the window and the half-lives', () => {
     const text = run('rolling', 'w.csv', ...argv);
-    expect(text).toMatch(/Windows\s+\d+ of 104 weeks, ends every 20 weeks back/);
+    expect(text).toMatch(/Windows\s+\d+, each 104 weeks long, one ending every 20 weeks,\s+counting\s+back/);
     expect(text).toMatch(/rolling windows of 104 weeks/);
     expect(text).toMatch(/In the latest window \(104 weeks\)/);
     expect(text).toMatch(/window ends\s+weeks\s+p-value\s+beta\s+half-life \(weeks\)/);
@@ -58,11 +58,11 @@ describe('rolling: windows and half-lives counted in the spacing of the dates', 
     expect(plain.halfLifeUnit).toBe('rows');
     expect(numbers({ ...dated, summary: null, endLine: null })).toEqual(numbers({ ...plain, summary: null, endLine: null }));
     expect(dated.summary.map((s: string) => s.replace(/weeks/g, 'rows'))).toEqual(plain.summary);
-    expect(run('rolling', 'u.csv', ...argv)).toMatch(/Windows\s+\d+ of 104 rows, ends every 20 rows back/);
+    expect(run('rolling', 'u.csv', ...argv)).toMatch(/Windows\s+\d+, each 104 rows long, one ending every 20 rows,\s+counting\s+back/);
   });
 
   it('business-day data say days', () => {
-    expect(run('rolling', 'd.csv', ...argv)).toMatch(/of 104 days, ends every 20 days back/);
+    expect(run('rolling', 'd.csv', ...argv)).toMatch(/each 104 days long, one ending every 20 days,\s+counting\s+back/);
     expect(json('rolling', 'd.csv', ...argv).windowUnit).toBe('days');
   });
 });

@@ -69,7 +69,7 @@ export const rollingCommand: Command = {
     const out = [
       heading(`${expanding ? 'Expanding' : 'Rolling'} relation of ${names.y} on ${names.x}`),
       '',
-      labelled('Windows', `${r.endRow.length} ${expanding ? `from the first row, at least ${rowsText(window, period)}` : `of ${rowsText(window, period)}`}, ends every ${rowsText(step, period)} back from the last`),
+      labelled('Windows', `${r.endRow.length}, each ${expanding ? `from the first row and at least ${rowsText(window, period)} long` : `${rowsText(window, period)} long`}, one ending every ${step === 1 ? period : rowsText(step, period)}, counting back from the last`),
       '',
       ...r.summary.map((s) => bullet(s)),
       '',
