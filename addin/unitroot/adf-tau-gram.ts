@@ -31,7 +31,7 @@ const PIVOT_FLOOR = 1e-2;
 const SSR_FLOOR = 1e-4;
 
 /** Smallest share of a column's sum of squares a pivot may keep on the refined route (full rank in double precision). */
-const REFINE_PIVOT_FLOOR = 1e-12;
+export const REFINE_PIVOT_FLOOR = 1e-12;
 /** Most refinement steps. */
 const REFINE_STEPS = 8;
 /**
@@ -135,7 +135,7 @@ function refinedTau(gram: DickeyFullerGram, order: number[]): AdfTauByGram | nul
 }
 
 /** The Dickey-Fuller design's columns in Cholesky order, applied row by row without forming it. */
-class OrderedDesign {
+export class OrderedDesign {
   private readonly nd: number;
   constructor(
     private readonly gram: DickeyFullerGram,
@@ -239,14 +239,14 @@ function choleskySolve(L: Float64Array, k: number, m: number, v: Float64Array): 
   }
 }
 
-interface RefinedFit {
+export interface RefinedFit {
   b: Float64Array;
   ssr: number;
   lastCorrection: Float64Array;
 }
 
 /** Least squares of y on the first m ordered columns, refined from the true residuals; null if the corrections do not settle. */
-function refinedFit(design: OrderedDesign, L: Float64Array, kk: number, m: number, y: Float64Array): RefinedFit | null {
+export function refinedFit(design: OrderedDesign, L: Float64Array, kk: number, m: number, y: Float64Array): RefinedFit | null {
   const n = y.length;
   const r = new Float64Array(n);
   const b = new Float64Array(m);

@@ -26,11 +26,17 @@ export const M_STATISTIC_NAMES = ['MZa', 'MZt', 'MSB', 'MPT'] as const;
 export type MStatisticName = (typeof M_STATISTIC_NAMES)[number];
 
 export function mStatistics(detrended: ArrayLike<number>, regression: AdfRegression, deterministic: GlsDeterministic, cbar: number): MStatistics {
-  const T = detrended.length;
   const { fit, lags, nobs } = regression;
   let lagSum = 0;
   for (let i = 1; i <= lags; i++) lagSum += fit.coefficients[i];
-  const s2AR = fit.ssr / nobs / ((1 - lagSum) * (1 - lagSum));
+  return mStatisticsFrom(detrended, { ssr: fit.ssr, lagSum, nobs }, deterministic, cbar);
+}
+
+/** The same statistics from the regression's residual sum of squares, lag-coefficient sum and rows (however fitted). */
+export function mStatisticsFrom(detrended: ArrayLike<number>, fit: { ssr: number; lagSum: number; nobs: number }, deterministic: GlsDeterministic, cbar: number): MStatistics {
+  const T = detrended.length;
+  const { ssr, lagSum, nobs } = fit;
+  const s2AR = ssr / nobs / ((1 - lagSum) * (1 - lagSum));
   let sum = 0;
   for (let t = 0; t < T - 1; t++) sum += detrended[t] * detrended[t];
   const kappa = sum / (T * T);

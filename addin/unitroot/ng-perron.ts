@@ -14,7 +14,11 @@ import { glsPValue, ngPerronTableCritical, type CriticalLevels } from '../tables
 import { boundNote, GLS_DEFAULT_LAG_RULE, glsWarnings } from './dfgls';
 import { glsCore, type GlsTestOptions } from './gls-core';
 import { unitRootHypotheses } from './hypotheses';
-import { M_STATISTIC_NAMES, mStatistics, type MStatisticName } from './m-statistics';
+import { adfRegression } from './adf-regression';
+import { ADF_GRAM_WORK } from './adf-tau-gram';
+import { M_STATISTIC_NAMES, mStatistics, mStatisticsFrom, type MStatisticName } from './m-statistics';
+import { spectralInputsByGram } from './m-statistics-long';
+import { schwertMaxLag } from './max-lag';
 
 export interface MStatisticAnswer {
   statistic: number;
@@ -35,10 +39,30 @@ const LABELS: Record<MStatisticName, string> = {
   MPT: 'MPT (modified point-optimal)',
 };
 
+/**
+ * The M statistics of the chosen regression. Where its design would be large (rows x columns^2
+ * past ADF_GRAM_WORK, DF-GLS's threshold) they come from its cross products with refinement
+ * (m-statistics-long.ts), else, or where that declines, from the QR fit.
+ */
+function chosenMStatistics(series: ArrayLike<number>, options: GlsTestOptions) {
+  const T = series.length;
+  const widest = typeof options.lags === 'number' ? options.lags : options.maxLags ?? schwertMaxLag(T);
+  if (T * (widest + 1) * (widest + 1) <= ADF_GRAM_WORK) {
+    const core = glsCore(series, options, GLS_DEFAULT_LAG_RULE);
+    return { core, m: mStatistics(core.detrended.values, core.regression, core.deterministic, core.detrended.cbar) };
+  }
+  const core = glsCore(series, options, GLS_DEFAULT_LAG_RULE, 'tau');
+  const { lags, nobs } = core.regression;
+  const fast = nobs * (lags + 1) * (lags + 1) > ADF_GRAM_WORK ? spectralInputsByGram(core.detrended.values, lags) : null;
+  const m = fast
+    ? mStatisticsFrom(core.detrended.values, fast, core.deterministic, core.detrended.cbar)
+    : mStatistics(core.detrended.values, adfRegression(core.detrended.values, lags, 'none'), core.deterministic, core.detrended.cbar);
+  return { core, m };
+}
+
 export function ngPerronTest(series: ArrayLike<number>, options: GlsTestOptions = {}, name = 'the series'): NgPerronResult {
-  const core = glsCore(series, options, GLS_DEFAULT_LAG_RULE);
+  const { core, m } = chosenMStatistics(series, options);
   const { deterministic, regression, choice } = core;
-  const m = mStatistics(core.detrended.values, regression, deterministic, core.detrended.cbar);
   const statistics = Object.fromEntries(M_STATISTIC_NAMES.map((s) => {
     const p = glsPValue(s, deterministic, m[s], null);
     return [s, { statistic: m[s], pValue: p.pValue, pValueBound: p.bound, critical: ngPerronTableCritical(s, deterministic) }];
