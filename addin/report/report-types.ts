@@ -7,6 +7,7 @@
  *
  * The version field changes when a field is renamed or removed; added fields keep it.
  */
+import type { NgPerronSummary } from './ng-perron-summary';
 import type { Deterministic } from '../result';
 import type { JohansenCase } from '../johansen/johansen';
 import type { PairReport } from './pair-types';
@@ -68,6 +69,8 @@ export interface OrderStepSummary {
   kpss: TestSummary;
   /** DF-GLS on the levels (differences 0 only; null on the differences, or with no deterministic terms). */
   gls: TestSummary | null;
+  /** Ng-Perron (MZt heading MZa, MSB, MPT) on the same levels and terms as DF-GLS; shown for comparison, never decides (null where DF-GLS is). */
+  ngPerron: NgPerronSummary | null;
 }
 
 /** One series' order of integration, with the tests behind it. */

@@ -7,8 +7,10 @@ import { toUnitScale } from '../linalg/power-of-two-scale';
 import type { Deterministic } from '../result';
 import { adfTest } from '../unitroot/adf';
 import { dfglsTest } from '../unitroot/dfgls';
+import { ngPerronTest } from '../unitroot/ng-perron';
 import { integrationOrder, type IntegrationOrderResult } from '../unitroot/integration-order';
 import type { SeriesReport } from './report-types';
+import { summariseNgPerron } from './ng-perron-summary';
 import { summariseTest } from './test-summary';
 
 /** Order words for the report: 0, 1, 2, and 3 standing for "above 2". */
@@ -44,7 +46,8 @@ export function chartLine(values: Float64Array, logged: boolean): SeriesReport['
  * The series section of one series. `unitRootTest` names the test that decides the levels step
  * (integration-order.ts); the levels row carries both ADF and DF-GLS whichever decided, so a
  * reader sees the two side by side (the one not deciding is run on the same values with the same
- * terms, exactly as it would run if it decided).
+ * terms, exactly as it would run if it decided). Ng-Perron joins them on the levels with DF-GLS's
+ * detrending terms and lag rule, for comparison only.
  */
 export function seriesSection(name: string, values: Float64Array, options: { alpha: number; deterministic: Deterministic; logged: boolean; unitRootTest?: 'adf' | 'dfgls' }): SeriesReport {
   const decidedBy = options.unitRootTest ?? 'adf';
@@ -68,7 +71,8 @@ export function seriesSection(name: string, values: Float64Array, options: { alp
       .sort((u, v) => u.differences - v.differences)
       .map((s) => {
         const { adf, gls } = levels(s);
-        return { differences: s.differences, adf: summariseTest(adf, options.alpha), kpss: summariseTest(s.kpss, options.alpha), gls: gls && summariseTest(gls, options.alpha) };
+        const ngPerron = gls ? summariseNgPerron(ngPerronTest(values, { deterministic: glsTerms }, name), options.alpha) : null;
+        return { differences: s.differences, adf: summariseTest(adf, options.alpha), kpss: summariseTest(s.kpss, options.alpha), gls: gls && summariseTest(gls, options.alpha), ngPerron };
       }),
     warnings: result.warnings.slice(),
     chart: chartLine(values, options.logged),

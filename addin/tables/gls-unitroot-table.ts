@@ -55,6 +55,9 @@ export function glsCriticalValues(statistic: GlsStatistic, c: GlsCase, T: number
   return { '1%': at(0.01), '5%': at(0.05), '10%': at(0.1) };
 }
 
+/** Where the Ng-Perron critical values come from, and how they were transcribed (the table's own words). */
+export const NG_PERRON_TABLE_SOURCE = `${published.source} ${published.transcribedFrom}`;
+
 /** Ng & Perron (2001), Table 1: asymptotic critical values of an M statistic. */
 export function ngPerronTableCritical(statistic: Exclude<GlsStatistic, 'tau'>, c: GlsCase): CriticalLevels {
   return { ...(published.critical as Record<GlsCase, Record<string, CriticalLevels>>)[c][statistic] };
