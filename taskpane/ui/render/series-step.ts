@@ -2,6 +2,7 @@
 import { el } from '../dom';
 import type { ChoiceKey } from '../views/choices';
 import type { SeriesStepView } from '../views/series-view';
+import type { TestRowView } from '../views/test-row';
 import { chartSlot } from './chart-slot';
 import { choiceControl, testTable, verdictLine, warningsBox } from './parts';
 
@@ -12,7 +13,7 @@ export function renderSeriesStep(view: SeriesStepView, onChoice: (key: ChoiceKey
     verdictLine(item.mark, item.verdict),
     el('details', {}, el('summary', {}, 'The tests behind it'),
       el('p', { class: 'decided-by', 'data-role': 'decided-by' }, item.decidedBy),
-      ...item.tests.map((t) => testTable(t.stage, t.gls ? [t.adf, t.gls, t.kpss] : [t.adf, t.kpss]))),
+      ...item.tests.map((t) => testTable(t.stage, [t.adf, t.gls, t.ngPerron, t.kpss].filter((r): r is TestRowView => r !== null)))),
     warningsBox('Worth knowing', item.warnings)));
   return el('div', { class: 'step-body' },
     el('p', { class: 'headline' }, view.headline),

@@ -1,10 +1,11 @@
 /**
  * The view of "How each series moves": for each series, whether its price wanders (I(1)),
  * keeps returning to a level (I(0)) or is something else, in one sentence from the engine,
- * with the ADF, DF-GLS and KPSS numbers behind it (each with its critical value), which test decided, whether the two tests agree, and its warnings;
+ * with the ADF, DF-GLS, Ng-Perron (for comparison) and KPSS numbers behind it (each with its critical value), which test decided, whether the two tests agree, and its warnings;
  * then the chart of the series rebased to 100 and the deterministic-terms choice.
  */
 import type { DiagnosticReport, SeriesReport } from '../../../addin/report/report-types';
+import type { NgPerronSummary } from '../../../addin/report/ng-perron-summary';
 import type { TestSummary } from '../../../addin/report/test-summary';
 import { showNumber } from './numbers';
 import { cautionsView, type CautionsView } from './cautions-view';
@@ -22,7 +23,7 @@ export interface SeriesItemView {
   verdict: string;
   /** Whether ADF and KPSS tell the same story (the engine's warning says more when not). */
   testsAgree: boolean;
-  tests: { stage: string; adf: TestRowView; kpss: TestRowView; gls: TestRowView | null }[];
+  tests: { stage: string; adf: TestRowView; kpss: TestRowView; gls: TestRowView | null; ngPerron: TestRowView | null }[];
   /** Which test decided the levels, in words. */
   decidedBy: string;
   warnings: string[];
@@ -68,6 +69,30 @@ function unitRootRow(label: string, test: TestSummary, alpha: number): TestRowVi
   return { ...row, note: row.note ? `${critical[0].toUpperCase()}${critical.slice(1)}; ${row.note}` : `${critical[0].toUpperCase()}${critical.slice(1)}.` };
 }
 
+/** The words of one M statistic: its value, where it rejects and what it decided, all from the report. */
+function mStatisticWords(m: NgPerronSummary['statistics'][number], alpha: number): string {
+  const key = `${Math.round(alpha * 1000) / 10}%`;
+  const value = m.critical[key];
+  const decision = m.rejects === null ? 'no decision' : m.rejects ? 'rejects' : 'does not reject';
+  return `${m.name} ${showNumber(m.statistic)}${value === undefined ? '' : ` (rejects below ${showNumber(value)} at ${key})`}: ${decision}`;
+}
+
+/**
+ * The Ng-Perron row: MZt with its critical value, what the test adds (good size when the changes
+ * are autocorrelated), that it is shown for comparison, and MZa, MSB and MPT in its note.
+ */
+export function ngPerronRow(test: NgPerronSummary, alpha: number): TestRowView {
+  const row = unitRootRow('Unit root, sized for short samples (Ng-Perron MZt), shown for comparison', test, alpha);
+  const others = test.statistics.filter((m) => m.name !== test.statisticName).map((m) => mStatisticWords(m, alpha));
+  const lead = row.note ? row.note.replace(/\.$/, '') : '';
+  const parts = [
+    lead,
+    'keeps its stated error rate when the changes are autocorrelated, where ADF and DF-GLS may reject too often; it does not decide the order',
+    `the other forms: ${others.join('; ')}`,
+  ].filter((p) => p !== '');
+  return { ...row, note: `${parts.join('. ')}.` };
+}
+
 /** The view of one series. */
 export function seriesItem(s: SeriesReport, period: string, alpha = 0.05): SeriesItemView {
   return {
@@ -83,6 +108,7 @@ export function seriesItem(s: SeriesReport, period: string, alpha = 0.05): Serie
       stage: stageName(step.differences, period),
       adf: unitRootRow(s.decidedBy === 'adf' || step.differences > 0 ? 'Unit root (ADF), decides' : 'Unit root (ADF)', step.adf, alpha),
       kpss: unitRootRow('Steadiness (KPSS)', step.kpss, alpha),
+      ngPerron: step.ngPerron ? ngPerronRow(step.ngPerron, alpha) : null,
       gls: step.gls ? unitRootRow(s.decidedBy === 'dfgls' ? 'Unit root, more power against a slow return (DF-GLS), decides' : 'Unit root, more power against a slow return (DF-GLS)', step.gls, alpha) : null,
     })),
     warnings: s.warnings.slice(),
