@@ -63,6 +63,8 @@ describe('the HTML report with DF-GLS deciding the orders (--unit-root dfgls)', 
     expect(htmlProblems(page)).toEqual([]);
     expect(page).toContain('<li>Orders of integration decided by DF-GLS on the levels, ADF on the changes.</li>');
     expect(page).toContain('DF-GLS p, levels');
+    expect(page).toContain('Ng-Perron MZt p, levels (comparison)');
+    expect(page).toContain('it is shown for comparison and does not decide the order');
     expect(page).toContain('DF-GLS and KPSS');
   });
 
@@ -73,6 +75,7 @@ describe('the HTML report with DF-GLS deciding the orders (--unit-root dfgls)', 
     const page = readFileSync(out, 'utf8');
     expect(page).toContain('<li>Orders of integration decided by ADF.</li>');
     expect(page).not.toContain('DF-GLS p, levels');
+    expect(page).not.toContain('Ng-Perron MZt');
   });
 });
 

@@ -42,7 +42,7 @@ describe('the terminal report with DF-GLS deciding the orders (--unit-root dfgls
   it('names the test that decided and shows its p-value on the levels beside ADF and KPSS', () => {
     expect(run.code, run.stderr).toBe(0);
     expect(run.stdout).toMatch(/Orders decided by\s+DF-GLS on the levels, ADF on the changes/);
-    expect(run.stdout).toMatch(/series\s+order\s+DF-GLS p, levels\s+ADF p, levels\s+ADF p, changes\s+KPSS p, levels\s+KPSS p, changes\s+DF-GLS and KPSS/);
+    expect(run.stdout).toMatch(/series\s+order\s+DF-GLS p, levels\s+Ng-Perron MZt p, levels \(comparison\)\s+ADF p, levels\s+ADF p, changes\s+KPSS p, levels\s+KPSS p, changes\s+DF-GLS and KPSS/);
     // Each series' row carries the DF-GLS p-value of its levels step, as the JSON report holds it.
     for (const s of json.series) {
       const gls = s.steps.find((x: { differences: number }) => x.differences === 0).gls;
@@ -50,6 +50,10 @@ describe('the terminal report with DF-GLS deciding the orders (--unit-root dfgls
       const row = run.stdout.split('\n').find((l) => l.trim().startsWith(`${s.name} `) && l.includes(s.orderText));
       expect(row, s.name).toBeDefined();
       expect(row?.trim().split(/\s{2,}/)[2]).toBe(formatPValue(gls.pValue, gls.pValueBound));
+      // Ng-Perron's MZt beside it, for comparison, as the JSON report holds it.
+      const mzt = s.steps.find((x: { differences: number }) => x.differences === 0).ngPerron;
+      expect(mzt.statisticName).toBe('MZt');
+      expect(row?.trim().split(/\s{2,}/)[3]).toBe(formatPValue(mzt.pValue, mzt.pValueBound));
     }
   });
 });

@@ -61,7 +61,7 @@ function seriesPart(report: DiagnosticReport): string {
     ? 'Each series as 100 times its value over its first value (for logs, the price ratio), so series in different units share one axis.'
     : 'Each series minus its mean, over its standard deviation (some values are zero or negative, so they cannot be rebased).';
   return `<figure>${chart}${el('figcaption', caption)}</figure>\n${table}\n` +
-    el('p', `ADF${report.settings.unitRootTest === 'dfgls' ? ' and DF-GLS test' : ' tests'} the null of a unit root (the level wanders); KPSS the null of stationarity. An I(1) series wanders in levels and is stationary in changes.`, 'note');
+    el('p', `ADF${report.settings.unitRootTest === 'dfgls' ? ', DF-GLS and Ng-Perron\'s MZt test' : ' tests'} the null of a unit root (the level wanders); KPSS the null of stationarity. An I(1) series wanders in levels and is stationary in changes.${report.settings.unitRootTest === 'dfgls' ? ' MZt keeps its error rate when the changes are autocorrelated; it is shown for comparison and does not decide the order.' : ''}`, 'note');
 }
 
 function systemPart(report: DiagnosticReport): string {

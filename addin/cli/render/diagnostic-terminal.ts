@@ -32,7 +32,7 @@ export function renderDiagnosticTerminal(report: DiagnosticReport, extra: { sour
   for (const f of report.findings) out.push(bullet(f.text, 2, '*'));
 
   const orders = orderTable(report);
-  const nulls = s.unitRootTest === 'dfgls' ? 'DF-GLS and ADF null: unit root' : 'ADF null: unit root';
+  const nulls = s.unitRootTest === 'dfgls' ? 'DF-GLS, Ng-Perron MZt and ADF null: unit root' : 'ADF null: unit root';
   out.push('', `Order of integration (p-values; ${nulls}, KPSS null: stationary)`, '', ...textTable(orders.header, orders.rows, orders.textColumns));
   out.push('', labelled('Orders decided by', orderDecidedBy(report)));
 
