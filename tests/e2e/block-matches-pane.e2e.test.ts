@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { demoRowsAfter } from '../../addin/demo/continuation';
 import type { DiagnosticReport } from '../../addin/report/report-types';
+import { showNumber } from '../../taskpane/ui/views/numbers';
 import { openPreview, shot, type PreviewSession } from './browser';
 
 // The preview as a user sees it in a wide window: the pane at 340 px and the in-memory
@@ -350,6 +351,10 @@ describe('the preview shows the sheet, and the block it gets matches the pane', 
     await page.locator('[data-series="GateGasoil"] details > summary').click();
     expect(await page.locator('[data-series="GateGasoil"] table.tests th', { hasText: 'DF-GLS' }).count()).toBe(1);
     expect(await page.locator('[data-series="GateGasoil"] table.tests tr.note-row').first().textContent()).toMatch(/^Rejects below -\d\.\d+ at 5%/);
+    // Ng-Perron's MZt beside DF-GLS, for comparison: the pane shows the report's number.
+    const mzt = page.locator('[data-series="GateGasoil"] table.tests tr', { hasText: 'Ng-Perron MZt' });
+    expect(await mzt.count()).toBe(1);
+    expect(await mzt.locator('td').first().textContent()).toBe(showNumber(report.series.find((s) => s.name === 'GateGasoil')!.steps[0].ngPerron!.statistic));
     await page.locator('fluent-radio[value="dfgls"]').click();
     await page.waitForSelector('[data-role="progress"]', { state: 'detached', timeout: 60_000 });
     report = await paneReport();
