@@ -84,11 +84,10 @@ function mStatisticWords(m: NgPerronSummary['statistics'][number], alpha: number
 export function ngPerronRow(test: NgPerronSummary, alpha: number): TestRowView {
   const row = unitRootRow('Unit root, sized for short samples (Ng-Perron MZt), shown for comparison', test, alpha);
   const others = test.statistics.filter((m) => m.name !== test.statisticName).map((m) => mStatisticWords(m, alpha));
-  const lead = row.note ? row.note.replace(/\.$/, '') : '';
   const parts = [
-    lead,
-    'keeps its stated error rate when the changes are autocorrelated, where ADF and DF-GLS may reject too often; it does not decide the order',
-    `the other forms: ${others.join('; ')}`,
+    row.note ? row.note.replace(/\.$/, '') : '',
+    'It keeps its stated error rate when the changes are autocorrelated, where ADF and DF-GLS may reject too often; it does not decide the order',
+    `The other forms: ${others.join('; ')}`,
   ].filter((p) => p !== '');
   return { ...row, note: `${parts.join('. ')}.` };
 }
