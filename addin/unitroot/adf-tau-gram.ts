@@ -95,11 +95,12 @@ export function adfTauByGram(x: ArrayLike<number>, lags: number, deterministic: 
 }
 
 /**
- * tau and gamma by Cholesky of the cross products plus refinement from the true residuals
- * (see the file's note); `order` lists the gram's columns with the level last.
+ * The Cholesky factor (row-major k x k, lower) of the gram's cross products with its columns
+ * taken in `order`; null where a pivot keeps no more than REFINE_PIVOT_FLOOR of its column's
+ * sum of squares (the refined route then declines and QR answers).
  */
-function refinedTau(gram: DickeyFullerGram, order: number[]): AdfTauByGram | null {
-  const { k, n } = gram;
+export function orderedCholesky(gram: DickeyFullerGram, order: number[]): Float64Array | null {
+  const { k } = gram;
   const L = new Float64Array(k * k);
   for (let j = 0; j < k; j++) {
     const gj = order[j];
@@ -114,6 +115,17 @@ function refinedTau(gram: DickeyFullerGram, order: number[]): AdfTauByGram | nul
       L[i * k + j] = s / ljj;
     }
   }
+  return L;
+}
+
+/**
+ * tau and gamma by Cholesky of the cross products plus refinement from the true residuals
+ * (see the file's note); `order` lists the gram's columns with the level last.
+ */
+function refinedTau(gram: DickeyFullerGram, order: number[]): AdfTauByGram | null {
+  const { k, n } = gram;
+  const L = orderedCholesky(gram, order);
+  if (L === null) return null;
   const design = new OrderedDesign(gram, order);
   const y = gram.dx.subarray(gram.start, gram.start + n);
   const full = refinedFit(design, L, k, k, y);

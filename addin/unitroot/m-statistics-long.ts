@@ -13,7 +13,7 @@
  * (s2_AR divides by its square); otherwise null, and the caller fits by QR.
  */
 import { dickeyFullerGram } from '../regression/lagged-difference-gram';
-import { OrderedDesign, REFINE_PIVOT_FLOOR, refinedFit } from './adf-tau-gram';
+import { OrderedDesign, orderedCholesky, refinedFit } from './adf-tau-gram';
 
 /** Largest share of |1 - sum b_i| the last refinement step may move it by. */
 const REFINE_SUM_TOLERANCE = 1e-12;
@@ -33,20 +33,8 @@ export function spectralInputsByGram(detrended: ArrayLike<number>, lags: number)
   if (n - k < 1) return null;
   // Gram order is [level, lags 1..k-1]; the ordered design takes the lags first, then the level.
   const order = [...Array.from({ length: k - 1 }, (_, i) => i + 1), 0];
-  const L = new Float64Array(k * k);
-  for (let j = 0; j < k; j++) {
-    const gj = order[j];
-    let d = gram.xtx[gj * k + gj];
-    for (let m = 0; m < j; m++) d -= L[j * k + m] * L[j * k + m];
-    if (!(d > REFINE_PIVOT_FLOOR * gram.xtx[gj * k + gj])) return null;
-    const ljj = Math.sqrt(d);
-    L[j * k + j] = ljj;
-    for (let i = j + 1; i < k; i++) {
-      let s = gram.xtx[order[i] * k + gj];
-      for (let m = 0; m < j; m++) s -= L[i * k + m] * L[j * k + m];
-      L[i * k + j] = s / ljj;
-    }
-  }
+  const L = orderedCholesky(gram, order);
+  if (L === null) return null;
   const design = new OrderedDesign(gram, order);
   const y = gram.dx.subarray(gram.start, gram.start + n);
   const fit = refinedFit(design, L, k, k, y);
