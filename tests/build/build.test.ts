@@ -278,8 +278,9 @@ describe('webpack.config.js', () => {
     const addin = configs.find((c) => c.name === 'addin')!;
     expect(addin.output.path).toBe(join(ROOT, 'dist'));
     expect(addin.output.filename).toBe('[name].js');
-    // The manifest's bundles, plus the preview page's (npm run preview; never named by the manifest).
-    expect(Object.keys(addin.entry).map((name) => `${name}.js`)).toEqual([ADDIN_FILES.functionsScript, 'taskpane.js', 'preview.js']);
+    // The manifest's bundles, plus the preview page's (npm run preview; never named by the manifest)
+    // and MOOR.SCREEN's Web Worker, which functions.js starts by this name beside the page.
+    expect(Object.keys(addin.entry).map((name) => `${name}.js`)).toEqual([ADDIN_FILES.functionsScript, 'taskpane.js', 'preview.js', 'screen-cells-worker.js']);
     expect(addin.entry.functions).toEqual(FUNCTION_SOURCES);
     expect(FUNCTION_SOURCES).toContain(join(ROOT, 'functions', 'functions.ts'));
 
