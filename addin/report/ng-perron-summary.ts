@@ -20,13 +20,15 @@ export interface MStatisticSummary {
   pValue: number | null;
   pValueBound: 'below' | 'above' | null;
   critical: Record<string, number>;
+  /** Ng & Perron (2001), Table 1 (recalled from memory), beside the critical values that decide. */
+  publishedCritical: Record<string, number>;
   rejects: boolean | null;
 }
 
 /** Ng-Perron on the levels: a TestSummary headed by MZt, all four statistics, and where the critical values come from. */
 export interface NgPerronSummary extends TestSummary {
   statistics: MStatisticSummary[];
-  /** The source of the critical values as the table states it (Ng & Perron 2001, Table 1; its values recalled, not read). */
+  /** The source of publishedCritical as the table states it (Ng & Perron 2001, Table 1; its values recalled, not read). */
   criticalSource: string;
   /** Always false: shown for comparison; ADF or DF-GLS decides the order. */
   decides: false;
@@ -52,7 +54,10 @@ export function summariseNgPerron(result: NgPerronResult, alpha: number): NgPerr
     const one = asHeadline(result, name);
     const critical: Record<string, number> = {};
     for (const [level, v] of Object.entries(one.critical)) if (Number.isFinite(v)) critical[level] = v;
-    return { name, statistic: finiteOrNull(one.statistic), pValue: finiteOrNull(one.pValue), pValueBound: one.pValueBound ?? null, critical, rejects: rejects(one, alpha) };
+    return {
+      name, statistic: finiteOrNull(one.statistic), pValue: finiteOrNull(one.pValue), pValueBound: one.pValueBound ?? null,
+      critical, publishedCritical: { ...result.statistics[name].publishedCritical }, rejects: rejects(one, alpha),
+    };
   });
   return { ...summariseTest(asHeadline(result, 'MZt'), alpha), statistics, criticalSource: NG_PERRON_TABLE_SOURCE, decides: false };
 }

@@ -5,12 +5,15 @@
  *
  * The headline is MZa, the statistic Ng & Perron put first and whose size with the modified AIC
  * they found closest to nominal; MZt, MSB and MPT follow as details, each with its p-value and
- * critical values. Critical values: Ng & Perron (2001), Table 1 (asymptotic). p-values: the
- * asymptotic end of Mooring's simulated surfaces (tables/gls-unitroot-table.ts), so that a
- * p-value below 5% and a statistic beyond the 5% value tell the same story.
+ * critical values. p-values and the critical values that decide: the asymptotic end of
+ * Mooring's simulated surfaces (tables/gls-unitroot-table.ts), one distribution for both, so a
+ * p-value below 5% and a statistic beyond the 5% value always tell the same story. Ng & Perron's
+ * (2001) Table 1 (asymptotic, recalled from memory) rides beside them as `publishedCritical`:
+ * five of its recalled values sit off our simulated limits, and a row that showed them while its
+ * p-value came from the simulation could contradict itself.
  */
 import type { ResultDetail, TestResult } from '../result';
-import { glsPValue, ngPerronTableCritical, type CriticalLevels } from '../tables/gls-unitroot-table';
+import { glsCriticalValues, glsPValue, ngPerronTableCritical, type CriticalLevels } from '../tables/gls-unitroot-table';
 import { boundNote, GLS_DEFAULT_LAG_RULE, glsWarnings } from './dfgls';
 import { glsCore, type GlsTestOptions } from './gls-core';
 import { unitRootHypotheses } from './hypotheses';
@@ -24,11 +27,14 @@ export interface MStatisticAnswer {
   statistic: number;
   pValue: number;
   pValueBound: 'below' | 'above' | null;
+  /** From the same simulated distribution as the p-value. */
   critical: CriticalLevels;
+  /** Ng & Perron (2001), Table 1, asymptotic; recalled from memory (tables/README.md). */
+  publishedCritical: CriticalLevels;
 }
 
 export interface NgPerronResult extends TestResult {
-  /** All four statistics with their p-values and Table 1 critical values. */
+  /** All four statistics with their p-values, critical values and Table 1's. */
   statistics: Record<MStatisticName, MStatisticAnswer>;
 }
 
@@ -65,7 +71,7 @@ export function ngPerronTest(series: ArrayLike<number>, options: GlsTestOptions 
   const { deterministic, regression, choice } = core;
   const statistics = Object.fromEntries(M_STATISTIC_NAMES.map((s) => {
     const p = glsPValue(s, deterministic, m[s], null);
-    return [s, { statistic: m[s], pValue: p.pValue, pValueBound: p.bound, critical: ngPerronTableCritical(s, deterministic) }];
+    return [s, { statistic: m[s], pValue: p.pValue, pValueBound: p.bound, critical: glsCriticalValues(s, deterministic, null), publishedCritical: ngPerronTableCritical(s, deterministic) }];
   })) as Record<MStatisticName, MStatisticAnswer>;
   const head = statistics.MZa;
   const { nullHypothesis, alternative } = unitRootHypotheses(name, deterministic);

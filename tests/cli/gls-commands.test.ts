@@ -27,15 +27,16 @@ describe('mooring dfgls and ngperron', () => {
     expect(out.lagRule).toBe('aic');
   });
 
-  it('ngperron: MZa, MZt, MSB, MPT at the top of the JSON, each with its p-value and Table 1 critical values', () => {
+  it('ngperron: MZa, MZt, MSB, MPT at the top of the JSON, each with its p-value, critical values and Table 1\'s', () => {
     const out = json('ngperron', 'p.csv', '--series', 'Calm');
     const engine = ngPerronTest(column('Calm'), {}, 'Calm');
     for (const s of ['MZa', 'MZt', 'MSB', 'MPT'] as const) {
       expect(out[s]).toBe(engine.statistics[s].statistic);
       expect(out.statistics[s].pValue).toBe(engine.statistics[s].pValue);
       expect(out.statistics[s].critical).toEqual(engine.statistics[s].critical);
+      expect(out.statistics[s].publishedCritical).toEqual(engine.statistics[s].publishedCritical);
     }
-    expect(out.statistics.MZa.critical['5%']).toBe(-8.1); // Ng & Perron (2001), Table 1, constant (from memory)
+    expect(out.statistics.MZa.publishedCritical['5%']).toBe(-8.1); // Ng & Perron (2001), Table 1, constant (from memory)
     expect(out.lagRule).toBe('maic');
   });
 

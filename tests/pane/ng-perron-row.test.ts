@@ -3,7 +3,8 @@
  * p-value, its 5% critical value and decision; MZa, MSB and MPT in its note), says it is shown
  * for comparison and what it adds, and never claims to decide. Expected values are the report's
  * own, which tests/report/ng-perron-row.test.ts checks against ngPerronTest; the critical value
- * is Ng & Perron (2001), Table 1 (from memory). Seeded series.
+ * is the one the decision uses (the p-value's simulated distribution), not Table 1's recalled
+ * value. Seeded series.
  */
 import { describe, expect, it } from 'vitest';
 import { diagnose } from '../../addin/report/pairwise-diagnostic';
@@ -36,8 +37,9 @@ describe("the pane's Ng-Perron row", () => {
         expect(row.statistic).toBe(showNumber(np.statistic));
         expect(row.pValue).toBe(showPValue(np.pValue, np.pValueBound));
         expect(row.decision).toBe(np.rejects ? 'rejects' : 'does not reject');
-        // Ng & Perron (2001), Table 1, MZt 5% with a constant: -1.98 (from memory).
-        expect(row.note).toContain(`Rejects below ${showNumber(-1.98)} at 5%`);
+        // The value the decision uses (the p-value's own distribution), not Table 1's recalled -1.98.
+        expect(row.note).toContain(`Rejects below ${showNumber(np.critical['5%'])} at 5%`);
+        expect(np.critical['5%']).not.toBe(np.statistics.find((m) => m.name === 'MZt')!.publishedCritical['5%']);
         expect(row.note).toMatch(/autocorrelated/);
         expect(row.note).toMatch(/does not decide the order/);
         for (const m of np.statistics.filter((x) => x.name !== 'MZt')) {

@@ -2,11 +2,13 @@
  * The report's Ng-Perron row on each series' levels: its numbers are ngPerronTest's, called
  * directly on the same values with the same detrending terms as DF-GLS (to 1e-12), MZt heads it,
  * it never decides the order, and the JSON report carries where the critical values come from
- * (Ng & Perron 2001, Table 1; the table marks its values "from memory"). Seeded series.
+ * (Ng & Perron 2001, Table 1; the table marks its values "from memory"), beside the critical
+ * values that decide (the p-value's own simulated distribution). Seeded series.
  */
 import { describe, expect, it } from 'vitest';
 import { diagnose } from '../../addin/report/pairwise-diagnostic';
 import { SeededRandom } from '../../addin/random';
+import { glsCriticalValues } from '../../addin/tables/gls-unitroot-table';
 import { ngPerronTest } from '../../addin/unitroot/ng-perron';
 import { ar1 } from './seeded-series';
 
@@ -51,13 +53,22 @@ describe("the report's Ng-Perron row", () => {
           for (const m of row.statistics) {
             close(m.statistic, direct.statistics[m.name].statistic);
             expect(m.critical).toEqual(direct.statistics[m.name].critical);
-            // The decision rule of every other test (result.ts rejects): the p-value at 5%.
+            expect(m.publishedCritical).toEqual(direct.statistics[m.name].publishedCritical);
+            // The decision rule of every other test (result.ts rejects): the p-value at 5%; and the
+            // critical value shown tells the same story, being from the p-value's own distribution.
             expect(m.rejects).toBe(direct.statistics[m.name].pValue < 0.05);
+            if (m.statistic !== null && m.pValueBound === null) {
+              // Every M statistic rejects in its lower tail.
+              expect(m.statistic < m.critical['5%'], m.name).toBe(m.rejects);
+            }
           }
           expect(row.statistics.map((m) => m.name)).toEqual(['MZa', 'MZt', 'MSB', 'MPT']);
           expect(row.decides).toBe(false);
           // Ng & Perron (2001), Table 1, MZt 5%: -1.98 (constant), -2.91 (trend), from memory.
-          expect(row.critical['5%']).toBe(deterministic === 'const' ? -1.98 : -2.91);
+          const mzt = row.statistics.find((m) => m.name === 'MZt')!;
+          expect(mzt.publishedCritical['5%']).toBe(deterministic === 'const' ? -1.98 : -2.91);
+          // The deciding value is the simulated limit's (tables/gls-unitroot-simulated.json).
+          expect(row.critical).toEqual({ ...glsCriticalValues('MZt', deterministic === 'const' ? 'const' : 'trend', null) });
           // Only the levels carry it.
           for (const st of s.steps) if (st.differences > 0) expect(st.ngPerron).toBeNull();
         });

@@ -2,6 +2,7 @@ import { Matrix, solve } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { MooringInputError } from '../../addin/errors';
 import { SeededRandom, autoregressive1, randomWalk } from '../../addin/random';
+import { glsCriticalValues } from '../../addin/tables/gls-unitroot-table';
 import { dfglsTest } from '../../addin/unitroot/dfgls';
 import { glsDetrend } from '../../addin/unitroot/gls-detrend';
 import { chooseGlsLags } from '../../addin/unitroot/gls-lag-search';
@@ -147,10 +148,11 @@ describe('properties', () => {
     expect(dfglsTest(walk).pValue!).toBeGreaterThan(0.01);
   });
 
-  it('results carry the lag rule, the GLS details and, for Ng-Perron, all four statistics with Table 1 critical values', () => {
+  it('results carry the lag rule, the GLS details and, for Ng-Perron, all four statistics with their critical values and Table 1\'s', () => {
     const r = ngPerronTest(walk, { deterministic: 'trend' });
     expect(r.lagRule).toBe('maic');
-    expect(r.statistics.MPT.critical['5%']).toBe(5.48);
+    expect(r.statistics.MPT.publishedCritical['5%']).toBe(5.48); // Ng & Perron (2001), Table 1, trend (from memory)
+    expect(r.statistics.MPT.critical).toEqual(glsCriticalValues('MPT', 'trend', null));
     expect(r.details.map((d) => d.key)).toEqual(expect.arrayContaining(['MZt', 'MSB', 'MPT', 'MZtPValue', 'cbar']));
     const g = dfglsTest(walk, { lags: 'bic' });
     expect(g.lagRule).toBe('bic');

@@ -15,8 +15,9 @@ export const ngperronCommand: Command = {
     'Four unit-root statistics of Ng & Perron (2001) on the series detrended by GLS, with the long-run variance from an ' +
       'autoregression whose lags the modified AIC chooses. They keep their size where the errors have a negative ' +
       'moving-average part, which makes adf reject too often, and keep the power of GLS detrending. Small values reject.',
-    'MZa is the headline; all four are given with their p-values and the asymptotic critical values of Ng & Perron ' +
-      '(2001), Table 1.',
+    'MZa is the headline; all four are given with their p-values and the critical values of the same simulated ' +
+      'limits the p-values come from, and in JSON beside them (publishedCritical) the asymptotic values of Ng & Perron ' +
+      '(2001), Table 1, as recalled (not read from the page).',
   ],
   usage: 'mooring ngperron <file.csv> --series NAME [options]',
   options: GLS_OPTIONS,
@@ -31,6 +32,7 @@ export const ngperronCommand: Command = {
       pValue: finite(s[name].pValue),
       pValueBound: s[name].pValueBound,
       critical: s[name].critical,
+      publishedCritical: s[name].publishedCritical,
     });
     return singleTestOutput(input, result, {
       MZa: finite(s.MZa.statistic),
