@@ -14,6 +14,7 @@
  * so residual sums of squares change only by one common factor and t-ratios not at all:
  * the lag choice is the same. The chosen model is refitted by QR on the original data.
  */
+import { lagPairSums } from './lag-pair-sums';
 import { powerOfTwoScale } from '../linalg/power-of-two-scale';
 import type { Deterministic } from '../result';
 
@@ -154,58 +155,7 @@ function condition(v: Float64Array, deterministic: Deterministic): number {
   return scaledRms / f;
 }
 
-/**
- * For j = 0..pmax: out[j] = sum_t dx[t] dx[t - j] and (returned) sum_t level[t] dx[t - j], over
- * t = a..b, each sum taken in row order as a sum of its own (so the doubles are those of one
- * pass per sum); four lags share one pass over the rows.
- */
+/** For j = 0..pmax: out[j] = sum_t dx[t] dx[t - j] and (returned) sum_t level[t] dx[t - j], over t = a..b (lag-pair-sums.ts). */
 function lagSums(dx: Float64Array, level: Float64Array, a: number, b: number, pmax: number, out: Float64Array): Float64Array {
-  const sums = new Float64Array(pmax + 1);
-  let j = 0;
-  for (; j + 3 <= pmax; j += 4) {
-    let d0 = 0;
-    let d1 = 0;
-    let d2 = 0;
-    let d3 = 0;
-    let l0 = 0;
-    let l1 = 0;
-    let l2 = 0;
-    let l3 = 0;
-    for (let t = a; t <= b; t++) {
-      const u = dx[t];
-      const v = level[t];
-      const i = t - j;
-      const c0 = dx[i];
-      const c1 = dx[i - 1];
-      const c2 = dx[i - 2];
-      const c3 = dx[i - 3];
-      d0 += u * c0;
-      d1 += u * c1;
-      d2 += u * c2;
-      d3 += u * c3;
-      l0 += v * c0;
-      l1 += v * c1;
-      l2 += v * c2;
-      l3 += v * c3;
-    }
-    out[j] = d0;
-    out[j + 1] = d1;
-    out[j + 2] = d2;
-    out[j + 3] = d3;
-    sums[j] = l0;
-    sums[j + 1] = l1;
-    sums[j + 2] = l2;
-    sums[j + 3] = l3;
-  }
-  for (; j <= pmax; j++) {
-    let s = 0;
-    let l = 0;
-    for (let t = a; t <= b; t++) {
-      s += dx[t] * dx[t - j];
-      l += level[t] * dx[t - j];
-    }
-    out[j] = s;
-    sums[j] = l;
-  }
-  return sums;
+  return lagPairSums(dx, level, 0, dx, a, b, pmax + 1, out, 0);
 }

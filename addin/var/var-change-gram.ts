@@ -20,6 +20,7 @@
  * the residuals of equation a are those of the data divided by scale_a. Order 0 (the constant
  * alone) has a different response; its cross products, the centred levels', are returned apart.
  */
+import { lagPairSums } from '../regression/lag-pair-sums';
 
 /** Cross products of [1, y_{t-1}, Δy_{t-1}, ..., Δy_{t-M+1}] and the responses Δy_t on rows t = M .. T-1. */
 export interface VarChangeGram {
@@ -176,57 +177,7 @@ function centredChanges(v: Float64Array): Float64Array {
   return d;
 }
 
-/**
- * For j = 0..M-1: out[at + j] = sum_t da[t] db[t-j], and (returned) sum_t ya[t-1] db[t-j], over
- * t = M..T-1, each sum taken in row order. Four lags per pass over the rows.
- */
+/** For j = 0..M-1: out[at + j] = sum_t da[t] db[t-j], and (returned) sum_t ya[t-1] db[t-j], over t = M..T-1 (lag-pair-sums.ts). */
 function lagSums(da: Float64Array, ya: Float64Array, db: Float64Array, M: number, T: number, out: Float64Array, at: number): Float64Array {
-  const level = new Float64Array(M);
-  let j = 0;
-  for (; j + 3 < M; j += 4) {
-    let d0 = 0;
-    let d1 = 0;
-    let d2 = 0;
-    let d3 = 0;
-    let l0 = 0;
-    let l1 = 0;
-    let l2 = 0;
-    let l3 = 0;
-    for (let t = M; t < T; t++) {
-      const u = da[t];
-      const v = ya[t - 1];
-      const i = t - j;
-      const b0 = db[i];
-      const b1 = db[i - 1];
-      const b2 = db[i - 2];
-      const b3 = db[i - 3];
-      d0 += u * b0;
-      d1 += u * b1;
-      d2 += u * b2;
-      d3 += u * b3;
-      l0 += v * b0;
-      l1 += v * b1;
-      l2 += v * b2;
-      l3 += v * b3;
-    }
-    out[at + j] = d0;
-    out[at + j + 1] = d1;
-    out[at + j + 2] = d2;
-    out[at + j + 3] = d3;
-    level[j] = l0;
-    level[j + 1] = l1;
-    level[j + 2] = l2;
-    level[j + 3] = l3;
-  }
-  for (; j < M; j++) {
-    let s = 0;
-    let l = 0;
-    for (let t = M; t < T; t++) {
-      s += da[t] * db[t - j];
-      l += ya[t - 1] * db[t - j];
-    }
-    out[at + j] = s;
-    level[j] = l;
-  }
-  return level;
+  return lagPairSums(da, ya, -1, db, M, T - 1, M, out, at);
 }
